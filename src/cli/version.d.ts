@@ -1,0 +1,2 @@
+/** Set by Vite's `define` from package.json. */
+declare const __APP_VERSION__: string;

@@ -1,0 +1,83 @@
+/**
+ * The member model: one description of a beam-like member, read by
+ * `wetmode member FILE` and built by the app's guided forms.
+ * z runs along the member axis from 0 (root / bottom) to lengthM. SI units throughout.
+ */
+import type { BoundarySpec } from '../section/types';
+
+export type MemberSection =
+  | { shape: 'tube'; outerDiameterM: number; wallThicknessM: number }
+  | { shape: 'rod'; diameterM: number }
+  /** Plate strip bending about its thin axis (motion normal to the plate). */
+  | { shape: 'plate-strip'; widthM: number; thicknessM: number };
+
+export interface MemberSegment {
+  fromM: number;
+  toM: number;
+  section: MemberSection;
+  /** Section at toM for a linear taper; same shape kind as `section`. */
+  endSection?: MemberSection;
+  youngsModulusPa: number;
+  densityKgPerM3: number;
+  poissonRatio?: number;
+  /** Density of the contents of a tube (flooded or filled); 0 or absent = empty/sealed. */
+  contentsDensityKgPerM3?: number;
+  /** Coating or marine growth: adds mass and outer diameter, no stiffness. */
+  coating?: { thicknessM: number; densityKgPerM3: number };
+}
+
+export type SupportKind = 'clamped' | 'pinned' | 'guided' | 'free' | 'spring';
+
+export interface MemberSupport {
+  atM: number;
+  kind: SupportKind;
+  /** For kind 'spring' (either or both). */
+  translationalStiffnessNPerM?: number;
+  rotationalStiffnessNmPerRad?: number;
+}
+
+/** Distributed soil springs (subgrade modulus) over an embedded length. */
+export interface SoilSprings {
+  fromM: number;
+  toM: number;
+  /** Lateral spring stiffness per metre of pile per metre of deflection, N/m². */
+  modulusNPerM2: number;
+}
+
+export interface LumpedMass {
+  atM: number;
+  massKg: number;
+  rotaryInertiaKgM2?: number;
+}
+
+export interface MemberLiquid {
+  densityKgPerM3: number;
+  /** Submerged range along z. */
+  fromM: number;
+  toM: number;
+  /**
+   * Surroundings of the member's section in the liquid (confinement), in section
+   * coordinates with the member's section centred at [0, 0] and moving along x.
+   * Absent = unbounded liquid.
+   */
+  boundaries?: BoundarySpec[];
+  /** Perforation ratio of a plate (0..1): reduces added mass (DNV-RP-H103 §4.6.4.3). */
+  perforationRatio?: number;
+  /** Apply the DNV-RP-H103 Table A-2 3D end-effect reduction for short submerged lengths. Default false. */
+  endEffect3d?: boolean;
+}
+
+export interface MemberModel {
+  lengthM: number;
+  segments: MemberSegment[];
+  liquid?: MemberLiquid;
+  supports: MemberSupport[];
+  soilSprings?: SoilSprings[];
+  masses?: LumpedMass[];
+  /** Axial tension, N (negative = compression). */
+  tensionN?: number;
+  /** Let tension vary with submerged weight along the member (tension given at the top). */
+  tensionVariesWithWeight?: boolean;
+  /** Number of modes wanted (default 5). */
+  modes?: number;
+}

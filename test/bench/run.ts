@@ -1,0 +1,11 @@
+/**
+ * `npm run bench`: runs every test/bench/*.bench.ts in name order. Each exports
+ * `run(): void | Promise<void>` that prints its figures. Benchmarks print; they do not pass or fail.
+ */
+const benches = import.meta.glob<{ run: () => void | Promise<void> }>('./*.bench.ts', { eager: true });
+
+console.log(`Wetmode benchmarks — node ${process.version}, ${new Date().toISOString()}`);
+for (const name of Object.keys(benches).sort()) {
+  console.log(`\n== ${name.replace('./', '')} ==`);
+  await benches[name].run();
+}

@@ -1,0 +1,50 @@
+import { defineConfig } from 'vite';
+import preact from '@preact/preset-vite';
+import { VitePWA } from 'vite-plugin-pwa';
+import pkg from './package.json' with { type: 'json' };
+
+// Colours of the daylight theme: a deep harbour blue on near-white, chosen for contrast in sun.
+const themeColour = '#0b3d5c';
+const backgroundColour = '#f7f9fb';
+
+export default defineConfig({
+  define: {
+    __APP_VERSION__: JSON.stringify(pkg.version),
+  },
+  plugins: [
+    preact(),
+    VitePWA({
+      // The update waits for the user (see src/ui/shell/UpdatePrompt.tsx); the app imports the register module itself.
+      registerType: 'prompt',
+      injectRegister: false,
+      includeAssets: ['icons/wetmode.svg', 'icons/apple-touch-icon.png'],
+      manifest: {
+        name: 'Wetmode — wet and dry natural frequencies',
+        short_name: 'Wetmode',
+        description: 'Field screening of dry and wet natural frequencies of members in liquid, with resonance margins.',
+        theme_color: themeColour,
+        background_color: backgroundColour,
+        display: 'standalone',
+        orientation: 'any',
+        start_url: './',
+        scope: './',
+        icons: [
+          { src: 'icons/wetmode.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' },
+          { src: 'icons/wetmode-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
+          { src: 'icons/wetmode-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
+          { src: 'icons/wetmode-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+        ],
+      },
+      workbox: {
+        // The whole app shell, worker chunks included, so a reload with no signal still works.
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,woff2}'],
+        navigateFallback: 'index.html',
+        cleanupOutdatedCaches: true,
+        maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+      },
+    }),
+  ],
+  worker: { format: 'es' },
+  build: { target: 'es2022', sourcemap: false, outDir: 'dist', emptyOutDir: true },
+  preview: { port: 4173, strictPort: true },
+});
