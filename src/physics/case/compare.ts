@@ -1,0 +1,20 @@
+/**
+ * "Same case" for received links: what the user entered (name, tag, note, kind, units and every value as typed).
+ * Times, the app version and the key result are left out: they change on save or are worked out from the rest.
+ */
+import type { Case, EnteredValues } from './types';
+
+function sameValues(a: EnteredValues, b: EnteredValues): boolean {
+  const ka = Object.keys(a);
+  if (ka.length !== Object.keys(b).length) return false;
+  // Field order does not matter: compare by name.
+  return ka.every((k) => Object.prototype.hasOwnProperty.call(b, k) && a[k] === b[k]);
+}
+
+/** True when two cases hold the same entered content (ids are not compared: the caller decides on identity). */
+export function sameCaseContent(a: Case, b: Case): boolean {
+  return (
+    a.name === b.name && a.tag === b.tag && a.note === b.note && a.kind === b.kind && a.unitSystem === b.unitSystem &&
+    sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation)
+  );
+}

@@ -1,0 +1,65 @@
+/**
+ * deflate-raw (RFC 1951) through the platform's CompressionStream / DecompressionStream
+ * (all current browsers; Node 20 has them globally). Decompression is capped so a crafted link
+ * that expands enormously ("zip bomb") is stopped early.
+ */
+
+export function compressionAvailable(): boolean {
+  return typeof CompressionStream === 'function';
+}
+
+export function decompressionAvailable(): boolean {
+  return typeof DecompressionStream === 'function';
+}
+
+async function readAll(readable: ReadableStream<Uint8Array>, maxBytes: number): Promise<Uint8Array | 'too-large'> {
+  const reader = readable.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > maxBytes) {
+      reader.cancel().catch(() => undefined);
+      return 'too-large';
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
+}
+
+/** Writes `bytes` into a transform stream without leaving a rejected promise unobserved. */
+function feed(writable: WritableStream<BufferSource>, bytes: Uint8Array): void {
+  const writer = writable.getWriter();
+  writer.write(bytes as Uint8Array<ArrayBuffer>).catch(() => undefined);
+  writer.close().catch(() => undefined);
+}
+
+export async function deflateRaw(bytes: Uint8Array): Promise<Uint8Array> {
+  const cs = new CompressionStream('deflate-raw');
+  feed(cs.writable, bytes);
+  const out = await readAll(cs.readable, Number.POSITIVE_INFINITY);
+  return out as Uint8Array;
+}
+
+export type Inflated = { ok: true; bytes: Uint8Array } | { ok: false; reason: 'unsupported' | 'corrupt' | 'too-large' };
+
+/** Never throws: a corrupt or truncated stream is `corrupt`, output beyond `maxBytes` is `too-large`. */
+export async function inflateRaw(bytes: Uint8Array, maxBytes: number): Promise<Inflated> {
+  if (!decompressionAvailable()) return { ok: false, reason: 'unsupported' };
+  try {
+    const ds = new DecompressionStream('deflate-raw');
+    feed(ds.writable, bytes);
+    const out = await readAll(ds.readable, maxBytes);
+    return out === 'too-large' ? { ok: false, reason: 'too-large' } : { ok: true, bytes: out };
+  } catch {
+    return { ok: false, reason: 'corrupt' };
+  }
+}

@@ -1,0 +1,37 @@
+/**
+ * The case as it travels in a link ("wire form", case schema 1): a JSON array by position rather than an object,
+ * which keeps about 80 characters of field names out of every link.
+ *
+ *   [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion]
+ *
+ * Left out: `format` (implied by the link) and `keyResult` (the receiving app works the results out again, from
+ * its own physics). The id travels so a received case can be recognised as one already saved.
+ * A future case schema gets its own layout, told apart by the first element.
+ */
+import { CASE_FORMAT, NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../physics/case';
+
+export const WIRE_LENGTH_V1 = 12;
+
+export function caseToWire(c: Case): unknown[] {
+  return [c.schemaVersion, c.id, c.name, c.tag, c.note, c.kind, c.unitSystem, c.inputs, c.excitation, c.createdAt, c.updatedAt, c.appVersion];
+}
+
+/** What a case looks like after a trip through a link: the same, less `keyResult`. */
+export function linkView(c: Case): Case {
+  const { keyResult: _dropped, ...rest } = c;
+  return rest;
+}
+
+/** Wire form back to a case, through parseCase. Never throws. */
+export function wireToCase(wire: unknown): ParseCaseResult {
+  if (!Array.isArray(wire) || wire.length === 0) {
+    return { ok: false, message: 'it does not hold a case in the form Wetmode writes' };
+  }
+  const version = wire[0];
+  if (typeof version === 'number' && Number.isInteger(version) && version > 1) return { ok: false, message: NEWER_VERSION_MESSAGE };
+  if (version !== 1 || wire.length !== WIRE_LENGTH_V1) {
+    return { ok: false, message: 'it does not hold a case in the form Wetmode writes' };
+  }
+  const [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion] = wire;
+  return parseCase({ format: CASE_FORMAT, schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion });
+}

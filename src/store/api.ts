@@ -1,0 +1,99 @@
+/**
+ * The store's public API (what `openStore` resolves to). Every method resolves — it never rejects — to a
+ * `StoreResult`: `{ ok: true, value }`, or `{ ok: false, kind, message }` with a message to show as it is.
+ * Every case read back goes through `parseCase`; cases handed in are checked by it before they are written.
+ */
+import type { Case } from '../physics/case';
+import type { StoreResult } from './errors';
+import type { PersistenceAnswer, QuotaEstimate, StorageLike } from './persistence';
+
+/** A stored record that did not pass `parseCase`: reported in the list, never dropped or overwritten. */
+export interface UnreadableRecord {
+  /** Its database key (the case id when it had one), as text. */
+  key: string;
+  message: string;
+}
+
+export interface CaseList {
+  /** Readable cases, most recently changed first. */
+  cases: Case[];
+  unreadable: UnreadableRecord[];
+}
+
+/** Opaque token from `deleteCase`; pass it to `undoDelete`. Valid for `TRASH_DAYS`, across reloads. */
+export type UndoToken = string;
+
+/** `findSameCase` answer for a received case. */
+export type SameCaseAnswer =
+  /** No saved case has this id. */
+  | { status: 'new' }
+  /** A saved case has this id and the same entered content (see `sameCaseContent`). */
+  | { status: 'same'; saved: Case }
+  /** A saved case has this id but different content; `saved` is null when that record is unreadable. */
+  | { status: 'changed'; saved: Case | null };
+
+/** `saveReceived` outcome. Nothing saved is ever overwritten. */
+export type ReceivedOutcome =
+  /** Already saved, unchanged: nothing written; `case` is the saved one. */
+  | { status: 'same'; case: Case }
+  /** Saved under its own id (no case had it). */
+  | { status: 'saved'; case: Case }
+  /** A different case had its id: saved as a copy with a new id and a name like "Pile B7 (received 2026-12-01)". */
+  | { status: 'saved-copy'; case: Case };
+
+/** A draft as loaded: the case being edited and when it was written. */
+export interface Draft {
+  case: Case;
+  savedAt: string;
+}
+
+export interface CaseStore {
+  /** All cases, newest change first, plus any record that cannot be read (reported, not dropped). */
+  listCases(): Promise<StoreResult<CaseList>>;
+  /** One case; 'not-found' or 'unreadable' otherwise. */
+  getCase(id: string): Promise<StoreResult<Case>>;
+  /** Creates or replaces the case with this id; sets updatedAt to now and appVersion to this build. Returns what was written. */
+  saveCase(c: Case): Promise<StoreResult<Case>>;
+  /** A copy with a new id, the given name and new times. */
+  duplicateCase(id: string, newName: string): Promise<StoreResult<Case>>;
+  /** Renames; updatedAt becomes now. */
+  renameCase(id: string, newName: string): Promise<StoreResult<Case>>;
+  /** Moves the case to the undo store; the token brings it back. */
+  deleteCase(id: string): Promise<StoreResult<UndoToken>>;
+  /**
+   * Restores a deleted case. If its id has been taken since (a received link), it comes back as a copy
+   * with a new id and " (restored)" added to its name, so nothing is overwritten. Resolves to the restored
+   * case, or to null when the deleted record was one that could not be read (it is back in the list as unreadable).
+   */
+  undoDelete(token: UndoToken): Promise<StoreResult<Case | null>>;
+  /** Keeps the case being edited (one draft at a time). Call it on every change, debounced (about 0.5 s). */
+  saveDraft(draft: Case): Promise<StoreResult<Draft>>;
+  /** The draft, or null when there is none; 'unreadable' if it cannot be read (then `clearDraft`). */
+  loadDraft(): Promise<StoreResult<Draft | null>>;
+  clearDraft(): Promise<StoreResult<void>>;
+  /** For a received link: is this case new here, already saved unchanged, or a changed version of a saved one? */
+  findSameCase(c: Case): Promise<StoreResult<SameCaseAnswer>>;
+  /** Saves a received case without ever overwriting (see `ReceivedOutcome`). One transaction. */
+  saveReceived(c: Case): Promise<StoreResult<ReceivedOutcome>>;
+  /** `navigator.storage.persist()` where present. */
+  requestPersistence(): Promise<PersistenceAnswer>;
+  /** `navigator.storage.estimate()` where present. */
+  estimateQuota(): Promise<QuotaEstimate>;
+  /** Closes the connection; later calls answer 'closed'. */
+  close(): void;
+}
+
+export interface StoreOptions {
+  /** Database name; default "wetmode". */
+  dbName?: string;
+  /** Clock; default `() => new Date()`. */
+  now?: () => Date;
+  /** Id maker; default `newCaseId` (random UUID). */
+  newId?: () => string;
+  /** Stamped on saved cases; default this build's version. */
+  appVersion?: string;
+  /** Default `navigator.storage`; null to act as if missing. */
+  storage?: StorageLike | null;
+  /** Called once if the connection closes under us (newer version in another tab, browser closed it): prompt a reload. */
+  onClose?: () => void;
+}

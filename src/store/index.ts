@@ -1,0 +1,21 @@
+/**
+ * The device store (IndexedDB through idb). Start with `openStore()`; every method resolves to a `StoreResult`.
+ *
+ * ```ts
+ * const opened = await openStore();
+ * if (!opened.ok) showMessage(opened.message);          // kind: 'unavailable' | 'blocked' | 'newer-database' | 'failed'
+ * else {
+ *   const store = opened.value;
+ *   const list = await store.listCases();               // { cases, unreadable }
+ *   const saved = await store.saveCase(editedCase);     // updatedAt set to now
+ *   const del = await store.deleteCase(id);             // then: store.undoDelete(del.value)
+ * }
+ * ```
+ */
+export type { CaseList, CaseStore, Draft, ReceivedOutcome, SameCaseAnswer, StoreOptions, UndoToken, UnreadableRecord } from './api';
+export { openStore } from './case-store';
+export { DB_NAME, DB_VERSION, TRASH_DAYS } from './db-schema';
+export type { StoreError, StoreErrorKind, StoreResult } from './errors';
+export { searchCases, sortCases, type CaseSort } from './list-view';
+export { APP_VERSION, newCase, newCaseId } from './new-case';
+export { estimateQuota, requestPersistence, type PersistenceAnswer, type QuotaEstimate, type StorageLike } from './persistence';
