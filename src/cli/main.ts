@@ -4,6 +4,9 @@
  */
 import { readInput } from './read-input';
 import { cautionLines } from '../text/cautions';
+import { runCaseCommand } from './case-command';
+import { runMemberCommand } from './member-command';
+import { runSectionCommand } from './section-command';
 
 interface Subcommand {
   summary: string;
@@ -11,7 +14,11 @@ interface Subcommand {
   run: (inputText: string) => string;
 }
 
-const SUBCOMMANDS: Record<string, Subcommand> = {};
+const SUBCOMMANDS: Record<string, Subcommand> = {
+  member: { usage: 'member FILE', summary: 'dry and wet modes of a member model (SI JSON)', run: runMemberCommand },
+  section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
+  case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
+};
 
 function help(): string {
   const lines = [

@@ -19,6 +19,7 @@ export interface MemberSegment {
   endSection?: MemberSection;
   youngsModulusPa: number;
   densityKgPerM3: number;
+  /** Poisson's ratio (default 0.3): plate-strip rigidity and, for the Timoshenko option, shear modulus. */
   poissonRatio?: number;
   /** Density of the contents of a tube (flooded or filled); 0 or absent = empty/sealed. */
   contentsDensityKgPerM3?: number;
@@ -80,4 +81,23 @@ export interface MemberModel {
   tensionVariesWithWeight?: boolean;
   /** Number of modes wanted (default 5). */
   modes?: number;
+  /**
+   * Beam theory: 'euler-bernoulli' (default) or 'timoshenko' (shear deformation and rotary inertia,
+   * for stubby members with length / depth below about 10).
+   */
+  beamTheory?: 'euler-bernoulli' | 'timoshenko';
+  /** Mesh refinement controls; the defaults suit field use. */
+  mesh?: MeshOptions;
+}
+
+/** How the finite-element mesh is chosen and refined. */
+export interface MeshOptions {
+  /** Elements of the first mesh (default max(12, 3 × modes)); every interval between mesh points gets at least one. */
+  initialElements?: number;
+  /** Stop doubling when every requested mode changes by less than this fraction (default 5e-4 = 0.05 %). */
+  relativeTolerance?: number;
+  /** Stop doubling beyond this many elements (default 3200); the result then says it did not converge. */
+  maxElements?: number;
+  /** false: solve on the first mesh only, no refinement (convergence studies, tests). Default true. */
+  refine?: boolean;
 }

@@ -33,3 +33,105 @@ export interface SectionInput {
   /** Panels per body at the fine resolution; the solver picks a sensible default. */
   panelsPerBody?: number;
 }
+
+// ---------------------------------------------------------------------------
+// Solver options and results (added by the section solver; input types above are unchanged).
+// ---------------------------------------------------------------------------
+
+export interface SolveOptions {
+  /** Nominal panels per body at the finest resolution (overrides `SectionInput.panelsPerBody`), 16–4096. Default 128; thin bodies get up to twice as many. */
+  panelsPerBody?: number;
+  /** Run the kinetic-energy cross-check on a field grid (slower: ~0.1 s for one body). Default false. */
+  energyCheck?: boolean;
+  /** Cells across the liquid region for the energy cross-check. Default 96. */
+  energyGridCells?: number;
+  /** Skip the coarser (N/2, N/4) solves and the error estimate. Default false. */
+  skipErrorEstimate?: boolean;
+}
+
+/** Why a solve could not produce numbers; the message says it in words. */
+export type SectionFailure = 'singular-system' | 'not-positive-semidefinite' | 'non-finite-result';
+
+/** Degree of freedom of a body, in the order used by the added-mass matrix. */
+export type SectionDof = 'x' | 'y' | 'rotation';
+
+export interface BodyResult {
+  /** Index of the body in the input. */
+  index: number;
+  /** Reference point for rotation, m (centerM, or the area centroid of a polygon). */
+  referencePointM: [number, number];
+  /** Wetted cross-section area, m² (the part on the liquid side of straight boundaries). */
+  wettedAreaM2: number;
+  /** Liquid density × wetted area, kg/m. */
+  displacedMassKgPerM: number;
+  /** Diagonal added mass per metre: x, y (kg/m), rotation (kg·m²/m). */
+  addedMassX: number;
+  addedMassY: number;
+  addedInertiaRotation: number;
+  /** Ca for x motion: addedMassX / (ρ π aX²), aX = half the wetted extent along y (across the motion). */
+  caX: number;
+  /** Ca for y motion: addedMassY / (ρ π aY²), aY = half the wetted extent along x. */
+  caY: number;
+  /** The half-extents used for the reference areas, m. */
+  referenceHalfWidthXM: number;
+  referenceHalfWidthYM: number;
+  /** Added mass over displaced liquid mass for x and y motion. */
+  addedToDisplacedX: number;
+  addedToDisplacedY: number;
+  /** Motions the body cannot make without opening a gap at a wall it rests on (net flux through the contact). */
+  blockedDofs: SectionDof[];
+  /** Panels on this body's wetted outline at the fine resolution. */
+  panels: number;
+}
+
+/** Discretisation error estimate of one diagonal term from two resolutions. */
+export interface ErrorEstimate {
+  /** Row/column in the added-mass matrix. */
+  dof: number;
+  body: number;
+  motion: SectionDof;
+  fine: number;
+  coarse: number;
+  /** Richardson-extrapolated value using `order`. */
+  extrapolated: number;
+  /** Order used: observed from the N/4, N/2 and N values, bounded to [1, 2] (1 if not monotone). */
+  order: number;
+  /** Estimated absolute error of the reported (fine) value: |fine − extrapolated|. */
+  absoluteError: number;
+  /** absoluteError / |fine|. */
+  relativeError: number;
+}
+
+/** Kinetic-energy cross-check of one diagonal term: m_jj = ρ ∫ |∇φ_j|² dA over the liquid (unit velocity). */
+export interface EnergyCheck {
+  dof: number;
+  body: number;
+  motion: SectionDof;
+  /** Value from the boundary integral (the reported added mass). */
+  boundaryIntegral: number;
+  /** ρ ∫|∇φ|² over the liquid on the field grid, including the far-field tail. */
+  fieldIntegral: number;
+  /** Part of fieldIntegral from the far-field tail beyond the grid (0 in a closed region). */
+  tail: number;
+  /** (fieldIntegral − boundaryIntegral) / boundaryIntegral. */
+  relativeDifference: number;
+}
+
+export interface SectionResult {
+  /** 3K×3K added-mass matrix per metre, symmetrised; rows/cols body by body [x, y, rotation]. */
+  addedMass: number[][];
+  /** max |m_ij − m_ji| / max |m_ii| before symmetrising. */
+  asymmetry: number;
+  bodies: BodyResult[];
+  errorEstimates: ErrorEstimate[];
+  energyChecks: EnergyCheck[];
+  /** Panel counts at the finest (N) and the N/2 resolution (all boundaries). */
+  panelsFine: number;
+  panelsCoarse: number;
+  /** How the straight boundaries were treated and other method notes. */
+  notes: string[];
+}
+
+export type SectionOutcome =
+  | { ok: true; result: SectionResult }
+  | { ok: false; reason: SectionFailure; message: string };

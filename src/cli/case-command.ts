@@ -1,0 +1,56 @@
+/**
+ * `wetmode case FILE`: a saved or exported case file (our `.wetmode.json`), read through the same forms as
+ * the app (units as typed), solved dry and wet, screened for resonance. Prints one JSON object: the case
+ * name and tag, the member model used, frequencies, the verdict with every check, and the cautions.
+ */
+import { caseFromFileText } from '../share';
+import { readCase } from '../forms/read-case';
+import { solveCase } from '../worker/solve-case';
+import { cautionLines } from '../text/cautions';
+import { toJson } from './json-out';
+
+function fieldMessages(errors: Record<string, string>): string {
+  return Object.entries(errors)
+    .map(([k, m]) => `${k}: ${m}`)
+    .join('; ');
+}
+
+export function runCaseCommand(inputText: string): string {
+  const parsed = caseFromFileText(inputText);
+  if (!parsed.ok) throw new Error(parsed.message);
+  const c = parsed.value;
+  const reading = readCase(c);
+  if (!reading.ok) throw new Error(`the case "${c.name || c.id}" has inputs that do not read: ${fieldMessages(reading.errors)}`);
+  const answer = solveCase({ op: 'case', model: reading.build.model, excitation: reading.excitation }, () => 0);
+  const cautions = cautionLines();
+  const head = { case: { id: c.id, name: c.name, tag: c.tag, kind: c.kind, unitSystem: c.unitSystem, updatedAt: c.updatedAt } };
+  if (!answer.ok) return toJson({ ok: false, ...head, reason: answer.reason, message: answer.message, cautions });
+  const m = answer.member;
+  return toJson({
+    ok: true,
+    ...head,
+    units: 'SI: m, kg, s, N, Hz',
+    dry: { frequenciesHz: m.dry.frequenciesHz, periodsS: m.dry.periodsS },
+    wet: m.wet ? { frequenciesHz: m.wet.frequenciesHz, periodsS: m.wet.periodsS } : null,
+    wetToDryRatio: m.wetToDryRatio,
+    zones: m.zones,
+    resonance: answer.screening
+      ? {
+          verdict: answer.screening.verdict,
+          driver: answer.screening.driver,
+          checks: answer.screening.modes.flatMap((mode) =>
+            mode.checks.map((k) => ({ mode: mode.modeIndex + 1, excitation: k.label, verdict: k.verdict, marginPercent: k.marginPercent, criticalSpeedMPerS: k.criticalSpeedMPerS, source: k.source })),
+          ),
+          limits: answer.screening.limits,
+          damping: answer.screening.damping,
+          notes: answer.screening.notes,
+        }
+      : null,
+    resonanceNotRunBecause: answer.screening ? null : (answer.screeningError ?? (fieldMessages(reading.excitationErrors) || 'no resonance inputs')),
+    model: reading.build.model,
+    modelNotes: reading.build.notes,
+    warnings: m.warnings,
+    mesh: m.mesh,
+    cautions,
+  });
+}

@@ -1,0 +1,21 @@
+/** Readings shared by several forms: material, model options and the tube-wall check. */
+import type { BeamTheoryChoice } from '../physics/members';
+import type { Reader } from './read';
+
+/** Material and model options common to every kind's SI input. */
+export function commonInput(r: Reader): { youngsModulusPa: number; materialDensityKgPerM3: number; endEffect3d: boolean; beamTheory: BeamTheoryChoice } {
+  return {
+    youngsModulusPa: r.num('youngsModulus'),
+    materialDensityKgPerM3: r.num('materialDensity'),
+    endEffect3d: r.choice('endEffect3d') === 'yes',
+    beamTheory: r.choice('beamTheory') as BeamTheoryChoice,
+  };
+}
+
+/** Outer diameter and wall of a tube, with "wall thickness must be less than half the outer diameter (305 mm)". */
+export function tubeInput(r: Reader, err: (key: string, message: string) => void): { outerDiameterM: number; wallThicknessM: number } {
+  const d = r.num('outerDiameter');
+  const t = r.num('wallThickness');
+  if (!(t < d / 2)) err('wallThickness', `wall thickness must be less than half the outer diameter (${r.fmt('wallThickness', d / 2)})`);
+  return { outerDiameterM: d, wallThicknessM: t };
+}

@@ -1,0 +1,91 @@
+/**
+ * Turns a kind's field list and its mapping into a MemberForm: defaults per system, reading with per-field
+ * and cross-field messages, building, and converting values between unit systems.
+ */
+import type { MemberBuild, MemberInputs, MemberKind } from '../physics/members';
+import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
+import { fieldUnit, makeReader, type Reader, readFields } from './read';
+import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm } from './types';
+
+export interface FormSpec<K extends MemberKind> {
+  kind: K;
+  title: string;
+  summary: string;
+  fields: readonly FieldDef[];
+  /**
+   * Checks fields against each other (report with `err(fieldKey, message)`, in the user's units through
+   * `r.fmt`) and assembles the SI input. Return null when something was reported.
+   */
+  toInput(r: Reader, err: (key: string, message: string) => void): MemberInputs[K] | null;
+  /** The physics-side validator, run last as a safety net (its messages use SI field names). */
+  validate(input: MemberInputs[K]): unknown;
+  buildModel(input: MemberInputs[K]): MemberBuild;
+}
+
+/**
+ * Re-expresses values typed for one unit system in the other's field units, as plain numbers with as few
+ * figures as keep each value to one part in a million (so toggling back returns what was typed, for values of
+ * up to five figures). Choices, empty texts and texts that do not parse are left as they are, so nothing the
+ * user typed is lost; keys that are not fields are kept.
+ */
+export function convertFieldValues(fields: readonly FieldDef[], values: FieldValues, from: UnitSystem, to: UnitSystem): FieldValues {
+  const out: FieldValues = { ...values };
+  if (from === to) return out;
+  for (const field of fields) {
+    const text = values[field.key];
+    if (field.type === 'choice' || text === undefined || text.trim() === '') continue;
+    const opts = { dimension: field.dimension, unit: fieldUnit(field, from) };
+    const target = fieldUnit(field, to);
+    if (field.type === 'quantity') {
+      const r = parseQuantity(text, opts);
+      if (r.ok) out[field.key] = formatForEntry(r.valueSI, target);
+    } else {
+      const r = parseQuantityList(text, opts);
+      if (r.ok) out[field.key] = r.valuesSI.map((v) => formatForEntry(v, target)).join(', ');
+    }
+  }
+  return out;
+}
+
+export function defineForm<K extends MemberKind>(spec: FormSpec<K>): MemberForm<K> {
+  const { fields } = spec;
+  const keys = new Set<string>();
+  for (const f of fields) {
+    if (keys.has(f.key)) throw new RangeError(`${spec.kind} form: field keys must be unique, got "${f.key}" twice`);
+    keys.add(f.key);
+  }
+  const form: MemberForm<K> = {
+    kind: spec.kind,
+    title: spec.title,
+    summary: spec.summary,
+    fields,
+    defaults(system) {
+      const si: FieldValues = Object.fromEntries(fields.map((f) => [f.key, f.default]));
+      return convertFieldValues(fields, si, 'si', system);
+    },
+    toInput(values, system) {
+      const { read, errors } = readFields(fields, values, system);
+      if (Object.keys(errors).length > 0) return { ok: false, errors };
+      const cross: FieldErrors = {};
+      const input = spec.toInput(makeReader(fields, read, system), (key, message) => {
+        cross[key] ??= message;
+      });
+      if (Object.keys(cross).length > 0 || input === null) return { ok: false, errors: cross };
+      try {
+        spec.validate(input);
+      } catch (e) {
+        return { ok: false, errors: { [FORM_ERROR_KEY]: e instanceof Error ? e.message : String(e) } };
+      }
+      return { ok: true, input };
+    },
+    buildModel: spec.buildModel,
+    build(values, system) {
+      const r = form.toInput(values, system);
+      return r.ok ? { ok: true, input: r.input, build: spec.buildModel(r.input) } : r;
+    },
+    convertValues(values, from, to) {
+      return convertFieldValues(fields, values, from, to);
+    },
+  };
+  return form;
+}

@@ -1,0 +1,135 @@
+/**
+ * Presets and field builders shared by the forms: materials, contents, liquid density and the common
+ * length fields. Sources of default values are stated in the help text the surveyor sees.
+ */
+import type { Bound, Choice, ChoiceField, FieldDef, QuantityField } from './types';
+
+export const POSITIVE: Bound = { valueSI: 0, inclusive: false };
+export const NON_NEGATIVE: Bound = { valueSI: 0, inclusive: true };
+
+/** A density: kg/m³ in SI, lb/ft³ in US units. */
+export function densityField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
+  return { key, label, type: 'quantity', dimension: 'density', units: { si: 'kg/m^3', us: 'lb/ft^3' }, default: def, min: NON_NEGATIVE, ...extra };
+}
+
+/** Common inputs of Wetmode's check values §6 (carbon steel; stainless 316); ν = 0.3 for both (common practice). */
+export const MATERIAL_CHOICES: readonly Choice[] = [
+  {
+    value: 'carbon-steel',
+    label: 'Carbon steel',
+    help: 'E = 210 GPa, density 7850 kg/m³, Poisson 0.3 (common inputs; US practice often takes E = 200 to 207 GPa).',
+    presets: { youngsModulus: 210e9, materialDensity: 7850, poissonRatio: 0.3 },
+  },
+  {
+    value: 'stainless-316',
+    label: 'Stainless steel 316',
+    help: 'E = 193 GPa, density 8000 kg/m³, Poisson 0.3 (common inputs).',
+    presets: { youngsModulus: 193e9, materialDensity: 8000, poissonRatio: 0.3 },
+  },
+  { value: 'other', label: 'Other', help: 'Enter the modulus and density under More.' },
+];
+
+/** Material choice plus its modulus, density (and Poisson's ratio for plates), taken from the preset when left empty. */
+export function materialFields(defaultMaterial: 'carbon-steel' | 'stainless-316', options: { advanced?: boolean; poisson?: boolean } = {}): FieldDef[] {
+  const fields: FieldDef[] = [
+    { key: 'material', label: 'Material', type: 'choice', choices: MATERIAL_CHOICES, default: defaultMaterial, advanced: options.advanced },
+    {
+      key: 'youngsModulus',
+      label: "Young's modulus",
+      type: 'quantity',
+      dimension: 'modulus',
+      units: { si: 'GPa', us: 'ksi' },
+      default: '',
+      optional: true,
+      emptyMeans: 'from the material',
+      presetFrom: 'material',
+      min: POSITIVE,
+      advanced: true,
+    },
+    densityField('materialDensity', 'Material density', '', { optional: true, emptyMeans: 'from the material', presetFrom: 'material', min: POSITIVE, advanced: true }),
+  ];
+  if (options.poisson) {
+    fields.push({
+      key: 'poissonRatio',
+      label: "Poisson's ratio",
+      type: 'quantity',
+      dimension: 'ratio',
+      units: { si: '', us: '' },
+      default: '',
+      optional: true,
+      emptyMeans: 'from the material',
+      presetFrom: 'material',
+      min: NON_NEGATIVE,
+      max: { valueSI: 0.5, inclusive: false },
+      advanced: true,
+    });
+  }
+  return fields;
+}
+
+/**
+ * Riser contents. Gas: ρ = pM/(ZRT) (classical) gives about 80 to 130 kg/m³ for natural gas at 100 to 150 bar
+ * and 15 °C; 100 is a round middle value (our estimate). Oil 850 (crude oils 800 to 950, common practice).
+ * Water 1000, seawater 1025 (check values §6). Drilling mud 1500, middle of 1200 to 2000 (design notes): enter the
+ * actual mud weight.
+ */
+export const CONTENTS_CHOICES: readonly Choice[] = [
+  { value: 'empty', label: 'Empty (air)', presets: { contentsDensity: 0 } },
+  { value: 'gas', label: 'Gas', help: 'About 80 to 130 kg/m³ at 100 to 150 bar (ideal-gas estimate); 100 used.', presets: { contentsDensity: 100 } },
+  { value: 'oil', label: 'Oil', help: 'Crude oil 800 to 950 kg/m³ (common practice); 850 used.', presets: { contentsDensity: 850 } },
+  { value: 'water', label: 'Fresh water', presets: { contentsDensity: 1000 } },
+  { value: 'seawater', label: 'Seawater', presets: { contentsDensity: 1025 } },
+  { value: 'mud', label: 'Drilling mud', help: '1200 to 2000 kg/m³; 1500 used unless you enter the mud weight.', presets: { contentsDensity: 1500 } },
+  { value: 'other', label: 'Other', help: 'Enter the contents density.' },
+];
+
+/** Density of the liquid around the member. */
+export function liquidDensityField(defaultKgPerM3: number, help: string): QuantityField {
+  return densityField('liquidDensity', 'Liquid density', String(defaultKgPerM3), { min: POSITIVE, help });
+}
+
+export const SEAWATER_HELP = 'Seawater 1025 kg/m³, fresh water 1000 kg/m³ (common inputs).';
+
+/** A size across the member: mm in SI, inches in US units. */
+export function sizeField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
+  return { key, label, type: 'quantity', dimension: 'length', units: { si: 'mm', us: 'in' }, default: def, min: POSITIVE, ...extra };
+}
+
+/** A length or height along the member: m in SI, feet in US units. */
+export function heightField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
+  return { key, label, type: 'quantity', dimension: 'length', units: { si: 'm', us: 'ft' }, default: def, ...extra };
+}
+
+export function yesNoField(key: string, label: string, def: 'yes' | 'no', extra: Partial<ChoiceField> = {}): ChoiceField {
+  return {
+    key,
+    label,
+    type: 'choice',
+    choices: [
+      { value: 'no', label: 'No' },
+      { value: 'yes', label: 'Yes' },
+    ],
+    default: def,
+    ...extra,
+  };
+}
+
+/** Beam theory: automatic (shear included when length / depth < 10, design notes §3), or chosen. */
+export const BEAM_THEORY_FIELD: ChoiceField = {
+  key: 'beamTheory',
+  label: 'Beam theory',
+  type: 'choice',
+  choices: [
+    { value: 'auto', label: 'Automatic', help: 'Includes shear deformation when the member is stubby (length under 10 × its depth).' },
+    { value: 'euler-bernoulli', label: 'Slender beam (Euler–Bernoulli)' },
+    { value: 'timoshenko', label: 'With shear (Timoshenko)' },
+  ],
+  default: 'auto',
+  advanced: true,
+};
+
+/** The beam engine's optional 3D end-effect reduction of added mass. */
+export const END_EFFECT_FIELD: ChoiceField = yesNoField('endEffect3d', '3D end effect on added mass', 'no', {
+  advanced: true,
+  help: 'Reduce the added mass of a short submerged length (DNV-RP-H103 Table A-2, from memory). Off: two-dimensional strip theory.',
+});

@@ -1,0 +1,146 @@
+/**
+ * Added mass per metre on the submerged part of the member (strip theory).
+ * Unbounded liquid uses closed forms: a circle (tube or rod, diameter including coating) m_a = ρ π D²/4,
+ * Ca = 1; a flat plate of width w moving normal to itself m_a = ρ π (w/2)², Ca = 1 (H. Lamb, Hydrodynamics,
+ * classical; plate thickness neglected). Confined sections (liquid.boundaries given) go to the 2D section
+ * solver, once per distinct section within one solve. Contents move with the member and take none.
+ */
+import type { MemberModel, MemberSegment } from './model';
+import { cylinderEndEffectFactor, END_EFFECT_SOURCE, PERFORATION_SOURCE, perforationFactor, plateEndEffectFactor } from './reductions';
+import { type SectionSolver, sectionInput } from './section-bridge';
+import { sectionAt } from './section-props';
+
+export type AddedMassMethod = 'circle closed form (Lamb)' | 'flat plate closed form (Lamb)' | 'section solver';
+
+/** Added mass of one segment: m_a(t) = Ca(t) · ρ · π (w_outer(t)/2)² · endEffect, t = fraction along it. */
+export interface SegmentAddedMass {
+  method: AddedMassMethod;
+  /** 2D coefficient on the reference area π (w_outer/2)² at the segment's ends, perforation included. */
+  caStart: number;
+  caEnd: number;
+  perforationFactor: number;
+}
+
+export interface EndEffectUsed {
+  factor: number;
+  basis: 'circular cylinder' | 'rectangular plate';
+  submergedLengthM: number;
+  /** Mean outer diameter (cylinder) or plate width over the submerged length, m. */
+  widthM: number;
+  source: string;
+}
+
+export interface AddedMassPlan {
+  densityKgPerM3: number;
+  /** Per segment; null where the segment is entirely out of the liquid. */
+  segments: (SegmentAddedMass | null)[];
+  endEffect: EndEffectUsed | null;
+  perforation: { ratio: number; factor: number; source: string } | null;
+  /** Distinct section-solver calls made for this plan. */
+  sectionSolves: number;
+  warnings: string[];
+}
+
+export type AddedMassPlanOutcome = { ok: true; plan: AddedMassPlan } | { ok: false; reason: 'section-solver-failed'; message: string };
+
+/** Cache of section-solver coefficients by input, shared across the mesh levels of one solve. */
+export type SectionCache = Map<string, number>;
+
+export function addedMassPerM(plan: AddedMassPlan, seg: MemberSegment, segIndex: number, t: number): number {
+  const s = plan.segments[segIndex];
+  if (!s) return 0;
+  const ca = s.caStart + (s.caEnd - s.caStart) * t;
+  const factor = plan.endEffect ? plan.endEffect.factor : 1;
+  return ca * plan.densityKgPerM3 * sectionAt(seg, t).referenceAreaM2 * factor;
+}
+
+export function planAddedMass(model: MemberModel, solver: SectionSolver | undefined, cache: SectionCache): AddedMassPlanOutcome {
+  const liq = model.liquid!;
+  const rho = liq.densityKgPerM3;
+  const boundaries = liq.boundaries ?? [];
+  const confined = boundaries.length > 0;
+  const p = liq.perforationRatio ?? 0;
+  const warnings: string[] = [];
+  const segments: (SegmentAddedMass | null)[] = [];
+  let solves = 0;
+  let anyPlate = false;
+  for (let i = 0; i < model.segments.length; i++) {
+    const seg = model.segments[i];
+    if (!(seg.toM > liq.fromM && seg.fromM < liq.toM)) {
+      segments.push(null);
+      continue;
+    }
+    const plate = seg.section.shape === 'plate-strip';
+    anyPlate ||= plate;
+    const perf = plate ? perforationFactor(p) : 1;
+    if (!confined) {
+      segments.push({ method: plate ? 'flat plate closed form (Lamb)' : 'circle closed form (Lamb)', caStart: perf, caEnd: perf, perforationFactor: perf });
+      continue;
+    }
+    if (!solver) {
+      return { ok: false, reason: 'section-solver-failed', message: 'liquid.boundaries needs the section solver, which is not available' };
+    }
+    const coat = seg.coating?.thicknessM ?? 0;
+    const cas: number[] = [];
+    for (const [t, section] of [[0, seg.section], [1, seg.endSection ?? seg.section]] as const) {
+      const input = sectionInput(section, coat, rho, boundaries);
+      const key = JSON.stringify(input);
+      let ca = cache.get(key);
+      if (ca === undefined) {
+        const out = solver(input);
+        solves++;
+        if (!out.ok) {
+          return { ok: false, reason: 'section-solver-failed', message: `added mass of segments[${i}] in its surroundings: ${out.message}` };
+        }
+        ca = out.result.addedMass[0][0] / (rho * sectionAt(seg, t).referenceAreaM2);
+        if (!(Number.isFinite(ca) && ca > 0)) {
+          return { ok: false, reason: 'section-solver-failed', message: `section solver gave a non-positive added mass for segments[${i}]` };
+        }
+        cache.set(key, ca);
+      }
+      cas.push(ca * perf);
+    }
+    segments.push({ method: 'section solver', caStart: cas[0], caEnd: cas[1], perforationFactor: perf });
+  }
+  if (p > 0 && !anyPlate) warnings.push('liquid.perforationRatio applies to plate strips only; it was not used for this member.');
+  const perforation = anyPlate && p > 0 ? { ratio: p, factor: perforationFactor(p), source: PERFORATION_SOURCE } : null;
+  if (perforation) {
+    warnings.push('Perforation reduces the added mass only; the plate mass and stiffness are those of a solid plate.');
+  }
+  const plan: AddedMassPlan = { densityKgPerM3: rho, segments, endEffect: null, perforation, sectionSolves: solves, warnings };
+  if (liq.endEffect3d) plan.endEffect = endEffect(model, warnings);
+  return { ok: true, plan };
+}
+
+/** DNV-RP-H103 Table A-2 factor for the whole submerged length (one shape kind only). */
+function endEffect(model: MemberModel, warnings: string[]): EndEffectUsed | null {
+  const liq = model.liquid!;
+  const from = Math.max(0, liq.fromM);
+  const to = Math.min(model.lengthM, liq.toM);
+  const length = to - from;
+  let widthIntegral = 0;
+  const kinds = new Set<string>();
+  for (const seg of model.segments) {
+    const a = Math.max(from, seg.fromM);
+    const b = Math.min(to, seg.toM);
+    if (b <= a) continue;
+    kinds.add(seg.section.shape === 'plate-strip' ? 'plate' : 'circle');
+    // Width is linear in z within a segment: the midpoint value is its mean.
+    const tMid = (0.5 * (a + b) - seg.fromM) / (seg.toM - seg.fromM);
+    widthIntegral += sectionAt(seg, tMid).outerWidthM * (b - a);
+  }
+  if (kinds.size !== 1) {
+    warnings.push('3D end-effect reduction not applied: the submerged length mixes plate strips and round sections.');
+    return null;
+  }
+  const width = widthIntegral / length;
+  const plate = kinds.has('plate');
+  if (!plate && length / width < 1.2) {
+    warnings.push('Submerged length/diameter is below 1.2, the end of the end-effect table: its first value (0.62) was used.');
+  }
+  if ((liq.boundaries ?? []).length > 0) {
+    warnings.push('The 3D end-effect reduction is tabulated for a body in open liquid; it was applied to a confined section as well.');
+  }
+  const factor = plate ? plateEndEffectFactor(length, width) : cylinderEndEffectFactor(length / width);
+  return { factor, basis: plate ? 'rectangular plate' : 'circular cylinder', submergedLengthM: length, widthM: width, source: END_EFFECT_SOURCE };
+}

@@ -1,0 +1,42 @@
+/** Plain-language warnings about the limits of the model for a given member. */
+import type { AddedMassPlan } from './added-mass';
+import type { MemberModel } from './model';
+import { sectionAt } from './section-props';
+
+/** Largest section depth in the direction of motion (tube/rod: diameter; plate strip: thickness), m. */
+export function maxDepthM(model: MemberModel): number {
+  let d = 0;
+  for (const s of model.segments) d = Math.max(d, sectionAt(s, 0).depthM, sectionAt(s, 1).depthM);
+  return d;
+}
+
+export function memberWarnings(model: MemberModel, plan: AddedMassPlan | null, converged: boolean, elements: number, tol: number): string[] {
+  const out: string[] = [];
+  const slender = model.lengthM / maxDepthM(model);
+  if (slender < 10 && model.beamTheory !== 'timoshenko') {
+    out.push(
+      `Length / section depth is ${slender.toPrecision(3)}, below 10: shear deformation and rotary inertia, ` +
+        'which Euler–Bernoulli beam theory leaves out, lower the true frequencies (most for the higher modes); ' +
+        'set beamTheory to "timoshenko" to include them.',
+    );
+  }
+  if (!converged) {
+    out.push(`Mesh refinement stopped at ${elements} elements before every mode changed by less than ${(100 * tol).toPrecision(2)} %.`);
+  }
+  for (const seg of model.segments) {
+    const s = seg.section;
+    if (plan && s.shape === 'plate-strip' && s.widthM / s.thicknessM < 20) {
+      out.push(
+        `Plate width / thickness is ${(s.widthM / s.thicknessM).toPrecision(3)}: the thin-plate added mass ρπ(w/2)² ` +
+          'neglects thickness (a rectangle of aspect 10 has Ca ≈ 1.14, DNV-RP-H103 Table A-1, from memory).',
+      );
+      break;
+    }
+  }
+  if ((model.tensionN ?? 0) < 0 || model.tensionVariesWithWeight) {
+    const t = model.tensionN ?? 0;
+    if (t < 0) out.push('Axial compression lowers the frequencies; near the buckling load they fall towards zero.');
+  }
+  if (plan) out.push(...plan.warnings);
+  return out;
+}

@@ -1,0 +1,61 @@
+import { describe, it, expect } from 'vitest';
+import { FORMS } from '../../src/forms';
+import { excitationDefaults, readExcitation, convertExcitationValues } from '../../src/forms/excitation';
+
+function pileBuild() {
+  const r = FORMS.pile.build(FORMS.pile.defaults('si'), 'si');
+  if (!r.ok) throw new Error(JSON.stringify(r.errors));
+  return r.build;
+}
+
+describe('resonance inputs form', () => {
+  it('defaults read for every member kind', () => {
+    for (const kind of ['pile', 'riser', 'baffle', 'stem'] as const) {
+      const b = FORMS[kind].build(FORMS[kind].defaults('si'), 'si');
+      if (!b.ok) throw new Error(kind);
+      const r = readExcitation(kind, excitationDefaults(kind, 'si'), 'si', b.build);
+      expect(r.ok, kind).toBe(true);
+    }
+  });
+
+  it('a current profile runs from the bed at the bottom of the liquid to the surface at its top', () => {
+    const build = pileBuild();
+    const r = readExcitation('pile', { currentSurface: '1.2', currentMid: '0.9', currentBed: '0.3' }, 'si', build);
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    const liquid = build.model.liquid!;
+    expect(r.excitation.flowSpeedMPerS).toEqual([
+      { zM: liquid.fromM, speedMPerS: 0.3 },
+      { zM: 0.5 * (liquid.fromM + liquid.toM), speedMPerS: 0.9 },
+      { zM: liquid.toM, speedMPerS: 1.2 },
+    ]);
+  });
+
+  it('a shaft speed typed in rpm reaches the screening in rpm, with blades for blade pass', () => {
+    const r = readExcitation('pile', { currentSurface: '0', machineSpeed: '1450', bladeCount: '5' }, 'si', pileBuild());
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.excitation.machinery?.[0].shaftSpeedRpm).toBeCloseTo(1450, 9);
+    expect(r.excitation.machinery?.[0].bladeCount).toBe(5);
+  });
+
+  it('one wave period without the other says what is missing', () => {
+    const r = readExcitation('pile', { currentSurface: '0.5', wavePeriodMin: '4' }, 'si', pileBuild());
+    expect(r).toEqual({ ok: false, errors: { wavePeriodMax: 'give both wave periods, or neither for no wave check' } });
+  });
+
+  it('wave periods in the wrong order are refused in the user’s words', () => {
+    const r = readExcitation('pile', { currentSurface: '0.5', wavePeriodMin: '12', wavePeriodMax: '4' }, 'si', pileBuild());
+    expect(r).toEqual({ ok: false, errors: { wavePeriodMax: 'longest wave period must be at least the shortest (12 s)' } });
+  });
+
+  it('a fractional blade count and a wrong unit are refused', () => {
+    const r = readExcitation('pile', { currentSurface: '0.5', machineSpeed: '900', bladeCount: '4.5' }, 'si', pileBuild());
+    expect(r.ok).toBe(false);
+    const u = readExcitation('pile', { currentSurface: '5 kg' }, 'si', pileBuild());
+    expect(u.ok ? '' : u.errors.currentSurface).toMatch(/expected a speed/);
+  });
+
+  it('toggling to US units re-expresses speeds in ft/s (1 m/s = 3.28084 ft/s, exact definition of the foot)', () => {
+    const us = convertExcitationValues('pile', { currentSurface: '1' }, 'si', 'us');
+    expect(Number(us.currentSurface)).toBeCloseTo(3.28084, 5);
+  });
+});
