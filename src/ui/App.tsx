@@ -6,6 +6,9 @@ import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
 import { Placeholder } from './screens/Placeholder';
+import { MemberScreen } from './member/MemberScreen';
+import { AppServicesProvider } from './state/context';
+import { useBoot } from './state/use-boot';
 import type { Route } from './shell/router';
 
 function Screen({ route }: { route: Route }) {
@@ -18,11 +21,7 @@ function Screen({ route }: { route: Route }) {
         </Placeholder>
       );
     case 'member':
-      return (
-        <Placeholder title="Member">
-          <p>Guided forms for a pile, a riser or conductor, a tank baffle and a sensor stem will be here.</p>
-        </Placeholder>
-      );
+      return <MemberScreen />;
     case 'results':
       return (
         <Placeholder title="Results">
@@ -54,6 +53,7 @@ function Screen({ route }: { route: Route }) {
 
 export function App() {
   const route = useRoute();
+  const services = useBoot(route.screen === 'open');
   const [theme, setTheme] = useState<Theme>(loadTheme);
   useEffect(() => applyTheme(theme), [theme]);
   useEffect(() => {
@@ -67,7 +67,9 @@ export function App() {
       <NavBar current={route.screen} theme={theme} onTheme={setTheme} />
       <CautionLine />
       <main id="main" tabIndex={-1}>
-        <Screen route={route} />
+        <AppServicesProvider value={services}>
+          <Screen route={route} />
+        </AppServicesProvider>
       </main>
       <UpdatePrompt />
     </div>

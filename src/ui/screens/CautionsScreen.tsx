@@ -4,7 +4,7 @@ import { CAUTIONS } from '../../text/cautions';
 export function CautionsScreen() {
   return (
     <section class="screen" aria-labelledby="screen-title">
-      <h1 id="screen-title">Cautions</h1>
+      <h1 id="screen-title" tabIndex={-1}>Cautions</h1>
       <p class="lead">Read these before you rely on any number from Wetmode.</p>
       <ol class="cautions">
         {CAUTIONS.map((c) => (

@@ -4,7 +4,7 @@ import type { ComponentChildren } from 'preact';
 export function Placeholder({ title, children }: { title: string; children: ComponentChildren }) {
   return (
     <section class="screen" aria-labelledby="screen-title">
-      <h1 id="screen-title">{title}</h1>
+      <h1 id="screen-title" tabIndex={-1}>{title}</h1>
       <div class="panel notice">{children}</div>
     </section>
   );

@@ -1,0 +1,89 @@
+import { FORMS, placeholderOf } from '../../forms';
+import { excitationFields } from '../../forms/excitation';
+import { formatQuantity } from '../../units';
+import { useModel } from '../state/context';
+import { MemberPlot } from '../plots/MemberPlot';
+import { hashFor } from '../shell/router';
+import { CaseDetails } from './CaseDetails';
+import { FieldList } from './FieldList';
+import { MemberToolbar } from './MemberToolbar';
+import { QuickResults } from './QuickResults';
+
+/** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
+export function MemberScreen() {
+  const [state, model] = useModel();
+  const doc = state.doc;
+  if (!doc) {
+    return (
+      <section class="screen" aria-labelledby="screen-title">
+        <h1 id="screen-title" tabIndex={-1}>Member</h1>
+        <div class="panel notice">
+          <p>No case is open. Start a new one or open a saved case from <a href={hashFor('cases')}>Cases</a>.</p>
+        </div>
+      </section>
+    );
+  }
+  const form = FORMS[doc.kind];
+  const stale = !model.resultsCurrent();
+  const build = state.results?.build;
+  const lengthUnit = doc.unitSystem === 'si' ? 'm' : 'ft';
+  const received = state.mode === 'received';
+  return (
+    <section class="screen member-screen" aria-labelledby="screen-title">
+      <h1 id="screen-title" tabIndex={-1}>{form.title}</h1>
+      <p class="lead">{form.summary}</p>
+      {received && <p class="panel notice">This is a received case. Save it to your cases (on the Results screen) before changing it.</p>}
+      <MemberToolbar state={state} model={model} />
+      <div class="member-layout">
+        <div class="member-form">
+          <fieldset disabled={received}>
+            <legend>Member</legend>
+            <FieldList
+              fields={form.fields}
+              values={doc.inputs}
+              system={doc.unitSystem}
+              errors={state.errors}
+              placeholderOf={(k) => placeholderOf(form, k, doc.inputs, doc.unitSystem)}
+              onInput={(k, t) => model.setField(k, t)}
+              idPrefix="m"
+              moreLabel="More member details"
+            />
+          </fieldset>
+          <fieldset disabled={received}>
+            <legend>What can drive it</legend>
+            <FieldList
+              fields={excitationFields(doc.kind)}
+              values={doc.excitation}
+              system={doc.unitSystem}
+              errors={state.excitationErrors}
+              placeholderOf={(k) => excitationFields(doc.kind).find((f) => f.key === k)?.emptyMeans ?? ''}
+              onInput={(k, t) => model.setExcitation(k, t)}
+              idPrefix="x"
+              moreLabel="More resonance settings"
+            />
+          </fieldset>
+          <fieldset disabled={received}>
+            <legend>Case</legend>
+            <CaseDetails doc={doc} model={model} readOnly={received} />
+          </fieldset>
+        </div>
+        <aside class="member-side">
+          <QuickResults state={state} stale={stale} />
+          {build && (
+            <figure class={`panel schematic${stale ? ' stale' : ''}`}>
+              <MemberPlot model={build.model} landmarks={build.landmarks} title={`${form.title} schematic, to scale`} widthPx={280} heightPx={380} />
+              <figcaption>
+                To scale along the member. z = 0 at the {build.origin}.
+                <ul class="landmarks">
+                  {build.landmarks.map((l) => (
+                    <li key={`${l.id}-${l.label}`}>{l.label}: {formatQuantity(l.zM, lengthUnit)}</li>
+                  ))}
+                </ul>
+              </figcaption>
+            </figure>
+          )}
+        </aside>
+      </div>
+    </section>
+  );
+}

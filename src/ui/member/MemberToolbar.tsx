@@ -1,0 +1,44 @@
+import { useState } from 'preact/hooks';
+import { FORMS, type UnitSystem } from '../../forms';
+import { convertExcitationValues } from '../../forms/excitation';
+import type { AppModel, ModelState } from '../state/app-model';
+import { useServices } from '../state/context';
+import { saveOpenCase } from '../state/save';
+
+/** Unit system toggle and Save, with what happened in words. */
+export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
+  const { store } = useServices();
+  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const doc = state.doc!;
+  const setSystem = (to: UnitSystem) => {
+    if (to === doc.unitSystem) return;
+    model.edit((d) => ({
+      ...d,
+      unitSystem: to,
+      inputs: FORMS[d.kind].convertValues(d.inputs, d.unitSystem, to),
+      excitation: convertExcitationValues(d.kind, d.excitation, d.unitSystem, to),
+    }));
+  };
+  const save = async () => {
+    const r = await saveOpenCase(model, store);
+    setMessage({ ok: r.ok, text: r.message });
+  };
+  const unsaved = model.unsaved();
+  return (
+    <div class="toolbar">
+      <div class="segmented" role="group" aria-label="Units">
+        {(['si', 'us'] as const).map((s) => (
+          <button key={s} type="button" class="btn" aria-pressed={doc.unitSystem === s} onClick={() => setSystem(s)}>
+            {s === 'si' ? 'SI units' : 'US units'}
+          </button>
+        ))}
+      </div>
+      <button type="button" class="btn primary" onClick={save} disabled={state.mode !== 'editing'}>
+        Save case
+      </button>
+      <span class="save-state" data-testid="save-state">{unsaved ? 'Unsaved changes (kept as a draft)' : 'Saved on this device'}</span>
+      <p class={message?.ok === false ? 'status error' : 'status'} role="status" aria-live="polite">{message?.text ?? ''}</p>
+      {state.storageMessage && <p class="status error" role="alert">{state.storageMessage}</p>}
+    </div>
+  );
+}

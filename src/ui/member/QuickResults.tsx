@@ -1,0 +1,42 @@
+import type { ModelState } from '../state/app-model';
+import { formatHz } from '../format/numbers';
+import { VerdictBadge } from '../results/VerdictBadge';
+import { hashFor } from '../shell/router';
+
+/** The answer beside the form: lowest dry and wet frequency and the verdict, marked when out of date. */
+export function QuickResults({ state, stale }: { state: ModelState; stale: boolean }) {
+  const a = state.results?.answer;
+  const errorCount = Object.keys(state.errors).length;
+  return (
+    <section class={`panel quick${stale ? ' stale' : ''}`} aria-labelledby="quick-title" aria-live="polite">
+      <h2 id="quick-title">Answer</h2>
+      {stale && (
+        <p class="stale-note" data-testid="stale-note">
+          <span aria-hidden="true">⟳ </span>
+          {errorCount > 0 ? `Out of date: fix ${errorCount === 1 ? 'the field' : `${errorCount} fields`} marked ✖` : 'Updating…'}
+        </p>
+      )}
+      {!a && !stale && <p>Fill in the member to see its frequencies.</p>}
+      {a && !a.ok && <p class="field-error" data-testid="solve-failure">{a.message}</p>}
+      {a && a.ok && (
+        <dl class="quick-figures">
+          <div>
+            <dt>Lowest dry frequency</dt>
+            <dd data-testid="quick-dry">{formatHz(a.member.dry.frequenciesHz[0])}</dd>
+          </div>
+          {a.member.wet && (
+            <div>
+              <dt>Lowest wet frequency</dt>
+              <dd data-testid="quick-wet">{formatHz(a.member.wet.frequenciesHz[0])}</dd>
+            </div>
+          )}
+          <div>
+            <dt>Resonance</dt>
+            <dd data-testid="quick-verdict">{a.screening ? <VerdictBadge verdict={a.screening.verdict} /> : 'not screened: see the resonance inputs'}</dd>
+          </div>
+        </dl>
+      )}
+      <a class="btn" href={hashFor('results')}>All results</a>
+    </section>
+  );
+}

@@ -1,0 +1,188 @@
+/**
+ * The open case and everything derived from it: field messages, the last results and whether they are
+ * out of date. One small observable object; screens subscribe through `useModel`.
+ *
+ * Flow: an edit changes `doc` → the case is read at once (units, checks) → if readable, a solve is asked of
+ * the worker (latest request wins) → results arrive and are kept with the reading they belong to. A form that
+ * does not read keeps the last good results on screen, marked out of date. Every edit of an editable case is
+ * saved as a draft shortly after, so closing the tab, an update or a crash loses nothing.
+ */
+import type { Case, KeyResult } from '../../physics/case';
+import { sameCaseContent } from '../../physics/case';
+import type { MemberBuild } from '../../physics/members';
+import type { FieldErrors } from '../../forms';
+import { readCase } from '../../forms/read-case';
+import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
+import type { Answer } from '../../worker/solver-client';
+
+export type CaseMode = 'editing' | 'received';
+
+export interface Results {
+  answer: CaseAnswer;
+  build: MemberBuild;
+  /** Content key of the case these results were computed for. */
+  forKey: string;
+}
+
+export interface ModelState {
+  doc: Case | null;
+  mode: CaseMode;
+  /** Content key of the case as last saved on the device (null: not saved yet). */
+  savedKey: string | null;
+  errors: FieldErrors;
+  excitationErrors: FieldErrors;
+  results: Results | null;
+  computing: boolean;
+  /** A solver problem in words (timeout, crash), if any. */
+  solverMessage: string | null;
+  /** Draft or save problem in words, if any. */
+  storageMessage: string | null;
+}
+
+export interface Solver {
+  request(req: CaseRequest): Promise<Answer<CaseAnswer>>;
+}
+
+export interface DraftSink {
+  saveDraft(c: Case): Promise<{ ok: boolean; message?: string }>;
+}
+
+/** What decides the results: the member and resonance inputs and the unit system (not name, tag or note). */
+export function contentKey(c: Case): string {
+  return JSON.stringify([c.kind, c.unitSystem, c.inputs, c.excitation]);
+}
+
+/** The figures kept with a saved case for the Cases list. */
+export function keyResultOf(results: Results | null): KeyResult | undefined {
+  const a = results?.answer;
+  if (!a || !a.ok) return undefined;
+  const f = (a.member.wet ?? a.member.dry).frequenciesHz[0];
+  return { lowestWetFrequencyHz: f > 0 && Number.isFinite(f) ? f : undefined, verdict: a.screening?.verdict };
+}
+
+export class AppModel {
+  private state: ModelState = {
+    doc: null,
+    mode: 'editing',
+    savedKey: null,
+    errors: {},
+    excitationErrors: {},
+    results: null,
+    computing: false,
+    solverMessage: null,
+    storageMessage: null,
+  };
+  private listeners = new Set<() => void>();
+  private draftTimer: ReturnType<typeof setTimeout> | null = null;
+  private savedDoc: Case | null = null;
+
+  constructor(
+    private readonly solver: Solver,
+    private drafts: DraftSink | null = null,
+    private readonly draftDelayMs = 400,
+  ) {}
+
+  get(): ModelState {
+    return this.state;
+  }
+
+  subscribe(fn: () => void): () => void {
+    this.listeners.add(fn);
+    return () => this.listeners.delete(fn);
+  }
+
+  setDraftSink(sink: DraftSink | null): void {
+    this.drafts = sink;
+  }
+
+  private set(patch: Partial<ModelState>): void {
+    this.state = { ...this.state, ...patch };
+    for (const fn of this.listeners) fn();
+  }
+
+  /** Opens a case: `saved` says whether this exact content is already on the device. */
+  open(doc: Case, mode: CaseMode, saved: boolean): void {
+    this.savedDoc = saved ? doc : null;
+    this.set({ doc, mode, savedKey: saved ? contentKey(doc) : null, results: null, solverMessage: null, storageMessage: null });
+    this.recompute();
+  }
+
+  /** True when the open case has changes not saved as a case (name, note and inputs all count). */
+  unsaved(): boolean {
+    const { doc } = this.state;
+    return !!doc && (!this.savedDoc || !sameCaseContent(doc, this.savedDoc));
+  }
+
+  markSaved(doc: Case): void {
+    this.savedDoc = doc;
+    this.set({ doc, savedKey: contentKey(doc), mode: 'editing' });
+  }
+
+  /** Applies an edit to the open case; a received case becomes editable only through saving. */
+  edit(change: (doc: Case) => Case): void {
+    const { doc } = this.state;
+    if (!doc) return;
+    const next = { ...change(doc), updatedAt: new Date().toISOString() };
+    const inputsChanged = contentKey(next) !== contentKey(doc);
+    this.set({ doc: next });
+    if (inputsChanged) this.recompute();
+    this.scheduleDraft();
+  }
+
+  setField(key: string, text: string): void {
+    this.edit((d) => ({ ...d, inputs: { ...d.inputs, [key]: text } }));
+  }
+
+  setExcitation(key: string, text: string): void {
+    this.edit((d) => ({ ...d, excitation: { ...d.excitation, [key]: text } }));
+  }
+
+  /** Whether the results on screen belong to the inputs on screen. */
+  resultsCurrent(): boolean {
+    const { doc, results, computing } = this.state;
+    return !!doc && !!results && !computing && results.forKey === contentKey(doc);
+  }
+
+  /** Saves the draft now (before an app update, or when the page is hidden). */
+  async flushDraft(): Promise<void> {
+    if (this.draftTimer !== null) clearTimeout(this.draftTimer);
+    this.draftTimer = null;
+    const { doc, mode } = this.state;
+    if (!doc || mode !== 'editing' || !this.drafts) return;
+    const r = await this.drafts.saveDraft(doc);
+    if (!r.ok) this.set({ storageMessage: `Draft not saved: ${r.message ?? 'storage refused it'}` });
+    else if (this.state.storageMessage?.startsWith('Draft not saved')) this.set({ storageMessage: null });
+  }
+
+  private scheduleDraft(): void {
+    if (this.state.mode !== 'editing' || !this.drafts) return;
+    if (this.draftTimer !== null) clearTimeout(this.draftTimer);
+    this.draftTimer = setTimeout(() => void this.flushDraft(), this.draftDelayMs);
+  }
+
+  private recompute(): void {
+    const { doc } = this.state;
+    if (!doc) return;
+    const reading = readCase(doc);
+    this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors });
+    if (!reading.ok) return; // last good results stay, marked out of date
+    const key = contentKey(doc);
+    const build = reading.build;
+    this.set({ computing: true });
+    void this.solver.request({ op: 'case', model: build.model, excitation: reading.excitation }).then((ans) => {
+      if (ans.status === 'superseded') return;
+      if (ans.status === 'done') {
+        const current = this.state.doc && contentKey(this.state.doc) === key;
+        this.set({ results: { answer: ans.value, build, forKey: key }, computing: !current, solverMessage: null });
+      } else {
+        this.set({
+          computing: false,
+          solverMessage:
+            ans.status === 'timeout'
+              ? `The solver took longer than ${Math.round(ans.afterMs / 1000)} s and was stopped. Check the inputs for extreme values.`
+              : `The solver stopped unexpectedly (${ans.message}). Your inputs are kept; change a value to try again.`,
+        });
+      }
+    });
+  }
+}

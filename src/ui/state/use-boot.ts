@@ -1,0 +1,44 @@
+import { useEffect, useState } from 'preact/hooks';
+import { onBeforeUpdate } from '../shell/before-update';
+import type { AppServices } from './context';
+import { createModel, firstCase, openDeviceStore } from './services';
+
+/**
+ * Creates the services once, opens the device store, and opens the first case (draft, or the demo on a
+ * fresh device) unless the page was opened from a shared link. Drafts are flushed before an app update and
+ * whenever the page is hidden (tablet switched off, app switched away).
+ */
+export function useBoot(openingLink: boolean): AppServices & { ready: boolean } {
+  const [services, setServices] = useState<AppServices & { ready: boolean }>(() => ({ model: createModel(), store: null, storeMessage: null, ready: false }));
+  useEffect(() => {
+    let cancelled = false;
+    const { model } = services;
+    void (async () => {
+      const opened = await openDeviceStore();
+      if (cancelled) return;
+      if (opened.store) model.setDraftSink({ saveDraft: async (c) => {
+        const r = await opened.store.saveDraft(c);
+        return r.ok ? { ok: true } : { ok: false, message: r.message };
+      } });
+      if (!openingLink && !model.get().doc) {
+        const first = await firstCase(opened.store);
+        if (first && !cancelled) model.open(first.doc, 'editing', first.saved);
+      }
+      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, ready: true });
+    })();
+    const offUpdate = onBeforeUpdate(() => model.flushDraft());
+    const onHide = () => {
+      if (document.visibilityState === 'hidden') void model.flushDraft();
+    };
+    document.addEventListener('visibilitychange', onHide);
+    addEventListener('pagehide', onHide);
+    return () => {
+      cancelled = true;
+      offUpdate();
+      document.removeEventListener('visibilitychange', onHide);
+      removeEventListener('pagehide', onHide);
+    };
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- services are created once
+  }, []);
+  return services;
+}
