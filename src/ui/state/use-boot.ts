@@ -22,7 +22,11 @@ export function useBoot(openingLink: boolean): AppServices & { ready: boolean } 
       } });
       if (!openingLink && !model.get().doc) {
         const first = await firstCase(opened.store);
-        if (first && !cancelled) model.open(first.doc, 'editing', first.saved);
+        if (first && !cancelled) {
+          model.open(first.doc, 'editing', first.saved);
+          // A first start (or a return to unsaved work) lands on the form, not an empty list.
+          if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = '#/member';
+        }
       }
       if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, ready: true });
     })();

@@ -1,0 +1,14 @@
+import { spawnSync } from 'node:child_process';
+
+/** Runs the built `wetmode` command with a JSON input on standard input; returns the parsed output. */
+export function wetmodeJson(command: string, input: unknown): any {
+  const r = spawnSync(process.execPath, ['dist-cli/wetmode.js', command, '-'], { input: JSON.stringify(input), encoding: 'utf8' });
+  if (r.status !== 0) throw new Error(`wetmode ${command} failed (${r.status}): ${r.stderr}`);
+  return JSON.parse(r.stdout);
+}
+
+/** Three significant figures as the app shows them (formatSig). */
+export function sig3(x: number): string {
+  const digits = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(x))));
+  return x.toFixed(digits);
+}
