@@ -168,7 +168,8 @@ export function readExcitation(kind: MemberKind, values: FieldValues, system: Un
     excitation: {
       flowSpeedMPerS,
       liquid: { densityKgPerM3: rho, kinematicViscosityM2PerS: base.kinematicViscosityM2PerS, source: `density as entered; viscosity of ${base === SEAWATER ? 'seawater' : 'fresh water'} (${base.source})` },
-      dampingRatio: r.num('dampingRatio'),
+      // Left out when it is the default, so the screening shows the default's source rather than "entered by user".
+      dampingRatio: r.num('dampingRatio') === DEFAULT_DAMPING.ratio ? undefined : r.num('dampingRatio'),
       stemFrequencyRatioScreen: kind === 'stem',
       waves,
       machinery: machinery.length > 0 ? machinery : undefined,

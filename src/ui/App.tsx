@@ -7,33 +7,34 @@ import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
 import { Placeholder } from './screens/Placeholder';
 import { MemberScreen } from './member/MemberScreen';
-import { AppServicesProvider } from './state/context';
+import { ResultsScreen } from './screens/ResultsScreen';
+import { OpenLinkScreen } from './screens/OpenLinkScreen';
+import { CasesScreen, ReceivedBanner, ShareActions } from './cases';
+import { ReportScreen } from './screens/ReportScreen';
+import { AppServicesProvider, useModel } from './state/context';
 import { useBoot } from './state/use-boot';
 import type { Route } from './shell/router';
+
+function ResultsWithActions() {
+  const [state] = useModel();
+  return (
+    <ResultsScreen
+      banner={state.doc ? <ReceivedBanner doc={state.doc} /> : null}
+      actions={state.doc ? <ShareActions doc={state.doc} /> : null}
+    />
+  );
+}
 
 function Screen({ route }: { route: Route }) {
   switch (route.screen) {
     case 'cases':
-      return (
-        <Placeholder title="Cases">
-          <p>Your saved cases will be listed here, newest first, with name, member kind, tag, date and key result.</p>
-          <p>Saving, search, sharing as a link and reports are being built. Nothing is stored yet.</p>
-        </Placeholder>
-      );
+      return <CasesScreen />;
     case 'member':
       return <MemberScreen />;
     case 'results':
-      return (
-        <Placeholder title="Results">
-          <p>Dry and wet natural frequencies, added mass and resonance verdicts will appear here once a member is entered.</p>
-        </Placeholder>
-      );
+      return <ResultsWithActions />;
     case 'report':
-      return (
-        <Placeholder title="Report">
-          <p>A printable report of the open case will be here.</p>
-        </Placeholder>
-      );
+      return <ReportScreen />;
     case 'section':
       return (
         <Placeholder title="Section">
@@ -43,11 +44,7 @@ function Screen({ route }: { route: Route }) {
     case 'cautions':
       return <CautionsScreen />;
     case 'open':
-      return (
-        <Placeholder title="Shared case">
-          <p>Opening shared case links is being built.</p>
-        </Placeholder>
-      );
+      return <OpenLinkScreen payload={route.payload} />;
   }
 }
 

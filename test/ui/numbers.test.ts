@@ -7,7 +7,8 @@ describe('number formatting', () => {
     expect(formatSig(1.23456)).toBe('1.23');
     expect(formatSig(12.3456)).toBe('12.3');
     expect(formatSig(123.456)).toBe('123');
-    expect(formatSig(1234.56)).toBe('1235'); // plain notation keeps every integer digit
+    expect(formatSig(1234.56)).toBe('1230'); // integer digits rounded too: three figures claimed, three shown
+    expect(formatSig(17438)).toBe('17400');
   });
   it('does not gain a digit when rounding carries over a power of ten', () => {
     expect(formatSig(9.996)).toBe('10.0');

@@ -13,7 +13,8 @@ export function formatSig(value: number, sig = 3): string {
   let text: string;
   if (abs >= 1e-3 && abs < 1e6) {
     const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
-    text = abs.toFixed(Math.min(digits, 12));
+    // Large values: round the integer part too (17438 -> 17400), so no figure claims more than `sig`.
+    text = digits === 0 ? String(Number(abs.toPrecision(sig))) : abs.toFixed(Math.min(digits, 12));
     // toFixed can round up into one more integer digit (9.996 -> "10.00"): trim the extra decimal.
     if (digits > 0 && Number(text) >= 10 ** (Math.floor(Math.log10(abs)) + 1)) text = abs.toFixed(digits - 1);
   } else {

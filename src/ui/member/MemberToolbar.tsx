@@ -3,7 +3,7 @@ import { FORMS, type UnitSystem } from '../../forms';
 import { convertExcitationValues } from '../../forms/excitation';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
-import { saveOpenCase } from '../state/save';
+import { saveOpenCase } from '../cases';
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
@@ -20,8 +20,12 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
     }));
   };
   const save = async () => {
-    const r = await saveOpenCase(model, store);
-    setMessage({ ok: r.ok, text: r.message });
+    if (!store) {
+      setMessage({ ok: false, text: 'Cases cannot be kept on this device (storage is unavailable). Export the case as a file or copy its link instead.' });
+      return;
+    }
+    const r = await saveOpenCase(store, model);
+    setMessage({ ok: r.ok, text: r.text });
   };
   const unsaved = model.unsaved();
   return (

@@ -12,13 +12,17 @@ interface Props {
   modes: readonly ChartMode[];
   bands: readonly ChartBand[];
   widthPx?: number;
+  /** Row labels of the two mode rows; a member without liquid shows its dry frequencies in the solid row. */
+  rowLabels?: { dry: string; wet: string };
 }
+
+const ROW_LABELS = { dry: 'dry (dashed)', wet: 'wet (solid)' };
 
 /**
  * Natural frequencies (dry dashed, wet solid, labelled) against shaded excitation bands, on a log axis.
  * The text table beside it (in the Results screen) carries the same numbers for reading and printing.
  */
-export function FrequencyChart({ modes, bands, widthPx = 640 }: Props) {
+export function FrequencyChart({ modes, bands, widthPx = 640, rowLabels = ROW_LABELS }: Props) {
   const rowH = 22;
   const top = 10;
   const bandsH = Math.max(1, bands.length) * rowH;
@@ -37,20 +41,20 @@ export function FrequencyChart({ modes, bands, widthPx = 640 }: Props) {
           {(t.major || ticks.length < 12) && <text x={toPx(axis, t.hz)} y={height - 6} text-anchor="middle">{formatSig(t.hz, 2)}</text>}
         </g>
       ))}
-      <text x={right} y={height - 6} text-anchor="end" class="axis-unit">Hz</text>
+      <text x={left - 16} y={height - 6} text-anchor="end" class="axis-unit">Hz</text>
       {bands.map((b, i) => {
         const y = top + i * rowH;
         const x0 = toPx(axis, b.lowHz);
         const x1 = Math.max(toPx(axis, b.highHz), x0 + 3);
         return (
           <g key={b.label} class={`band band-${b.kind}`}>
-            <text x={left - 6} y={y + 15} text-anchor="end">{b.label.length > 24 ? `${b.label.slice(0, 23)}…` : b.label}</text>
+            <text x={left - 6} y={y + 15} text-anchor="end">{b.label.length > 22 ? `${b.label.slice(0, 21)}…` : b.label}</text>
             <rect x={x0} y={y + 2} width={x1 - x0} height={rowH - 4} />
           </g>
         );
       })}
-      <text x={left - 6} y={modesTop + 18} text-anchor="end">dry (dashed)</text>
-      <text x={left - 6} y={modesTop + 46} text-anchor="end">wet (solid)</text>
+      <text x={left - 6} y={modesTop + 18} text-anchor="end">{rowLabels.dry}</text>
+      <text x={left - 6} y={modesTop + 46} text-anchor="end">{rowLabels.wet}</text>
       {modes.map((m) => (
         <g key={m.index}>
           {m.dryHz !== undefined && (

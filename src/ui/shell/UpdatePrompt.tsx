@@ -27,7 +27,12 @@ export function UpdatePrompt() {
     } catch {
       /* private mode: show it each time rather than never */
     }
-    if (!shown) setShowOffline(true);
+    if (!shown) {
+      setShowOffline(true);
+      // A quiet note: it goes away by itself after a while.
+      const t = setTimeout(() => setShowOffline(false), 12_000);
+      return () => clearTimeout(t);
+    }
   }, [offlineReady]);
 
   async function accept() {

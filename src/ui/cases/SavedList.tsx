@@ -1,0 +1,145 @@
+import { useId, useState } from 'preact/hooks';
+import type { Case } from '../../physics/case';
+import { searchCases, sortCases, type CaseSort, type CaseStore, type UndoToken } from '../../store';
+import type { AppModel } from '../state/app-model';
+import { CaseRow, type RowEdit } from './CaseRow';
+import { afterDeleted, afterRenamed, afterRestored } from './open-case';
+import type { Status } from './StatusLine';
+import type { ListState } from './use-case-list';
+import { deletedWords, listCountWords, noMatchWords, quoted, restoredWords, sentence } from './words';
+
+const SORTS: readonly { value: CaseSort; label: string }[] = [
+  { value: 'updated', label: 'Last change, newest first' },
+  { value: 'name', label: 'Name, A to Z' },
+  { value: 'tag', label: 'Tag, A to Z' },
+  { value: 'kind', label: 'Member kind' },
+];
+
+interface Props {
+  store: CaseStore;
+  model: AppModel;
+  listState: ListState;
+  reload: () => Promise<void>;
+  openId: string | null;
+  setStatus: (s: Status | null) => void;
+  /** Called after a change that removed the focused button, so focus can go to the status line. */
+  focusStatus: () => void;
+  onOpen: (c: Case) => void;
+}
+
+/** The saved cases: search, sort, one row per case, and the records that cannot be read (listed, never hidden). */
+export function SavedList({ store, model, listState, reload, openId, setStatus, focusStatus, onOpen }: Props) {
+  const [query, setQuery] = useState('');
+  const [sort, setSort] = useState<CaseSort>('updated');
+  const [edit, setEdit] = useState<{ id: string; what: RowEdit } | null>(null);
+  const id = useId();
+
+  const fail = (message: string) => setStatus({ text: sentence(message), tone: 'error' });
+
+  async function undo(token: UndoToken, name: string | null) {
+    const r = await store.undoDelete(token);
+    if (!r.ok) return fail(r.message);
+    setStatus({ text: restoredWords(r.value, name), tone: 'ok' });
+    if (r.value) afterRestored(model, r.value);
+    await reload();
+  }
+
+  async function remove(key: string, c: Case | null) {
+    setEdit(null);
+    const r = await store.deleteCase(key);
+    if (!r.ok) return fail(r.message);
+    afterDeleted(model, key);
+    setStatus({ text: deletedWords(c), tone: 'ok', actionLabel: 'Undo', action: () => void undo(r.value, c ? c.name : null) });
+    await reload();
+    focusStatus();
+  }
+
+  async function rename(c: Case, name: string): Promise<string | null> {
+    const r = await store.renameCase(c.id, name);
+    if (!r.ok) return sentence(r.message);
+    afterRenamed(model, r.value);
+    setEdit(null);
+    setStatus({ text: `Renamed ${quoted(c)} to ${quoted(r.value)}.`, tone: 'ok' });
+    await reload();
+    return null;
+  }
+
+  async function duplicate(c: Case, name: string): Promise<string | null> {
+    const r = await store.duplicateCase(c.id, name);
+    if (!r.ok) return sentence(r.message);
+    setEdit(null);
+    const copy = r.value;
+    setStatus({ text: `Made a copy: ${quoted(copy)}.`, tone: 'ok', actionLabel: 'Open the copy', action: () => onOpen(copy) });
+    await reload();
+    return null;
+  }
+
+  if (listState.status === 'waiting') return <p class="cases-muted">Loading your cases…</p>;
+  if (listState.status === 'failed') {
+    return (
+      <div class="cases-problem" role="alert">
+        <p>{listState.message}</p>
+        <button type="button" class="btn" onClick={() => void reload()}>Try again</button>
+      </div>
+    );
+  }
+  const { cases, unreadable } = listState.list;
+  const shown = sortCases(searchCases(cases, query), sort);
+
+  return (
+    <div class="saved-list">
+      {cases.length > 0 && (
+        <div class="list-tools">
+          <div class="list-tool">
+            <label for={`${id}-search`}>Search</label>
+            <input id={`${id}-search`} type="search" value={query} placeholder="name, tag, note or kind" onInput={(e) => setQuery(e.currentTarget.value)} />
+          </div>
+          <div class="list-tool">
+            <label for={`${id}-sort`}>Sort by</label>
+            <select id={`${id}-sort`} value={sort} onChange={(e) => setSort(e.currentTarget.value as CaseSort)}>
+              {SORTS.map((s) => <option key={s.value} value={s.value}>{s.label}</option>)}
+            </select>
+          </div>
+        </div>
+      )}
+      <p class="list-count" aria-live="polite">{listCountWords(shown.length, cases.length, query)}</p>
+      {shown.length === 0 && cases.length > 0 && <p>{noMatchWords(query)}</p>}
+      <ul class="case-list">
+        {shown.map((c) => (
+          <CaseRow
+            key={c.id}
+            c={c}
+            isOpen={c.id === openId}
+            edit={edit?.id === c.id ? edit.what : null}
+            onEdit={(what) => setEdit(what ? { id: c.id, what } : null)}
+            onOpen={() => onOpen(c)}
+            onDelete={() => void remove(c.id, c)}
+            onRename={(name) => rename(c, name)}
+            onDuplicate={(name) => duplicate(c, name)}
+          />
+        ))}
+      </ul>
+      {unreadable.length > 0 && (
+        <div class="unreadable">
+          <h3>Saved records that cannot be read ({unreadable.length})</h3>
+          <p class="cases-muted">They are kept until you delete them. Delete can be undone.</p>
+          <ul class="case-list">
+            {unreadable.map((u) => (
+              <li key={u.key} class="case-row case-row-unreadable">
+                <div class="case-row-main">
+                  <p class="case-name">Record {u.key}</p>
+                  <p>{u.message}</p>
+                </div>
+                <div class="case-actions">
+                  <button type="button" class="btn cases-danger" onClick={() => void remove(u.key, null)}>
+                    Delete<span class="vh"> the unreadable record {u.key}</span>
+                  </button>
+                </div>
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,65 @@
+import type { Case } from '../../physics/case';
+import type { Results } from '../state/app-model';
+import { displayUnits } from './display-units';
+import { MassTable } from './MassTable';
+import { ModeShapePanel } from './ModeShape';
+import { ModesTable } from './ModesTable';
+import { AssumptionsPanel, CautionsPanel, DiagnosticsPanel } from './NotesPanels';
+import { ResonancePanel } from './ResonancePanel';
+import { StatusBanner } from './StatusBanner';
+import { failureText } from './summary';
+import { FailurePanel, SummaryPanel } from './SummaryPanel';
+import './results.css';
+
+export interface ResultsViewProps {
+  doc: Case;
+  results: Results | null;
+  /** The results on screen do not belong to the inputs on screen. */
+  stale: boolean;
+  computing: boolean;
+  /** Field messages on the Member form (member and resonance inputs). */
+  errorsCount: number;
+}
+
+/**
+ * The Results screen body: summary, modes, mode shapes, mass by zone, resonance, warnings, assumptions and
+ * cautions. Last results stay on screen when the inputs change, marked out of date.
+ */
+export function ResultsView({ doc, results, stale, computing, errorsCount }: ResultsViewProps) {
+  const banner = <StatusBanner hasResults={results !== null} stale={stale} computing={computing} errorsCount={errorsCount} />;
+  const answer = results?.answer;
+  if (!results || !answer) {
+    return (
+      <div class="results" aria-busy={computing}>
+        {banner}
+        <CautionsPanel />
+      </div>
+    );
+  }
+  if (!answer.ok) {
+    return (
+      <div class={stale ? 'results results-stale' : 'results'} aria-busy={computing}>
+        {banner}
+        <FailurePanel {...failureText(answer)} />
+        <CautionsPanel />
+      </div>
+    );
+  }
+  const units = displayUnits(doc.unitSystem);
+  const { member, screening } = answer;
+  return (
+    <div class={stale ? 'results results-stale' : 'results'} aria-busy={computing}>
+      {banner}
+      <div class="results-body">
+        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
+        <ModesTable member={member} />
+        <ModeShapePanel build={results.build} member={member} units={units} />
+        <MassTable member={member} units={units} />
+        {screening && <ResonancePanel screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
+        <DiagnosticsPanel member={member} units={units} />
+        <AssumptionsPanel member={member} build={results.build} />
+      </div>
+      <CautionsPanel />
+    </div>
+  );
+}

@@ -1,0 +1,27 @@
+import { useModel } from '../state/context';
+import { ResultsView } from '../results/ResultsView';
+import { hashFor } from '../shell/router';
+import { FORMS } from '../../forms';
+import type { ComponentChildren } from 'preact';
+
+/** The Results screen: the open case's results; `banner` is shown above them (a received case). */
+export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren; actions?: ComponentChildren }) {
+  const [state, model] = useModel();
+  const doc = state.doc;
+  return (
+    <section class="screen" aria-labelledby="screen-title">
+      <h1 id="screen-title" tabIndex={-1}>Results{doc ? `: ${doc.name || FORMS[doc.kind].title}` : ''}</h1>
+      {banner}
+      {!doc ? (
+        <div class="panel notice">
+          <p>No case is open. Open one from <a href={hashFor('cases')}>Cases</a> or start a new member.</p>
+        </div>
+      ) : (
+        <>
+          {actions}
+          <ResultsView doc={doc} results={state.results} stale={!model.resultsCurrent()} computing={state.computing} errorsCount={Object.keys(state.errors).length} />
+        </>
+      )}
+    </section>
+  );
+}
