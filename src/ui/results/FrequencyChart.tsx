@@ -41,7 +41,7 @@ export function FrequencyChart({ modes, bands, widthPx = 640, rowLabels = ROW_LA
           {(t.major || ticks.length < 12) && <text x={toPx(axis, t.hz)} y={height - 6} text-anchor="middle">{formatSig(t.hz, 2)}</text>}
         </g>
       ))}
-      <text x={left - 16} y={height - 6} text-anchor="end" class="axis-unit">Hz</text>
+      <text x={left - 30} y={height - 6} text-anchor="end" class="axis-unit">frequency, Hz</text>
       {bands.map((b, i) => {
         const y = top + i * rowH;
         const x0 = toPx(axis, b.lowHz);
