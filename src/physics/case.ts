@@ -8,7 +8,7 @@
  * The parts live in `./case/`.
  */
 export * from './case/types';
-export { CASE_LIMITS } from './case/limits';
+export { CASE_LIMITS, cutText } from './case/limits';
 export { isPlainObject } from './case/fields';
 export { parseCase } from './case/parse';
 export { CASE_STEPS, caseV0toV1, type CaseStep } from './case/migrations';

@@ -1,5 +1,5 @@
 /** Saved-case operations: list, get, save, duplicate, rename, delete with undo. */
-import { parseCase, type Case } from '../physics/case';
+import { cutText, parseCase, type Case } from '../physics/case';
 import type { CaseList, UndoToken, UnreadableRecord } from './api';
 import { caseKey, checkIncoming, failWith, inTx, notFound, readStored, type StoreContext, type Tx } from './context';
 import { CASES, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';
@@ -100,7 +100,7 @@ export function deleteCase(ctx: StoreContext, id: string): Promise<StoreResult<U
 /** " (restored)" name for a case whose id was taken while it was deleted. */
 function restoredName(name: string, max: number): string {
   const suffix = ' (restored)';
-  return name.slice(0, Math.max(0, max - suffix.length)) + suffix;
+  return cutText(name, Math.max(0, max - suffix.length)) + suffix;
 }
 
 export function undoDelete(ctx: StoreContext, token: UndoToken, nameChars: number): Promise<StoreResult<Case | null>> {

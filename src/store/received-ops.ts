@@ -2,6 +2,7 @@
  * Received cases (from a link or a file). The rule: never overwrite. Same id and same entered content ->
  * nothing to do; same id but changed -> a copy with a new id and a name that says where it came from.
  */
+import { cutText } from '../physics/case';
 import { CASE_LIMITS, sameCaseContent, type Case } from '../physics/case';
 import type { ReceivedOutcome, SameCaseAnswer } from './api';
 import { checkIncoming, inTx, type StoreContext, type Tx } from './context';
@@ -35,7 +36,7 @@ export function receivedName(name: string, date: string, taken: ReadonlySet<stri
   const base = name === '' ? 'Case' : name;
   for (let n = 1; ; n++) {
     const suffix = n === 1 ? ` (received ${date})` : ` (received ${date}, ${n})`;
-    const candidate = base.slice(0, CASE_LIMITS.nameChars - suffix.length) + suffix;
+    const candidate = cutText(base, CASE_LIMITS.nameChars - suffix.length) + suffix;
     if (!taken.has(candidate)) return candidate;
   }
 }

@@ -39,6 +39,18 @@ describe('findSameCase', () => {
 });
 
 describe('saveReceived never overwrites', () => {
+  it('a changed copy of a case whose long name ends in emoji is saved whole, never with half an emoji', async () => {
+    const store = await harness().open();
+    const name = 'x'.repeat(CASE_LIMITS.nameChars - 2) + '\u{1F30A}'; // at the limit, ending in a surrogate pair
+    const base = { ...demoCase(), name };
+    unwrap(await store.saveCase(base));
+    const changed = await received({ ...base, note: 'changed on site' });
+    const out = unwrap(await store.saveReceived(changed));
+    expect(out.status).toBe('saved-copy');
+    expect(out.case.name.length).toBeLessThanOrEqual(CASE_LIMITS.nameChars);
+    expect(out.case.name).not.toMatch(/[\uD800-\uDBFF](?![\uDC00-\uDFFF])/); // no lone high surrogate
+  });
+
   it('a case not saved before is saved under its own id, timed now', async () => {
     const store = await harness().open();
     const incoming = await received(demoCase());

@@ -21,3 +21,13 @@ export const CASE_LIMITS = {
   /** Largest plausible frequency, Hz, for `keyResult.lowestWetFrequencyHz` (sensor stems reach a few kHz at most). */
   frequencyHzMax: 1e6,
 } as const;
+
+/**
+ * Cuts text to at most `max` UTF-16 units without splitting a surrogate pair (an emoji cut in half is a
+ * broken character the parser refuses). Used wherever a suffix is added to a name near its limit.
+ */
+export function cutText(s: string, max: number): string {
+  if (s.length <= max) return s;
+  const code = s.charCodeAt(max - 1);
+  return s.slice(0, code >= 0xd800 && code <= 0xdbff ? max - 1 : max);
+}

@@ -1,15 +1,8 @@
 /** Names typed for Rename and Duplicate: the default for a copy, and the check before the store is asked. */
-import { CASE_LIMITS } from '../../physics/case';
+import { CASE_LIMITS, cutText } from '../../physics/case';
 import { displayName } from './format';
 
 const COPY_SUFFIX = ' (copy)';
-
-/** The first `max` UTF-16 units of `s`, one fewer if the cut would split a surrogate pair (an emoji, say). */
-export function cutText(s: string, max: number): string {
-  if (s.length <= max) return s;
-  const code = s.charCodeAt(max - 1);
-  return s.slice(0, code >= 0xd800 && code <= 0xdbff ? max - 1 : max);
-}
 
 /** "<name> (copy)", shortened so the whole stays within the name limit. */
 export function copyName(name: string): string {

@@ -56,8 +56,9 @@ export function contentKey(c: Case): string {
 export function keyResultOf(results: Results | null): KeyResult | undefined {
   const a = results?.answer;
   if (!a || !a.ok) return undefined;
-  const f = (a.member.wet ?? a.member.dry).frequenciesHz[0];
-  return { lowestWetFrequencyHz: f > 0 && Number.isFinite(f) ? f : undefined, verdict: a.screening?.verdict };
+  // A member with no liquid has no wet frequency: the list then shows the verdict only.
+  const f = a.member.wet?.frequenciesHz[0];
+  return { lowestWetFrequencyHz: f !== undefined && f > 0 && Number.isFinite(f) ? f : undefined, verdict: a.screening?.verdict };
 }
 
 export class AppModel {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CASE_LIMITS, parseCase } from '../../../src/physics/case';
-import { checkCaseName, copyName, cutText } from '../../../src/ui/cases/names';
+import { checkCaseName, copyName } from '../../../src/ui/cases/names';
+import { cutText } from '../../../src/physics/case';
 import { demoCase } from '../../case/fixtures';
 
 describe('the name offered for a copy', () => {
