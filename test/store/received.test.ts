@@ -41,7 +41,9 @@ describe('findSameCase', () => {
 describe('saveReceived never overwrites', () => {
   it('a changed copy of a case whose long name ends in emoji is saved whole, never with half an emoji', async () => {
     const store = await harness().open();
-    const name = 'x'.repeat(CASE_LIMITS.nameChars - 2) + '\u{1F30A}'; // at the limit, ending in a surrogate pair
+    // The copy's name is cut to make room for " (received 2026-12-01)" (22 characters): put an emoji across the cut.
+    const cut = CASE_LIMITS.nameChars - ' (received 2026-12-01)'.length;
+    const name = 'x'.repeat(cut - 1) + '\u{1F30A}' + 'y'.repeat(CASE_LIMITS.nameChars - cut - 1);
     const base = { ...demoCase(), name };
     unwrap(await store.saveCase(base));
     const changed = await received({ ...base, note: 'changed on site' });
