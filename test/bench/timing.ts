@@ -1,5 +1,6 @@
 /** Small timing helpers for `npm run bench`: medians over repeated runs, printed as tables. */
 import { performance } from 'node:perf_hooks';
+import { seededUniform01 } from '../../src/physics/linalg/seeded';
 
 export interface Timing {
   medianMs: number;
@@ -26,14 +27,5 @@ export function report(label: string, t: Timing, targetMs?: number): void {
   console.log(`${label.padEnd(58)} median ${t.medianMs.toFixed(3).padStart(9)} ms  min ${t.minMs.toFixed(3).padStart(9)} ms  (${t.runs} runs)${target}`);
 }
 
-/** A small seeded generator (mulberry32) so benchmark inputs repeat run to run. */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** A seeded generator so benchmark inputs repeat run to run. */
+export const seeded = seededUniform01;

@@ -11,6 +11,7 @@
  * every eigenvalue below the highest one found is accounted for; if not, the found pairs are locked and
  * Lanczos restarts from a fresh vector orthogonal to them.
  */
+import { seededUniform01 } from './seeded';
 import { type SymBanded, symBandedGet, symBandedMulInto } from './banded';
 import { createLdltFactor, factorLdltInto, type LdltFactor, solveLdltInto } from './banded-ldlt';
 import { rayleighRitz } from './eigen-rayleigh-ritz';
@@ -55,16 +56,10 @@ function dot(a: Float64Array, b: Float64Array, n: number): number {
   return s;
 }
 
-/** Small seeded generator (mulberry32) for start vectors. */
+/** Seeded uniform in [-0.5, 0.5) for start vectors, so a solve repeats exactly. */
 function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296 - 0.5;
-  };
+  const next = seededUniform01(seed);
+  return () => next() - 0.5;
 }
 
 /** Largest K_ii / M_ii: of the order of the highest eigenvalue, a scale for shifts. */

@@ -5,18 +5,10 @@ import {
 } from '../../../src/physics/linalg/dense';
 import { createLuFactor, luFactorInto, luSolve, luSolveInto, luSolveManyInto } from '../../../src/physics/linalg/lu';
 import { symmetricEigenvalues } from '../../../src/physics/linalg/jacobi-eigen';
+import { seededUniform01 } from '../../../src/physics/linalg/seeded';
 
-/** Small seeded generator (mulberry32) so the random systems repeat. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded generator so the random systems repeat. */
+const seeded = seededUniform01;
 
 function randomMatrix(n: number, rnd: () => number) {
   const m = denseZeros(n, n);
