@@ -5,7 +5,7 @@ import { UpdatePrompt } from './shell/UpdatePrompt';
 import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
-import { Placeholder } from './screens/Placeholder';
+import { SectionScreen } from './section/SectionScreen';
 import { MemberScreen } from './member/MemberScreen';
 import { ResultsScreen } from './screens/ResultsScreen';
 import { OpenLinkScreen } from './screens/OpenLinkScreen';
@@ -36,11 +36,7 @@ function Screen({ route }: { route: Route }) {
     case 'report':
       return <ReportScreen />;
     case 'section':
-      return (
-        <Placeholder title="Section">
-          <p>The added-mass view of a cross-section will be here.</p>
-        </Placeholder>
-      );
+      return <SectionScreen />;
     case 'cautions':
       return <CautionsScreen />;
     case 'open':

@@ -36,7 +36,10 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
           </div>
         </dl>
       )}
-      <a class="btn" href={hashFor('results')}>All results</a>
+      <div class="quick-links">
+        <a class="btn" href={hashFor('results')}>All results</a>
+        <a class="btn" href={hashFor('section')}>Section view</a>
+      </div>
     </section>
   );
 }
