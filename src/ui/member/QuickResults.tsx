@@ -2,6 +2,7 @@ import type { ModelState } from '../state/app-model';
 import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { hashFor } from '../shell/router';
+import { MemberSectionLink } from '../section/MemberSectionLink';
 
 /** The answer beside the form: lowest dry and wet frequency and the verdict, marked when out of date. */
 export function QuickResults({ state, stale }: { state: ModelState; stale: boolean }) {
@@ -38,7 +39,7 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
       )}
       <div class="quick-links">
         <a class="btn" href={hashFor('results')}>All results</a>
-        <a class="btn" href={hashFor('section')}>Section view</a>
+        <MemberSectionLink model={state.results?.build.model ?? null} label="Section and flow" />
       </div>
     </section>
   );

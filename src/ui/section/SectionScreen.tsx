@@ -35,6 +35,11 @@ function fromPreset(p: SectionPreset, keep?: ViewState): ViewState {
 /** The editor's state outlives the screen (kept for the page's life), so a visit to another screen loses nothing. */
 let remembered: ViewState | null = null;
 
+/** Puts a section (for example the open member's) into the editor; the next visit to the screen shows it. */
+export function loadSectionForm(form: SectionForm, about: string): void {
+  remembered = { form, motion: 'x', body: 0, quantity: remembered?.quantity ?? 'speed', system: remembered?.system ?? 'si', about };
+}
+
 function clearancesOf(input: SectionInput | null): Clearances {
   const out: Clearances = {};
   for (const l of input ? straightBoundaries(input) : []) {

@@ -1,0 +1,20 @@
+import type { MemberModel } from '../../physics/beam/model';
+import { hashFor } from '../shell/router';
+import { sectionFormFromMember } from './from-member';
+import { loadSectionForm } from './SectionScreen';
+
+/**
+ * Opens the Section view on this member's submerged section and surroundings (its added mass and flow map).
+ * A member with nothing submerged opens the Section view as it was.
+ */
+export function MemberSectionLink({ model, label = 'Section view' }: { model: MemberModel | null; label?: string }) {
+  const onClick = () => {
+    const s = model ? sectionFormFromMember(model) : null;
+    if (s) loadSectionForm(s.form, s.about);
+  };
+  return (
+    <a class="btn" href={hashFor('section')} onClick={onClick}>
+      {label}
+    </a>
+  );
+}
