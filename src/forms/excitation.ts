@@ -5,7 +5,8 @@
  * (and the f_s/f_n screen), baffles an optional liquid speed.
  */
 import type { CaseExcitation } from '../physics/excitation/from-member';
-import { DEFAULT_DAMPING, FRESH_WATER, SEAWATER } from '../physics/excitation';
+import { DEFAULT_DAMPING, DEFAULT_LIMITS, FRESH_WATER, SEAWATER } from '../physics/excitation';
+import type { LimitOverrides } from '../physics/excitation/types';
 import type { FlowPoint, Machine } from '../physics/excitation/types';
 import type { MemberBuild, MemberKind } from '../physics/members';
 import type { UnitSystem } from '../units';
@@ -55,6 +56,45 @@ const MACHINE: readonly FieldDef[] = [
     min: POSITIVE,
     advanced: true,
   },
+  {
+    key: 'shaftOrders',
+    label: 'Shaft orders to check',
+    type: 'quantity-list',
+    dimension: 'ratio',
+    units: { si: '', us: '' },
+    default: '1, 2',
+    min: POSITIVE,
+    advanced: true,
+    help: 'Multiples of the shaft speed: 1 for imbalance, 2 for misalignment (common practice).',
+  },
+  {
+    key: 'bladePassOrders',
+    label: 'Blade-pass orders to check',
+    type: 'quantity-list',
+    dimension: 'ratio',
+    units: { si: '', us: '' },
+    default: '1',
+    min: POSITIVE,
+    advanced: true,
+    help: 'Multiples of blade-pass frequency (blades × shaft speed); used when the blade count is given.',
+  },
+];
+
+function limit(key: string, label: string, def: number, source: string, extra: Partial<QuantityField> = {}): QuantityField {
+  return { key, label, type: 'quantity', dimension: 'ratio', units: { si: '', us: '' }, default: String(def), min: POSITIVE, advanced: true, help: `Default ${def}: ${source}.`, ...extra };
+}
+
+/** The published screening limits, editable; each default shows its source. */
+const VIV_LIMITS: readonly FieldDef[] = [
+  limit('inLineVrMin', 'In-line lock-in from V_R', DEFAULT_LIMITS.inLineReducedVelocity.min, DEFAULT_LIMITS.inLineReducedVelocity.source),
+  limit('inLineVrMax', 'In-line lock-in up to V_R', DEFAULT_LIMITS.inLineReducedVelocity.max, DEFAULT_LIMITS.inLineReducedVelocity.source),
+  limit('inLineKsMax', 'In-line only when K_S at most', DEFAULT_LIMITS.inLineStabilityMax.value, DEFAULT_LIMITS.inLineStabilityMax.source),
+  limit('crossFlowVrMin', 'Cross-flow lock-in from V_R', DEFAULT_LIMITS.crossFlowReducedVelocity.min, DEFAULT_LIMITS.crossFlowReducedVelocity.source),
+  limit('crossFlowVrMax', 'Cross-flow lock-in up to V_R', DEFAULT_LIMITS.crossFlowReducedVelocity.max, DEFAULT_LIMITS.crossFlowReducedVelocity.source),
+];
+
+const STEM_LIMIT: readonly FieldDef[] = [
+  limit('stemRatioMax', 'Largest f_s / f_n for a stem', DEFAULT_LIMITS.stemFrequencyRatioMax.value, DEFAULT_LIMITS.stemFrequencyRatioMax.source),
 ];
 
 const COMMON: readonly FieldDef[] = [
@@ -85,10 +125,10 @@ const COMMON: readonly FieldDef[] = [
 ];
 
 const FIELDS: Readonly<Record<MemberKind, readonly FieldDef[]>> = {
-  pile: [...CURRENT, ...WAVES, ...MACHINE, ...COMMON],
-  riser: [...CURRENT, ...WAVES, ...MACHINE, ...COMMON],
-  baffle: [speed('flowSpeed', 'Liquid speed past the baffle', '', { optional: true, emptyMeans: 'no flow' }), ...MACHINE, ...COMMON],
-  stem: [speed('flowSpeed', 'Flow speed in the pipe', '2', { help: 'Largest expected flow speed past the stem (design flow rate ÷ pipe bore area).' }), ...MACHINE, ...COMMON],
+  pile: [...CURRENT, ...WAVES, ...MACHINE, ...COMMON, ...VIV_LIMITS],
+  riser: [...CURRENT, ...WAVES, ...MACHINE, ...COMMON, ...VIV_LIMITS],
+  baffle: [speed('flowSpeed', 'Liquid speed past the baffle', '', { optional: true, emptyMeans: 'no flow' }), ...MACHINE, ...COMMON, ...VIV_LIMITS],
+  stem: [speed('flowSpeed', 'Flow speed in the pipe', '2', { help: 'Largest expected flow speed past the stem (design flow rate ÷ pipe bore area).' }), ...MACHINE, ...COMMON, ...VIV_LIMITS, ...STEM_LIMIT],
 };
 
 export function excitationFields(kind: MemberKind): readonly FieldDef[] {
@@ -117,6 +157,27 @@ function currentProfile(build: MemberBuild, surface: number, mid: number | undef
     { zM: 0.5 * (zBed + zTop), speedMPerS: m },
     { zM: zTop, speedMPerS: surface },
   ];
+}
+
+/** Limits that differ from the published defaults (those keep their own source; edited ones say "entered by user"). */
+function readLimits(kind: MemberKind, r: ReturnType<typeof makeReader>, errs: FieldErrors): LimitOverrides | undefined {
+  const out: LimitOverrides = {};
+  const d = DEFAULT_LIMITS;
+  const inMin = r.num('inLineVrMin');
+  const inMax = r.num('inLineVrMax');
+  const cfMin = r.num('crossFlowVrMin');
+  const cfMax = r.num('crossFlowVrMax');
+  if (!(inMax > inMin)) errs.inLineVrMax = `the in-line range must end above where it starts (${inMin})`;
+  if (!(cfMax > cfMin)) errs.crossFlowVrMax = `the cross-flow range must end above where it starts (${cfMin})`;
+  if (inMin !== d.inLineReducedVelocity.min || inMax !== d.inLineReducedVelocity.max) out.inLineReducedVelocity = { min: inMin, max: inMax };
+  if (cfMin !== d.crossFlowReducedVelocity.min || cfMax !== d.crossFlowReducedVelocity.max) out.crossFlowReducedVelocity = { min: cfMin, max: cfMax };
+  const ks = r.num('inLineKsMax');
+  if (ks !== d.inLineStabilityMax.value) out.inLineStabilityMax = { value: ks };
+  if (kind === 'stem') {
+    const ratio = r.num('stemRatioMax');
+    if (ratio !== d.stemFrequencyRatioMax.value) out.stemFrequencyRatioMax = { value: ratio };
+  }
+  return Object.keys(out).length > 0 ? out : undefined;
 }
 
 export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
@@ -155,8 +216,16 @@ export function readExcitation(kind: MemberKind, values: FieldValues, system: Un
   if (rpm !== undefined && rpmMax !== undefined && !(rpmMax >= rpm)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', rpm)})`;
   if (rpm !== undefined) {
     // The frequency dimension reads rpm into Hz; the screening wants rpm.
-    machinery.push({ label: 'machine', shaftSpeedRpm: rpm * 60, shaftSpeedMaxRpm: rpmMax !== undefined ? rpmMax * 60 : undefined, bladeCount: blades });
+    machinery.push({
+      label: 'machine',
+      shaftSpeedRpm: rpm * 60,
+      shaftSpeedMaxRpm: rpmMax !== undefined ? rpmMax * 60 : undefined,
+      bladeCount: blades,
+      shaftOrders: r.list('shaftOrders'),
+      bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,
+    });
   }
+  const limits = readLimits(kind, r, errs);
   if (Object.keys(errs).length > 0) return { ok: false, errors: errs };
 
   const rho = build.model.liquid?.densityKgPerM3 ?? SEAWATER.densityKgPerM3;
@@ -173,7 +242,7 @@ export function readExcitation(kind: MemberKind, values: FieldValues, system: Un
       stemFrequencyRatioScreen: kind === 'stem',
       waves,
       machinery: machinery.length > 0 ? machinery : undefined,
-      limits: margin !== 0.2 ? { separationMargin: { value: margin } } : undefined,
+      limits: margin !== DEFAULT_LIMITS.separationMargin.value ? { ...limits, separationMargin: { value: margin } } : limits,
     },
   };
 }

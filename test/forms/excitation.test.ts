@@ -1,6 +1,15 @@
 import { describe, it, expect } from 'vitest';
 import { FORMS } from '../../src/forms';
 import { excitationDefaults, readExcitation, convertExcitationValues } from '../../src/forms/excitation';
+import { solveMember } from '../../src/physics/beam';
+import { screenResonance } from '../../src/physics/excitation';
+import { screeningInputFor } from '../../src/physics/excitation/from-member';
+
+function solvedPile() {
+  const out = solveMember(pileBuild().model);
+  if (!out.ok) throw new Error(out.message);
+  return out.result;
+}
 
 function pileBuild() {
   const r = FORMS.pile.build(FORMS.pile.defaults('si'), 'si');
@@ -57,5 +66,27 @@ describe('resonance inputs form', () => {
   it('toggling to US units re-expresses speeds in ft/s (1 m/s = 3.28084 ft/s, exact definition of the foot)', () => {
     const us = convertExcitationValues('pile', { currentSurface: '1' }, 'si', 'us');
     expect(Number(us.currentSurface)).toBeCloseTo(3.28084, 5);
+  });
+
+  it('published limits are used as they are unless edited; an edited limit is labelled as entered by the user', () => {
+    const plain = readExcitation('pile', { currentSurface: '1' }, 'si', pileBuild());
+    if (!plain.ok) throw new Error(JSON.stringify(plain.errors));
+    expect(plain.excitation.limits).toBeUndefined();
+    const edited = readExcitation('pile', { currentSurface: '1', crossFlowVrMin: '4', crossFlowVrMax: '12' }, 'si', pileBuild());
+    if (!edited.ok) throw new Error(JSON.stringify(edited.errors));
+    expect(edited.excitation.limits?.crossFlowReducedVelocity).toEqual({ min: 4, max: 12 });
+    const screened = screenResonance(screeningInputFor(pileBuild().model, solvedPile(), edited.excitation));
+    expect(screened.limits.crossFlowReducedVelocity.source).toMatch(/entered by user/);
+  });
+
+  it('a range that ends below its start is refused', () => {
+    const r = readExcitation('pile', { currentSurface: '1', inLineVrMin: '4', inLineVrMax: '2' }, 'si', pileBuild());
+    expect(r).toEqual({ ok: false, errors: { inLineVrMax: 'the in-line range must end above where it starts (4)' } });
+  });
+
+  it('the chosen shaft and blade-pass orders reach the screening', () => {
+    const r = readExcitation('stem', { flowSpeed: '1', machineSpeed: '1500 rpm', bladeCount: '7', shaftOrders: '1, 2, 3', bladePassOrders: '1, 2' }, 'si', pileBuild());
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.excitation.machinery?.[0]).toMatchObject({ shaftOrders: [1, 2, 3], bladePassOrders: [1, 2], bladeCount: 7 });
   });
 });
