@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { zToY, segmentRects, shapePoints, outerWidthM } from '../../src/ui/plots/member-geometry';
+import { zToY, segmentRects, shapePoints, outerWidthM, landmarkLabels } from '../../src/ui/plots/member-geometry';
 import type { MemberModel } from '../../src/physics/beam/model';
 
 const box = { widthPx: 200, heightPx: 420, padPx: 10 };
@@ -31,5 +31,20 @@ describe('member schematic geometry', () => {
   it('scales a mode shape so its largest displacement reaches the amplitude', () => {
     const pts = shapePoints([0, 10, 20], [0, -0.25, 0.5], 20, box, 100, 80).split(' ');
     expect(pts).toEqual(['100.0,410.0', '60.0,210.0', '180.0,10.0']);
+  });
+  it('pushes close landmark labels apart and leaves out those beyond the member', () => {
+    const labels = landmarkLabels(
+      [
+        { label: 'Top', zM: 20 },
+        { label: 'Water surface', zM: 19.9 },
+        { label: 'Mudline', zM: 5 },
+        { label: 'Tank floor', zM: -0.5 },
+      ],
+      20,
+      box,
+    );
+    expect(labels.map((l) => l.label)).toEqual(['Top', 'Water surface', 'Mudline']);
+    for (let i = 1; i < labels.length; i++) expect(labels[i].yText - labels[i - 1].yText).toBeGreaterThanOrEqual(12);
+    expect(labels[2].yLine).toBe(zToY(5, 20, box)); // the line stays at its true level
   });
 });

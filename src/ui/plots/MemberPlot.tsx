@@ -1,5 +1,5 @@
 import type { MemberModel } from '../../physics/beam/model';
-import { segmentRects, shapePoints, zToY, type PlotBox } from './member-geometry';
+import { landmarkLabels, segmentRects, shapePoints, zToY, type PlotBox } from './member-geometry';
 
 export interface PlotShape {
   label: string;
@@ -47,15 +47,12 @@ export function MemberPlot({ model, landmarks = [], shapes = [], title, widthPx 
           height={zToY(liquid.fromM, L, box) - zToY(liquid.toM, L, box)}
         />
       )}
-      {landmarks.map((m) => {
-        const y = zToY(m.zM, L, box);
-        return (
-          <g key={m.label} class="plot-landmark">
-            <line x1={0} x2={widthPx} y1={y} y2={y} />
-            <text x={4} y={y - 4}>{m.label}</text>
-          </g>
-        );
-      })}
+      {landmarkLabels(landmarks, L, box).map((m) => (
+        <g key={m.label} class="plot-landmark">
+          <line x1={0} x2={widthPx} y1={m.yLine} y2={m.yLine} />
+          <text x={4} y={m.yText}>{m.label}</text>
+        </g>
+      ))}
       {rects.map((r, i) => (
         <g key={i}>
           {r.coatPx > 0 && <rect class="plot-coat" x={r.x - r.coatPx} y={r.y} width={r.width + 2 * r.coatPx} height={r.height} />}
@@ -79,9 +76,10 @@ export function MemberPlot({ model, landmarks = [], shapes = [], title, widthPx 
         <polyline key={s.label} class={`plot-shape plot-shape-${s.kind}`} points={shapePoints(s.zM, s.displacement, L, box, cx, amplitude)} />
       ))}
       {shapes.length > 0 && (
+        // Bottom right: most modes move least near the root, so the legend stays clear of the shapes.
         <g class="plot-legend">
           {shapes.map((s, i) => (
-            <g key={s.label} transform={`translate(${widthPx - 96} ${16 + i * 18})`}>
+            <g key={s.label} transform={`translate(${widthPx - 96} ${heightPx - 20 - (shapes.length - 1 - i) * 18})`}>
               <line class={`plot-shape plot-shape-${s.kind}`} x1={0} x2={22} y1={-4} y2={-4} />
               <text x={26} y={0}>{s.label}</text>
             </g>

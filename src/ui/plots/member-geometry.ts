@@ -72,3 +72,21 @@ export function shapePoints(zM: readonly number[], displacement: readonly number
   }
   return pts.join(' ');
 }
+
+/**
+ * Label positions for landmarks inside the member's length, pushed apart so no two overlap:
+ * sorted top to bottom, each at least `gapPx` below the one above. Landmarks outside [0, L] are left out
+ * (they are listed beside the plot instead).
+ */
+export function landmarkLabels(marks: readonly { label: string; zM: number }[], lengthM: number, box: PlotBox, gapPx = 12): { label: string; yLine: number; yText: number }[] {
+  const inside = marks
+    .filter((m) => m.zM >= -1e-9 * lengthM && m.zM <= lengthM * (1 + 1e-9))
+    .map((m) => ({ label: m.label, yLine: zToY(m.zM, lengthM, box) }))
+    .sort((a, b) => a.yLine - b.yLine);
+  let last = -Infinity;
+  return inside.map((m) => {
+    const yText = Math.max(m.yLine - 3, last + gapPx, gapPx);
+    last = yText;
+    return { ...m, yText };
+  });
+}
