@@ -1,7 +1,7 @@
 import { test, expect, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 import { FORMS, type MemberKind } from '../../src/forms';
-import { wetmodeJson, sig3 } from './support/cli';
+import { wetmodeJson, formatHz } from './support/cli';
 
 const KIND_BUTTON: Record<MemberKind, RegExp> = {
   pile: /^Pile/,
@@ -38,8 +38,8 @@ for (const kind of ['riser', 'baffle', 'stem'] as const) {
     const built = FORMS[kind].build({ ...FORMS[kind].defaults('si'), ...typed }, 'si');
     if (!built.ok) throw new Error(JSON.stringify(built.errors));
     const cli = wetmodeJson('member', built.build.model);
-    await expect(page.getByTestId('quick-dry')).toHaveText(`${sig3(cli.dry.frequenciesHz[0])} Hz`);
-    await expect(page.getByTestId('quick-wet')).toHaveText(`${sig3(cli.wet.frequenciesHz[0])} Hz`);
+    await expect(page.getByTestId('quick-dry')).toHaveText(formatHz(cli.dry.frequenciesHz[0]));
+    await expect(page.getByTestId('quick-wet')).toHaveText(formatHz(cli.wet.frequenciesHz[0]));
     for (const size of [
       { name: 'landscape', width: 1024, height: 768 },
       { name: 'portrait', width: 768, height: 1024 },

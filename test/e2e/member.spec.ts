@@ -1,7 +1,7 @@
 import { test, expect, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 import { FORMS, DEMO_CASES } from '../../src/forms';
-import { wetmodeJson, sig3 } from './support/cli';
+import { wetmodeJson, formatHz } from './support/cli';
 
 const field = (page: Page, key: string) => page.locator(`[data-field="${key}"] input, [data-field="${key}"] select`).first();
 
@@ -30,8 +30,8 @@ test.describe('pile form', () => {
     const built = FORMS.pile.build(values, 'si');
     if (!built.ok) throw new Error(JSON.stringify(built.errors));
     const cli = wetmodeJson('member', built.build.model);
-    await expect(page.getByTestId('quick-dry')).toHaveText(`${sig3(cli.dry.frequenciesHz[0])} Hz`);
-    await expect(page.getByTestId('quick-wet')).toHaveText(`${sig3(cli.wet.frequenciesHz[0])} Hz`);
+    await expect(page.getByTestId('quick-dry')).toHaveText(formatHz(cli.dry.frequenciesHz[0]));
+    await expect(page.getByTestId('quick-wet')).toHaveText(formatHz(cli.wet.frequenciesHz[0]));
     await expect(page.getByTestId('stale-note')).toHaveCount(0);
   });
 

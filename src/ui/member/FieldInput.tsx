@@ -1,5 +1,7 @@
 import type { FieldDef, UnitSystem } from '../../forms';
 import { unitLabel } from '../../units';
+import { describedBy, FieldShell } from '../controls/FieldShell';
+import { TextField } from '../controls/TextField';
 
 interface Props {
   field: FieldDef;
@@ -13,49 +15,25 @@ interface Props {
 }
 
 /**
- * One form field: label, input with its unit beside it, help, and the message when what was typed does not
- * read. Quantities use the decimal keypad on tablets; lists and choices their own controls.
+ * One form field of a guided form: quantities with their unit beside them and the decimal keypad on tablets,
+ * lists as plain text, choices as a select.
  */
 export function FieldInput({ field, value, system, error, placeholder, onInput, idPrefix }: Props) {
   const id = `${idPrefix}-${field.key}`;
-  const helpId = field.help ? `${id}-help` : undefined;
-  const errId = error ? `${id}-error` : undefined;
-  const describedBy = [errId, helpId].filter(Boolean).join(' ') || undefined;
+  const shell = { id, label: field.label, error, help: field.help, fieldKey: field.key };
+  if (field.type !== 'choice') {
+    const unit = field.units[system];
+    return (
+      <TextField {...shell} value={value} unit={unit ? unitLabel(unit) : undefined} placeholder={placeholder} mode={field.type === 'quantity' ? 'decimal' : 'text'} onInput={onInput} />
+    );
+  }
   return (
-    <div class={`field${error ? ' has-error' : ''}`} data-field={field.key}>
-      <label for={id}>{field.label}</label>
-      <div class="field-control">
-        {field.type === 'choice' ? (
-          <select id={id} value={value} aria-describedby={describedBy} aria-invalid={error ? true : undefined} onChange={(e) => onInput((e.target as HTMLSelectElement).value)}>
-            {field.choices.map((c) => (
-              <option key={c.value} value={c.value}>{c.label}</option>
-            ))}
-          </select>
-        ) : (
-          <>
-            <input
-              id={id}
-              type="text"
-              inputMode={field.type === 'quantity' ? 'decimal' : 'text'}
-              autoComplete="off"
-              spellcheck={false}
-              value={value}
-              placeholder={placeholder}
-              aria-describedby={describedBy}
-              aria-invalid={error ? true : undefined}
-              onInput={(e) => onInput((e.target as HTMLInputElement).value)}
-            />
-            {field.units[system] && <span class="unit" aria-hidden="true">{unitLabel(field.units[system])}</span>}
-          </>
-        )}
-      </div>
-      {error && (
-        <p class="field-error" id={errId}>
-          <span aria-hidden="true">✖ </span>
-          {error}
-        </p>
-      )}
-      {field.help && <p class="field-help" id={helpId}>{field.help}</p>}
-    </div>
+    <FieldShell {...shell}>
+      <select id={id} value={value} aria-describedby={describedBy(id, error, field.help)} aria-invalid={error ? true : undefined} onChange={(e) => onInput((e.target as HTMLSelectElement).value)}>
+        {field.choices.map((c) => (
+          <option key={c.value} value={c.value}>{c.label}</option>
+        ))}
+      </select>
+    </FieldShell>
   );
 }

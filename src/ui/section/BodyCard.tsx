@@ -1,5 +1,5 @@
 import { BODY_SHAPES, bodyKey, type BodyForm, type BodyShape, type FieldErrors } from './form';
-import { TextField } from './TextField';
+import { TextField } from '../controls/TextField';
 
 interface Props {
   body: BodyForm;

@@ -17,7 +17,7 @@ import { PresetBar } from './PresetBar';
 import { SectionNumbers } from './SectionNumbers';
 import { SectionPlot } from './SectionPlot';
 import { FREE_SURFACE_NOTE, SurroundingsEditor, type Clearances } from './SurroundingsEditor';
-import { TextField } from './TextField';
+import { TextField } from '../controls/TextField';
 
 interface ViewState {
   form: SectionForm;

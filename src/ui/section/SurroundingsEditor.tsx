@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
 import { surroundKey, type EnclosureShape, type FieldErrors, type SurroundForm, type WallSide } from './form';
-import { TextField } from './TextField';
+import { TextField } from '../controls/TextField';
 
 export type Clearances = Partial<Record<'wallBelow' | 'wallBeside' | 'freeSurface', number>>;
 

@@ -7,8 +7,5 @@ export function wetmodeJson(command: string, input: unknown): any {
   return JSON.parse(r.stdout);
 }
 
-/** Three significant figures as the app shows them (formatSig). */
-export function sig3(x: number): string {
-  const digits = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(x))));
-  return x.toFixed(digits);
-}
+/** A frequency as the app shows it: the app's own formatter, so the test compares numbers, not formatting. */
+export { formatHz } from '../../../src/ui/format/numbers';
