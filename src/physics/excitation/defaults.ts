@@ -52,22 +52,15 @@ const USER_SOURCE = 'entered by user';
 /** Defaults with overrides laid over them; an override without a source is marked "entered by user". */
 export function mergeLimits(overrides: LimitOverrides | undefined): ScreeningLimits {
   const o = overrides ?? {};
-  const d = DEFAULT_LIMITS;
+  const pick = <K extends keyof ScreeningLimits>(key: K): ScreeningLimits[K] => {
+    const v = o[key];
+    return v ? ({ ...v, source: v.source ?? USER_SOURCE } as ScreeningLimits[K]) : DEFAULT_LIMITS[key];
+  };
   return {
-    inLineReducedVelocity: o.inLineReducedVelocity
-      ? { ...o.inLineReducedVelocity, source: o.inLineReducedVelocity.source ?? USER_SOURCE }
-      : d.inLineReducedVelocity,
-    inLineStabilityMax: o.inLineStabilityMax
-      ? { ...o.inLineStabilityMax, source: o.inLineStabilityMax.source ?? USER_SOURCE }
-      : d.inLineStabilityMax,
-    crossFlowReducedVelocity: o.crossFlowReducedVelocity
-      ? { ...o.crossFlowReducedVelocity, source: o.crossFlowReducedVelocity.source ?? USER_SOURCE }
-      : d.crossFlowReducedVelocity,
-    stemFrequencyRatioMax: o.stemFrequencyRatioMax
-      ? { ...o.stemFrequencyRatioMax, source: o.stemFrequencyRatioMax.source ?? USER_SOURCE }
-      : d.stemFrequencyRatioMax,
-    separationMargin: o.separationMargin
-      ? { ...o.separationMargin, source: o.separationMargin.source ?? USER_SOURCE }
-      : d.separationMargin,
+    inLineReducedVelocity: pick('inLineReducedVelocity'),
+    inLineStabilityMax: pick('inLineStabilityMax'),
+    crossFlowReducedVelocity: pick('crossFlowReducedVelocity'),
+    stemFrequencyRatioMax: pick('stemFrequencyRatioMax'),
+    separationMargin: pick('separationMargin'),
   };
 }
