@@ -99,6 +99,18 @@ const STEM_LIMIT: readonly FieldDef[] = [
 
 const COMMON: readonly FieldDef[] = [
   {
+    key: 'machineryAgainst',
+    label: 'Check machinery against',
+    type: 'choice',
+    choices: [
+      { value: 'wet', label: 'Wet frequencies' },
+      { value: 'wet-and-dry', label: 'Wet and dry frequencies', help: 'Also when the liquid is gone but the machine still runs (a drained tank, a low tide).' },
+    ],
+    default: 'wet',
+    advanced: true,
+    help: 'Add the dry frequencies when the member can be out of the liquid while the machine runs (a drained tank or sump).',
+  },
+  {
     key: 'dampingRatio',
     label: 'Structural damping ratio',
     type: 'quantity',
@@ -242,6 +254,7 @@ export function readExcitation(kind: MemberKind, values: FieldValues, system: Un
       stemFrequencyRatioScreen: kind === 'stem',
       waves,
       machinery: machinery.length > 0 ? machinery : undefined,
+      machineryAgainst: r.choice('machineryAgainst') === 'wet-and-dry' ? 'wet-and-dry' : 'wet',
       limits: margin !== DEFAULT_LIMITS.separationMargin.value ? { ...limits, separationMargin: { value: margin } } : limits,
     },
   };

@@ -89,4 +89,12 @@ describe('resonance inputs form', () => {
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
     expect(r.excitation.machinery?.[0]).toMatchObject({ shaftOrders: [1, 2, 3], bladePassOrders: [1, 2], bladeCount: 7 });
   });
+
+  it('machinery can be checked against the dry frequencies too (a drained tank with the agitator running)', () => {
+    const r = readExcitation('baffle', { machineSpeed: '84 rpm', bladeCount: '3', machineryAgainst: 'wet-and-dry' }, 'si', pileBuild());
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.excitation.machineryAgainst).toBe('wet-and-dry');
+    const screened = screenResonance(screeningInputFor(pileBuild().model, solvedPile(), r.excitation));
+    expect(screened.modes[0].checks.some((c) => c.kind === 'machinery' && c.frequencyBasis === 'dry')).toBe(true);
+  });
 });
