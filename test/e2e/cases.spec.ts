@@ -99,3 +99,15 @@ test('the report prints to PDF with the cautions on it', async ({ page }) => {
   expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
   expect(pdf.length).toBeGreaterThan(20_000);
 });
+
+test('with no storage (as in some private modes) the app still computes and says plainly that cases cannot be kept', async ({ page }) => {
+  await page.addInitScript(() => {
+    Object.defineProperty(window, 'indexedDB', { value: undefined, configurable: true });
+  });
+  await page.goto('/');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.getByRole('button', { name: 'Save case' }).click();
+  await expect(page.getByText(/cannot be kept on this device/).first()).toBeVisible();
+  await page.goto('/#/cases');
+  await expect(page.getByText('Cases cannot be kept on this device.')).toBeVisible();
+});

@@ -19,7 +19,7 @@ import './cases.css';
  * rename, delete with undo), case files, and how storage stands on this device.
  */
 export function CasesScreen() {
-  const { store, storeMessage } = useServices();
+  const { store, storeMessage, storeRetryable } = useServices();
   const [state, model] = useModel();
   const [listState, reload] = useCaseList(store);
   const [status, setStatus] = useState<Status | null>(null);
@@ -53,7 +53,7 @@ export function CasesScreen() {
   return (
     <section class="screen cases-screen" aria-labelledby="screen-title">
       <h1 id="screen-title" tabIndex={-1}>Cases</h1>
-      <StorageBanner store={store} storeMessage={storeMessage} />
+      <StorageBanner store={store} storeMessage={storeMessage} retryable={storeRetryable} />
       {prompt}
       <OpenCaseBar state={state} model={model} store={store} setStatus={setStatus} onSaved={() => void afterChange()} />
       <StatusLine status={status} onDismiss={() => setStatus(null)} focusRef={statusRef} />

@@ -6,7 +6,7 @@ import { persistenceWords, sentence } from './words';
 import './cases.css';
 
 /** When cases cannot be kept on this device: says so and why; links and files still work. */
-export function StorageBanner({ store, storeMessage }: { store: CaseStore | null; storeMessage: string | null }) {
+export function StorageBanner({ store, storeMessage, retryable }: { store: CaseStore | null; storeMessage: string | null; retryable?: boolean }) {
   if (storeMessage) {
     return (
       <div class="storage-banner" role="alert">
@@ -15,6 +15,12 @@ export function StorageBanner({ store, storeMessage }: { store: CaseStore | null
           <strong>Cases cannot be kept on this device.</strong> {sentence(storeMessage)}
         </p>
         {!/link/i.test(storeMessage) && <p>You can still work on a case, copy its link and export it as a case file.</p>}
+        {retryable && (
+          <p>
+            Close any other Wetmode tabs or windows, then{' '}
+            <button type="button" class="btn" onClick={() => location.reload()}>Reload Wetmode</button>
+          </p>
+        )}
       </div>
     );
   }

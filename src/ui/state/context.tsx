@@ -10,6 +10,8 @@ export interface AppServices {
   store: CaseStore | null;
   /** Why cases cannot be kept on this device, in words (null when the store is fine). */
   storeMessage: string | null;
+  /** True when reloading (after closing other Wetmode tabs) may open the store. */
+  storeRetryable?: boolean;
 }
 
 const Ctx = createContext<AppServices | null>(null);

@@ -28,12 +28,13 @@ export function caseFromDemo(demo: DemoCase): Case {
   };
 }
 
-export type StoreOpening = { store: CaseStore; message: null } | { store: null; message: string };
+export type StoreOpening = { store: CaseStore; message: null; retryable: false } | { store: null; message: string; retryable: boolean };
 
 export async function openDeviceStore(): Promise<StoreOpening> {
-  if (typeof indexedDB === 'undefined') return { store: null, message: 'This browser offers no storage for cases here. Links and files still work.' };
+  if (typeof indexedDB === 'undefined') return { store: null, message: 'This browser offers no storage for cases here. Links and files still work.', retryable: false };
   const r = await openStore();
-  return r.ok ? { store: r.value, message: null } : { store: null, message: r.message };
+  // Blocked by another tab, closed under us, or upgraded by a newer Wetmode: a reload (after closing other tabs) fixes it.
+  return r.ok ? { store: r.value, message: null, retryable: false } : { store: null, message: r.message, retryable: r.kind === 'blocked' || r.kind === 'closed' || r.kind === 'newer-database' };
 }
 
 /**

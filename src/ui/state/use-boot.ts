@@ -28,7 +28,7 @@ export function useBoot(openingLink: boolean): AppServices & { ready: boolean } 
           if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = '#/member';
         }
       }
-      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, ready: true });
+      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, storeRetryable: opened.retryable, ready: true });
     })();
     const offUpdate = onBeforeUpdate(() => model.flushDraft());
     const onHide = () => {
