@@ -38,13 +38,15 @@ export interface AddedMassPlan {
   perforation: { ratio: number; factor: number; source: string } | null;
   /** Distinct section-solver calls made for this plan. */
   sectionSolves: number;
+  /** Largest estimated relative discretisation error of the section-solver added masses used (null: none, or not given). */
+  sectionRelativeError: number | null;
   warnings: string[];
 }
 
 export type AddedMassPlanOutcome = { ok: true; plan: AddedMassPlan } | { ok: false; reason: 'section-solver-failed'; message: string };
 
-/** Cache of section-solver coefficients by input, shared across the mesh levels of one solve. */
-export type SectionCache = Map<string, number>;
+/** Cache of section-solver coefficients (and their error estimates) by input, shared across the mesh levels of one solve. */
+export type SectionCache = Map<string, { ca: number; relativeError: number | null }>;
 
 export function addedMassPerM(plan: AddedMassPlan, seg: MemberSegment, segIndex: number, t: number): number {
   const s = plan.segments[segIndex];
@@ -63,6 +65,7 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
   const warnings: string[] = [];
   const segments: (SegmentAddedMass | null)[] = [];
   let solves = 0;
+  let worstError: number | null = null;
   let anyPlate = false;
   for (let i = 0; i < model.segments.length; i++) {
     const seg = model.segments[i];
@@ -85,20 +88,22 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     for (const [t, section] of [[0, seg.section], [1, seg.endSection ?? seg.section]] as const) {
       const input = sectionInput(section, coat, rho, boundaries);
       const key = JSON.stringify(input);
-      let ca = cache.get(key);
-      if (ca === undefined) {
+      let hit = cache.get(key);
+      if (hit === undefined) {
         const out = solver(input);
         solves++;
         if (!out.ok) {
           return { ok: false, reason: 'section-solver-failed', message: `added mass of segments[${i}] in its surroundings: ${out.message}` };
         }
-        ca = out.result.addedMass[0][0] / (rho * sectionAt(seg, t).referenceAreaM2);
+        const ca = out.result.addedMass[0][0] / (rho * sectionAt(seg, t).referenceAreaM2);
         if (!(Number.isFinite(ca) && ca > 0)) {
           return { ok: false, reason: 'section-solver-failed', message: `section solver gave a non-positive added mass for segments[${i}]` };
         }
-        cache.set(key, ca);
+        hit = { ca, relativeError: out.result.swayRelativeError ?? null };
+        cache.set(key, hit);
       }
-      cas.push(ca * perf);
+      if (hit.relativeError !== null) worstError = Math.max(worstError ?? 0, hit.relativeError);
+      cas.push(hit.ca * perf);
     }
     segments.push({ method: 'section solver', caStart: cas[0], caEnd: cas[1], perforationFactor: perf });
   }
@@ -107,7 +112,7 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
   if (perforation) {
     warnings.push('Perforation reduces the added mass only; the plate mass and stiffness are those of a solid plate.');
   }
-  const plan: AddedMassPlan = { densityKgPerM3: rho, segments, endEffect: null, perforation, sectionSolves: solves, warnings };
+  const plan: AddedMassPlan = { densityKgPerM3: rho, segments, endEffect: null, perforation, sectionSolves: solves, sectionRelativeError: worstError, warnings };
   if (liq.endEffect3d) plan.endEffect = endEffect(model, warnings);
   return { ok: true, plan };
 }

@@ -73,6 +73,8 @@ export interface MemberResult {
     endEffect: { factor: number; basis: string; submergedLengthM: number; widthM: number; source: string } | null;
     perforation: { ratio: number; factor: number; source: string } | null;
     sectionSolves: number;
+    /** Largest estimated relative discretisation error of the section-solver added masses (null when none used). */
+    sectionRelativeError: number | null;
   } | null;
   mesh: MeshReport;
   warnings: string[];

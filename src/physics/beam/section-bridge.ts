@@ -8,7 +8,8 @@ import type { BodySpec, BoundarySpec, SectionInput } from '../section/types';
 import type { MemberSection } from './model';
 
 export type SectionSolverOutcome =
-  | { ok: true; result: { addedMass: number[][] } }
+  /** `swayRelativeError`: estimated relative discretisation error of addedMass[0][0], when the solver gives one. */
+  | { ok: true; result: { addedMass: number[][]; swayRelativeError?: number } }
   | { ok: false; reason: string; message: string };
 
 /** Contract of `solveSection` in src/physics/section/index.ts. */
@@ -52,5 +53,6 @@ export const defaultSectionSolver: SectionSolver = (input) => {
   const sway = out.result.errorEstimates.find((e) => e.body === 0 && e.motion === 'x');
   const addedMass = out.result.addedMass.map((row) => row.slice());
   if (sway && Number.isFinite(sway.extrapolated) && sway.extrapolated > 0) addedMass[0][0] = sway.extrapolated;
-  return { ok: true, result: { addedMass } };
+  // The extrapolated value is more accurate than the fine one, so the fine-to-extrapolated gap bounds its error.
+  return { ok: true, result: { addedMass, swayRelativeError: sway ? sway.relativeError : undefined } };
 };

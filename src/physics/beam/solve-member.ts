@@ -120,7 +120,7 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
       minN: sys.tension.minN,
       maxN: sys.tension.maxN,
     },
-    addedMass: plan ? { endEffect: plan.endEffect, perforation: plan.perforation, sectionSolves: plan.sectionSolves } : null,
+    addedMass: plan ? { endEffect: plan.endEffect, perforation: plan.perforation, sectionSolves: plan.sectionSolves, sectionRelativeError: plan.sectionRelativeError } : null,
     mesh: {
       elements: history[history.length - 1],
       history,

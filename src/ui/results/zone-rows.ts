@@ -60,7 +60,7 @@ export interface SourcedLine {
   source: string;
 }
 
-function methodLine(method: AddedMassMethod, sectionSolves: number): SourcedLine {
+function methodLine(method: AddedMassMethod, sectionSolves: number, relativeError: number | null): SourcedLine {
   switch (method) {
     case 'circle closed form (Lamb)':
       return { text: 'Circle in open liquid, closed form m_a = ρ π D²/4 (Ca = 1)', source: 'H. Lamb, Hydrodynamics (classical)' };
@@ -70,7 +70,8 @@ function methodLine(method: AddedMassMethod, sectionSolves: number): SourcedLine
       return {
         text:
           `Confined section: 2D potential-flow section solver (boundary elements), ${SECTION_PANELS} panels per body ` +
-          `with a ${SECTION_PANELS / 2}-panel companion solve, Richardson-extrapolated; ${sectionSolves} distinct section solve${sectionSolves === 1 ? '' : 's'}`,
+          `with a ${SECTION_PANELS / 2}-panel companion solve, Richardson-extrapolated; ${sectionSolves} distinct section solve${sectionSolves === 1 ? '' : 's'}` +
+          (relativeError !== null ? `; estimated discretisation error at most ${formatPercent(relativeError, 2)}` : ''),
         source: 'Wetmode section solver (potential flow, Laplace equation; see the Section screen)',
       };
   }
@@ -81,7 +82,7 @@ export function addedMassLines(member: MemberResult, units: DisplayUnits): Sourc
   const methods: AddedMassMethod[] = [];
   for (const z of member.zones) if (z.submerged && z.addedMassMethod && !methods.includes(z.addedMassMethod)) methods.push(z.addedMassMethod);
   const am = member.addedMass;
-  const lines = methods.map((m) => methodLine(m, am?.sectionSolves ?? 0));
+  const lines = methods.map((m) => methodLine(m, am?.sectionSolves ?? 0, am?.sectionRelativeError ?? null));
   if (am?.perforation) {
     const p = am.perforation;
     lines.push({ text: `Perforation ratio ${formatPercent(p.ratio)}: added mass × ${num(p.factor)}`, source: p.source });

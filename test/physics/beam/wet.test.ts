@@ -102,6 +102,10 @@ describe('wet modes: added mass on the submerged length', () => {
     // Boundary elements at the solver's default resolution: 0.1 % is ample (observed ≈ 0.02 %).
     expectClose(r.zones[0].addedKgPerM, fritz, { rtol: 1e-3, label: 'confined added mass' });
     expect(r.zones[0].addedMassMethod).toBe('section solver');
+    // The reported error estimate is honest: it is positive and the true error against Fritz lies within it.
+    const estimate = r.addedMass!.sectionRelativeError!;
+    expect(estimate).toBeGreaterThan(0);
+    expect(Math.abs(r.zones[0].addedKgPerM - fritz) / fritz).toBeLessThanOrEqual(estimate);
   });
 
   it('a failing section solver is a typed result, not an exception', () => {

@@ -54,7 +54,7 @@ export function wetMember(over: Partial<MemberResult> = {}): MemberResult {
     wetToDryRatio: [0.5 / 0.55, 3.0 / 3.3],
     zones: [zone({}), zone({ fromM: 15, toM: 20, submerged: false, addedKgPerM: 0, addedMassCoefficientCa: null, addedToDisplacedLiquidMass: null, addedToStructuralMass: null, addedMassMethod: null })],
     tension: { varies: false, topN: 0, bottomN: 0, minN: 0, maxN: 0 },
-    addedMass: { endEffect: null, perforation: null, sectionSolves: 0 },
+    addedMass: { endEffect: null, perforation: null, sectionSolves: 0, sectionRelativeError: null },
     mesh: { elements: 32, history: [16, 32], converged: true, lastChangePercent: 0.01, relativeTolerance: 5e-4 },
     warnings: [],
     ...over,

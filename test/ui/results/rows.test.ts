@@ -48,6 +48,7 @@ describe('mass per length by zone', () => {
         endEffect: { factor: 0.62, basis: 'rectangular plate', submergedLengthM: 1.5, widthM: 0.25, source: 'DNV-RP-H103 Table A-2 (from memory)' },
         perforation: { ratio: 0.2, factor: 0.85, source: 'DNV-RP-H103 §4.6.4.3 (from memory)' },
         sectionSolves: 0,
+        sectionRelativeError: null,
       },
     });
     const lines = addedMassLines(m, displayUnits('si'));
@@ -60,7 +61,7 @@ describe('mass per length by zone', () => {
   });
 
   it('states the section solver resolution and how many distinct sections were solved', () => {
-    const m = wetMember({ zones: [zone({ addedMassMethod: 'section solver' })], addedMass: { endEffect: null, perforation: null, sectionSolves: 2 } });
+    const m = wetMember({ zones: [zone({ addedMassMethod: 'section solver' })], addedMass: { endEffect: null, perforation: null, sectionSolves: 2, sectionRelativeError: null } });
     const [line] = addedMassLines(m, displayUnits('si'));
     expect(line.text).toContain('64 panels per body with a 32-panel companion solve');
     expect(line.text).toContain('2 distinct section solves');
