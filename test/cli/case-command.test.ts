@@ -1,0 +1,45 @@
+import { describe, it, expect } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { runCaseCommand } from '../../src/cli/case-command';
+import { runMemberCommand } from '../../src/cli/member-command';
+import { FORMS } from '../../src/forms';
+import { main } from '../../src/cli/main';
+import { expectClose } from '../helpers/expect-close';
+
+const EXAMPLE = 'examples/case-port-halloran-pile.wetmode.json';
+
+describe('wetmode case', () => {
+  it('solves a saved case with the same numbers as the member command on the model its forms build', () => {
+    const text = readFileSync(EXAMPLE, 'utf8');
+    const out = JSON.parse(runCaseCommand(text));
+    const c = JSON.parse(text);
+    const built = FORMS.pile.build(c.inputs, c.unitSystem);
+    if (!built.ok) throw new Error(JSON.stringify(built.errors));
+    const member = JSON.parse(runMemberCommand(JSON.stringify(built.build.model)));
+    expect(out.ok).toBe(true);
+    expect(out.dry.frequenciesHz).toEqual(member.dry.frequenciesHz); // same code path, same 6-figure rounding
+    expect(out.wet.frequenciesHz).toEqual(member.wet.frequenciesHz);
+    expect(out.model).toEqual(JSON.parse(JSON.stringify(built.build.model, (_k, v) => (typeof v === 'number' && !Number.isInteger(v) ? Number(v.toPrecision(6)) : v))));
+  });
+
+  it('the demo pile in a 1.2 m/s current is inside the in-line lock-in band (DNV-RP-C205 §9: 1.0 ≤ V_R ≤ 4.5)', () => {
+    const out = JSON.parse(runCaseCommand(readFileSync(EXAMPLE, 'utf8')));
+    const inLine = out.resonance.checks.find((k: { mode: number; excitation: string }) => k.mode === 1 && k.excitation === 'in-line VIV');
+    expect(inLine.verdict).toBe('inside-band');
+    // Critical speed = V_R,min × f_n × D (DNV-RP-C205 §9, V_R = U / (f_n D)), with D = 0.762 m + 2 × 75 mm growth at the waterline.
+    expectClose(inLine.criticalSpeedMPerS, 1.0 * out.wet.frequenciesHz[0] * 0.912, { rtol: 1e-5, label: 'in-line onset speed' });
+    expect(out.cautions.join(' ')).toContain('qualified engineer');
+  });
+
+  it('bad files say what was expected and what was got, and exit non-zero', () => {
+    expect(() => runCaseCommand('{ not json')).toThrow(/not valid JSON/);
+    expect(() => runCaseCommand(JSON.stringify({ format: 'something-else' }))).toThrow(/not a usable Wetmode case/);
+    const bad = JSON.parse(readFileSync(EXAMPLE, 'utf8'));
+    bad.inputs.wallThickness = '500 mm';
+    expect(() => runCaseCommand(JSON.stringify(bad))).toThrow(/wallThickness: wall thickness must be less than half the outer diameter \(381 mm\)/);
+    const err: string[] = [];
+    const code = main(['case', 'no/such/file.json'], () => undefined, (s) => err.push(s));
+    expect(code).toBe(1);
+    expect(err.join('')).toContain('no such file');
+  });
+});
