@@ -12,5 +12,5 @@ export { CASE_LIMITS, cutText } from './case/limits';
 export { isPlainObject } from './case/fields';
 export { parseCase } from './case/parse';
 export { CASE_STEPS, caseV0toV1, type CaseStep } from './case/migrations';
-export { sameCaseContent } from './case/compare';
+export { isRenamedCopy, sameCaseContent } from './case/compare';
 export { createCase, type CaseInit } from './case/create';

@@ -27,7 +27,7 @@ export type UndoToken = string;
 export type SameCaseAnswer =
   /** No saved case has this id. */
   | { status: 'new' }
-  /** A saved case has this id and the same entered content (see `sameCaseContent`). */
+  /** A saved case has this id and the same entered content (see `sameCaseContent`), or an earlier received copy of this same content (see `isRenamedCopy`). */
   | { status: 'same'; saved: Case }
   /** A saved case has this id but different content; `saved` is null when that record is unreadable. */
   | { status: 'changed'; saved: Case | null };

@@ -2,20 +2,24 @@
  * Received cases (from a link or a file). The rule: never overwrite. Same id and same entered content ->
  * nothing to do; same id but changed -> a copy with a new id and a name that says where it came from.
  */
-import { cutText } from '../physics/case';
-import { CASE_LIMITS, sameCaseContent, type Case } from '../physics/case';
+import { CASE_LIMITS, cutText, isRenamedCopy, parseCase, sameCaseContent, type Case } from '../physics/case';
 import type { ReceivedOutcome, SameCaseAnswer } from './api';
 import { checkIncoming, inTx, type StoreContext, type Tx } from './context';
 import { CASES } from './db-schema';
 import type { StoreResult } from './errors';
-import { parseCase } from '../physics/case';
 
 async function compareWithSaved(tx: Tx, c: Case): Promise<SameCaseAnswer> {
   const raw: unknown = await tx.objectStore(CASES).get(c.id);
   if (raw === undefined) return { status: 'new' };
   const saved = parseCase(raw);
   if (!saved.ok) return { status: 'changed', saved: null };
-  return sameCaseContent(saved.value, c) ? { status: 'same', saved: saved.value } : { status: 'changed', saved: saved.value };
+  if (sameCaseContent(saved.value, c)) return { status: 'same', saved: saved.value };
+  // The same changed link received before was saved as a renamed copy with a new id: that copy is "the same".
+  for (const other of await tx.objectStore(CASES).getAll()) {
+    const o = parseCase(other);
+    if (o.ok && o.value.id !== c.id && isRenamedCopy(o.value, c)) return { status: 'same', saved: o.value };
+  }
+  return { status: 'changed', saved: saved.value };
 }
 
 export function findSameCase(ctx: StoreContext, c: Case): Promise<StoreResult<SameCaseAnswer>> {

@@ -39,6 +39,17 @@ describe('findSameCase', () => {
 });
 
 describe('saveReceived never overwrites', () => {
+  it('the same changed link received twice is recognised the second time as the copy already saved', async () => {
+    const store = await harness().open();
+    unwrap(await store.saveCase(demoCase()));
+    const changed = await received({ ...demoCase(), note: 'Re-measured wall thickness.' });
+    const first = unwrap(await store.saveReceived(changed));
+    expect(first.status).toBe('saved-copy');
+    const second = unwrap(await store.saveReceived(await received({ ...demoCase(), note: 'Re-measured wall thickness.' })));
+    expect(second).toEqual({ status: 'same', case: first.case });
+    expect(unwrap(await store.listCases()).cases).toHaveLength(2);
+  });
+
   it('a changed copy of a case whose long name ends in emoji is saved whole, never with half an emoji', async () => {
     const store = await harness().open();
     // The copy's name is cut to make room for " (received 2026-12-01)" (22 characters): put an emoji across the cut.

@@ -18,3 +18,11 @@ export function sameCaseContent(a: Case, b: Case): boolean {
     sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation)
   );
 }
+
+/**
+ * True when `copy` holds `original`'s entered content under a name made from it (as a received copy is named
+ * "<name> (received <date>)"): the same tag, note, kind, units and values, and a name that starts with the original's.
+ */
+export function isRenamedCopy(copy: Case, original: Case): boolean {
+  return sameCaseContent({ ...copy, name: original.name }, original) && copy.name.startsWith(original.name === '' ? 'Case' : original.name);
+}
