@@ -3,16 +3,14 @@
  * The lead's CLI entry reads FILE (or standard input for `-`), calls `runSectionCommand`, prints the
  * returned text, and turns a thrown Error into its message on standard error with a non-zero exit.
  */
+import { cautionLines } from '../text/cautions';
 import { parseSectionInput, solveSection } from '../physics/section/index';
 import type { SectionInput, SectionResult } from '../physics/section/index';
 
-/** Cautions printed with every result (plain words for the field and the office). */
-export const SECTION_CAUTIONS: readonly string[] = [
-  'Screening estimate, not a design approval: verify with a qualified engineer under the local codes and licensed practice.',
-  'Uncertain inputs change the answer: marine growth, fixity, scour, contents, liquid density and the true outline of the section.',
+/** Limits of the section model itself, printed beside the general cautions. */
+export const SECTION_MODEL_LIMITS: readonly string[] = [
   'The free surface is taken in the high-frequency limit (zero potential); it holds only well above the sloshing frequencies.',
   'Two-dimensional strip values: three-dimensional end effects reduce the added mass of short members.',
-  "Never approach or climb a structure to collect data without the site's safety procedures.",
 ];
 
 /** Rounds to 6 significant digits for a readable report (the solver's own accuracy is ~1e-4 at best). */
@@ -82,7 +80,11 @@ function report(input: SectionInput, r: SectionResult): object {
     })),
     panels: { fine: r.panelsFine, coarse: r.panelsCoarse },
     method: r.notes,
-    cautions: SECTION_CAUTIONS,
+    energyCheckNote: r.energyChecks.some((e) => Math.abs(e.relativeDifference) > 0.05)
+      ? 'Some field integrals differ by more than 5 %: the field grid is too coarse for flow concentrated at edges or in thin gaps; rely on the boundary values and their error estimates.'
+      : null,
+    modelLimits: SECTION_MODEL_LIMITS,
+    cautions: cautionLines(),
   };
 }
 

@@ -101,7 +101,15 @@ export function EnergyTable({ result, units }: { result: SectionResult; units: S
             <th scope="row">{r.label}</th>
             <td>{r.boundary} {r.unit}</td>
             <td>{r.field} {r.unit}</td>
-            <td>{r.difference}</td>
+            <td>
+              {r.difference}
+              {r.flag && (
+                <>
+                  {' '}
+                  <span aria-hidden="true">⚠</span> <span class="field-help">{r.flag}</span>
+                </>
+              )}
+            </td>
           </tr>
         ))}
       </tbody>

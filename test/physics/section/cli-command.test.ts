@@ -34,9 +34,10 @@ describe('section command', () => {
     const out = JSON.parse(runSectionCommand('{"liquidDensityKgPerM3": 1025, "bodies": [{"shape": "circle", "diameterM": 0.6}]}'));
     const text = out.cautions.join(' ');
     expect(text).toMatch(/screening estimate, not a design approval/i);
-    expect(text).toMatch(/qualified engineer under the local codes and licensed practice/);
-    expect(text).toMatch(/marine growth, fixity, scour, contents/);
-    expect(text).toMatch(/Never approach or climb a structure/);
+    expect(text).toMatch(/qualified, licensed engineer under the codes and licensed practice/);
+    expect(text).toMatch(/scour, marine growth, corrosion, coating, contents/);
+    expect(out.modelLimits.join(' ')).toMatch(/high-frequency limit/);
+    expect(text).toMatch(/Never approach, climb, enter or lean over a structure/);
     // Ca of a circle at the default resolution (Lamb: 1), rounded to 6 digits in the report.
     expect(out.bodies[0].caX).toBeCloseTo(1, 5);
   });

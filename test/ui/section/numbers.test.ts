@@ -85,8 +85,15 @@ describe('the section numbers as text', () => {
 
   it('shows both energy values and their difference', () => {
     expect(energyRows(circleResult().energyChecks, si)).toEqual([
-      { label: 'body 1 sway (x)', unit: 'kg/m', boundary: '201.3', field: '200.9', difference: '\u22120.20 %' },
+      { label: 'body 1 sway (x)', unit: 'kg/m', boundary: '201.3', field: '200.9', difference: '\u22120.20 %', flag: null },
     ]);
+  });
+
+  it('flags a cross-check that disagrees by more than 5 % as a grid too coarse for the flow', () => {
+    const checks = circleResult().energyChecks.map((c) => ({ ...c, fieldIntegral: c.boundaryIntegral * 0.8, relativeDifference: -0.2 }));
+    const [row] = energyRows(checks, si);
+    expect(row.difference).toBe('\u221220 %');
+    expect(row.flag).toMatch(/field grid is too coarse/);
   });
 
   it('shows round-off entries as 0 and gives them no error estimate', () => {
