@@ -29,3 +29,14 @@ test('the section view passes an accessibility scan at tablet portrait size', as
   const scan = await new AxeBuilder({ page }).analyze();
   expect(scan.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
 });
+
+test('the Results screen shows the submerged section of the open member with its flow map and Ca', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.goto('/#/results');
+  // The demo pile stands in open water: a circle, Ca = 1 (H. Lamb, Hydrodynamics, classical).
+  await expect(page.getByTestId('member-section-ca')).toContainText('Sway Ca = 1.000');
+  await page.getByRole('link', { name: 'Open in the Section view' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Section' })).toBeVisible();
+  await expect(page.getByText(/This member's section at z =/)).toBeVisible();
+});

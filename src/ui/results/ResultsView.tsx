@@ -1,3 +1,4 @@
+import type { ComponentChildren } from 'preact';
 import type { Case } from '../../physics/case';
 import type { Results } from '../state/app-model';
 import { displayUnits } from './display-units';
@@ -19,13 +20,15 @@ export interface ResultsViewProps {
   computing: boolean;
   /** Field messages on the Member form (member and resonance inputs). */
   errorsCount: number;
+  /** Shown after the mass table (the submerged section and its flow map). */
+  sectionPanel?: ComponentChildren;
 }
 
 /**
  * The Results screen body: summary, modes, mode shapes, mass by zone, resonance, warnings, assumptions and
  * cautions. Last results stay on screen when the inputs change, marked out of date.
  */
-export function ResultsView({ doc, results, stale, computing, errorsCount }: ResultsViewProps) {
+export function ResultsView({ doc, results, stale, computing, errorsCount, sectionPanel }: ResultsViewProps) {
   const banner = <StatusBanner hasResults={results !== null} stale={stale} computing={computing} errorsCount={errorsCount} />;
   const answer = results?.answer;
   if (!results || !answer) {
@@ -55,6 +58,7 @@ export function ResultsView({ doc, results, stale, computing, errorsCount }: Res
         <ModesTable member={member} />
         <ModeShapePanel build={results.build} member={member} units={units} />
         <MassTable member={member} units={units} />
+        {member.wet && sectionPanel}
         {screening && <ResonancePanel screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
         <DiagnosticsPanel member={member} units={units} />
         <AssumptionsPanel member={member} build={results.build} />

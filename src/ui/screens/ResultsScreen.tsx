@@ -3,7 +3,7 @@ import { ResultsView } from '../results/ResultsView';
 import { hashFor } from '../shell/router';
 import { FORMS } from '../../forms';
 import type { ComponentChildren } from 'preact';
-import { MemberSectionLink } from '../section/MemberSectionLink';
+import { MemberSectionPanel } from '../section/MemberSectionPanel';
 
 /** The Results screen: the open case's results; `banner` is shown above them (a received case). */
 export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren; actions?: ComponentChildren }) {
@@ -20,12 +20,14 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
       ) : (
         <>
           {actions}
-          {state.results && (
-            <p class="results-section-link">
-              <MemberSectionLink model={state.results.build.model} label="Submerged section: added mass and flow map" />
-            </p>
-          )}
-          <ResultsView doc={doc} results={state.results} stale={!model.resultsCurrent()} computing={state.computing} errorsCount={Object.keys(state.errors).length} />
+          <ResultsView
+            doc={doc}
+            results={state.results}
+            stale={!model.resultsCurrent()}
+            computing={state.computing}
+            errorsCount={Object.keys(state.errors).length}
+            sectionPanel={state.results && <MemberSectionPanel model={state.results.build.model} system={doc.unitSystem} />}
+          />
         </>
       )}
     </section>

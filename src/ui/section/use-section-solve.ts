@@ -58,8 +58,12 @@ export function answerProblem(a: Answer<SectionAnswer>): string | null {
   }
 }
 
-/** Solves `input` (null: nothing to solve) and maps `map`; re-runs when either changes. */
-export function useSectionSolve(input: SectionInput | null, map: SectionMapRequest | null): SolveState {
+/**
+ * Solves `input` (null: nothing to solve) and maps `map`; re-runs when either changes. `energyCheck: false`
+ * skips the slow second step (a summary view that shows no cross-check).
+ */
+export function useSectionSolve(input: SectionInput | null, map: SectionMapRequest | null, options: { energyCheck?: boolean } = {}): SolveState {
+  const withCheck = options.energyCheck ?? true;
   const [state, setState] = useState<SolveState>({ phase: 'idle', message: null, shown: null });
   const key = inputKey(input);
   const mapKey = JSON.stringify(map);
@@ -82,6 +86,10 @@ export function useSectionSolve(input: SectionInput | null, map: SectionMapReque
         return;
       }
       const { result, field, fieldError } = a.value;
+      if (!withCheck) {
+        setState({ phase: 'done', message: null, shown: { key, input, result, field, fieldError } });
+        return;
+      }
       setState({ phase: 'checking', message: null, shown: { key, input, result, field, fieldError } });
       checking = true;
       const b = await c.request({ op: 'section', input, energyCheck: true, map: null });
@@ -99,6 +107,6 @@ export function useSectionSolve(input: SectionInput | null, map: SectionMapReque
       if (checking) c.terminate();
     };
     // key and mapKey stand for input and map, which are new objects on every render.
-  }, [key, mapKey]);
+  }, [key, mapKey, withCheck]);
   return state;
 }
