@@ -9,7 +9,8 @@ const backgroundColour = '#f7f9fb';
 
 export default defineConfig({
   define: {
-    __APP_VERSION__: JSON.stringify(pkg.version),
+    // WETMODE_BUILD_STAMP marks a build apart from another of the same version (used by the update test).
+    __APP_VERSION__: JSON.stringify(pkg.version + (process.env.WETMODE_BUILD_STAMP ? `+${process.env.WETMODE_BUILD_STAMP}` : '')),
   },
   plugins: [
     preact(),

@@ -38,6 +38,12 @@ export function UpdatePrompt() {
   async function accept() {
     try {
       await runBeforeUpdate();
+      // On the very first visit the page is not yet controlled: the new worker is already active (nothing
+      // waits), so a plain reload is what brings the new version in.
+      if (!navigator.serviceWorker?.controller) {
+        location.reload();
+        return;
+      }
       await updateServiceWorker(true);
     } catch (e) {
       setError(`Update not applied: your work could not be saved first (${e instanceof Error ? e.message : String(e)}).`);

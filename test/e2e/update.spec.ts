@@ -1,0 +1,95 @@
+import { test, expect } from '@playwright/test';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { cpSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+/**
+ * A new version arriving while a case is open: the app waits for the user, and keeps the open work.
+ * Runs on its own server (port 4174) over a copy of the build, so rebuilding it disturbs no other test.
+ */
+const PORT = 4174;
+let dir = '';
+let server: ChildProcess | null = null;
+
+test.describe.configure({ mode: 'serial' });
+
+test.beforeAll(async () => {
+  dir = mkdtempSync(join(tmpdir(), 'wetmode-update-'));
+  cpSync('dist', dir, { recursive: true });
+  // Node runs Vite directly (not through npx), so killing this process stops the server.
+  server = spawn(process.execPath, ['node_modules/vite/bin/vite.js', 'preview', '--outDir', dir, '--port', String(PORT), '--strictPort'], { stdio: 'ignore' });
+  for (let i = 0; i < 100; i++) {
+    try {
+      if ((await fetch(`http://localhost:${PORT}/`)).ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error('preview server for the update test did not start');
+});
+
+test.afterAll(() => {
+  server?.kill();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+test('a new version waits for the user, and updating keeps the case being edited', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto(`http://localhost:${PORT}/`);
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.evaluate(async () => {
+    const reg = await navigator.serviceWorker.ready;
+    const sw = reg.active!;
+    if (sw.state !== 'activated') await new Promise<void>((r) => sw.addEventListener('statechange', () => sw.state === 'activated' && r()));
+  });
+  // A later visit: the page is now controlled by the installed version, as on a surveyor's tablet.
+  await page.reload();
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  expect(await page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
+  const od = page.locator('[data-field="outerDiameter"] input');
+  await od.fill('813 mm');
+
+  // Publish a new build over the served one.
+  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
+    env: { ...process.env, WETMODE_BUILD_STAMP: 'update-test' },
+    encoding: 'utf8',
+  });
+  expect(built.status, built.stderr).toBe(0);
+  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+
+  // The prompt appears; the new version waits; nothing reloads by itself; the typed value is still there.
+  await expect(page.getByText('A new version of Wetmode is ready')).toBeVisible({ timeout: 30_000 });
+  expect(await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.waiting?.state)).toBe('installed');
+  await page.waitForTimeout(1500);
+  await expect(od).toHaveValue('813 mm');
+
+  await Promise.all([page.waitForEvent('load'), page.getByRole('button', { name: 'Update now' }).click()]);
+  await expect(page.locator('[data-field="outerDiameter"] input')).toHaveValue('813 mm'); // the draft came back
+  await page.goto(`http://localhost:${PORT}/#/report`);
+  await expect(page.getByText('Wetmode 0.1.0+update-test')).toBeVisible(); // the new version is the one running
+});
+
+test('a new version that arrives during the very first visit comes in with one tap too', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto(`http://localhost:${PORT}/`);
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.evaluate(async () => {
+    const reg = await navigator.serviceWorker.ready;
+    const sw = reg.active!;
+    if (sw.state !== 'activated') await new Promise<void>((r) => sw.addEventListener('statechange', () => sw.state === 'activated' && r()));
+  });
+  // First visit: the page is not controlled yet, so the new worker activates without waiting.
+  expect(await page.evaluate(() => navigator.serviceWorker.controller)).toBeNull();
+  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
+    env: { ...process.env, WETMODE_BUILD_STAMP: 'first-visit' },
+    encoding: 'utf8',
+  });
+  expect(built.status, built.stderr).toBe(0);
+  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+  await expect(page.getByText('A new version of Wetmode is ready')).toBeVisible({ timeout: 30_000 });
+  await Promise.all([page.waitForEvent('load'), page.getByRole('button', { name: 'Update now' }).click()]);
+  await page.goto(`http://localhost:${PORT}/#/report`);
+  await expect(page.getByText('Wetmode 0.1.0+first-visit')).toBeVisible();
+});
