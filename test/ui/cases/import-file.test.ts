@@ -20,13 +20,13 @@ describe('importing a case file', () => {
     expect(r.ok && r.message).toMatch(/It was made with an older Wetmode \(case version 0\) and has been brought up to date\.$/);
   });
   it('refuses a file that is not JSON, naming the file and what was expected', () => {
-    const r = open('notes.txt', 'name: pile');
+    const r = open('field-sheet.txt', 'name: pile');
     expect(r.ok).toBe(false);
-    expect(!r.ok && r.message).toMatch(/^Could not open “notes\.txt”: this file is not a Wetmode case: it is not valid JSON \(.*\)\.$/);
+    expect(!r.ok && r.message).toMatch(/^Could not open “field-sheet\.txt”: this file is not a Wetmode case: it is not valid JSON \(.*\)\.$/);
   });
-  it('refuses another program\u2019s JSON with the parser\u2019s reason', () => {
-    const r = open('data.json', '{"hello": "world"}');
-    expect(!r.ok && r.message.startsWith('Could not open “data.json”: this file is not a usable Wetmode case: ')).toBe(true);
+  it('refuses JSON that is not a case, with the parser\u2019s reason', () => {
+    const r = open('survey-log.json', '{"entries": []}');
+    expect(!r.ok && r.message.startsWith('Could not open “survey-log.json”: this file is not a usable Wetmode case: ')).toBe(true);
   });
   it('refuses a file from a newer Wetmode with "update the app"', () => {
     const r = open('new.wetmode.json', JSON.stringify({ ...demoCase(), schemaVersion: 99 }));
@@ -34,8 +34,8 @@ describe('importing a case file', () => {
   });
   it('refuses an empty or a huge file before reading it, with the size got', () => {
     expect(importSizeProblem('empty.json', 0)).toBe('Could not open “empty.json”: expected a Wetmode case file (.wetmode.json); got an empty file.');
-    expect(importSizeProblem('video.mp4', 35_000_000)).toBe(
-      'Could not open “video.mp4”: expected a Wetmode case file of a few kB (.wetmode.json); got a file of 35.0 MB.',
+    expect(importSizeProblem('site-photos.zip', 35_000_000)).toBe(
+      'Could not open “site-photos.zip”: expected a Wetmode case file of a few kB (.wetmode.json); got a file of 35.0 MB.',
     );
     expect(importSizeProblem('case.json', MAX_IMPORT_BYTES)).toBeNull();
     expect(importSizeProblem('case.json', MAX_IMPORT_BYTES + 1)).not.toBeNull();
