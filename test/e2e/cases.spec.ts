@@ -1,4 +1,5 @@
 import { test, expect, type Page } from '@playwright/test';
+import { serviceWorkerActivated } from './support/service-worker';
 
 async function openDemoAndSave(page: Page, name: string) {
   await page.goto('/');
@@ -15,11 +16,7 @@ test('a saved case is still there after a reload, and offline', async ({ page, c
   await expect(page.getByText('Berth 3 pile P7 check').first()).toBeVisible();
   await page.reload();
   await expect(page.getByText('Berth 3 pile P7 check').first()).toBeVisible();
-  await page.evaluate(async () => {
-    const reg = await navigator.serviceWorker.ready;
-    const sw = reg.active!;
-    if (sw.state !== 'activated') await new Promise<void>((r) => sw.addEventListener('statechange', () => sw.state === 'activated' && r()));
-  });
+  await serviceWorkerActivated(page);
   await context.setOffline(true);
   await page.reload();
   await expect(page.getByText('Berth 3 pile P7 check').first()).toBeVisible();

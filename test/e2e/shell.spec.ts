@@ -1,5 +1,6 @@
-import { test, expect, type Page } from '@playwright/test';
+import { test, expect } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
+import { serviceWorkerActivated } from './support/service-worker';
 
 const TABLET_SIZES = [
   { name: 'landscape', width: 1024, height: 768 },
@@ -7,16 +8,6 @@ const TABLET_SIZES = [
 ];
 const SCREENS = ['cases', 'member', 'results', 'report', 'section', 'cautions'];
 
-async function waitForServiceWorker(page: Page): Promise<string> {
-  return page.evaluate(async () => {
-    const reg = await navigator.serviceWorker.ready;
-    const sw = reg.active!;
-    if (sw.state !== 'activated') {
-      await new Promise<void>((resolve) => sw.addEventListener('statechange', () => sw.state === 'activated' && resolve()));
-    }
-    return sw.state;
-  });
-}
 
 for (const size of TABLET_SIZES) {
   test(`the shell loads at tablet ${size.name} size with name, four screens and the caution line`, async ({ page }) => {
@@ -78,12 +69,12 @@ test('the web app manifest is installable: standalone, our icons including a mas
 
 test('the service worker activates', async ({ page }) => {
   await page.goto('/');
-  expect(await waitForServiceWorker(page)).toBe('activated');
+  expect(await serviceWorkerActivated(page)).toBe('activated');
 });
 
 test('with the network cut, a reload still shows the app (served by the service worker)', async ({ page, context }) => {
   await page.goto('/');
-  await waitForServiceWorker(page);
+  await serviceWorkerActivated(page);
   await context.setOffline(true);
   await page.reload();
   await expect(page.getByRole('navigation', { name: 'Screens' })).toBeVisible();

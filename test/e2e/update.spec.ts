@@ -1,4 +1,5 @@
-import { test, expect } from '@playwright/test';
+import { test, expect, type Page } from '@playwright/test';
+import { serviceWorkerActivated } from './support/service-worker';
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { cpSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -30,6 +31,16 @@ test.beforeAll(async () => {
   throw new Error('preview server for the update test did not start');
 });
 
+/** Publishes a new build over the served one and asks the page's service worker to look for it. */
+async function publishBuild(page: Page, stamp: string): Promise<void> {
+  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
+    env: { ...process.env, WETMODE_BUILD_STAMP: stamp },
+    encoding: 'utf8',
+  });
+  expect(built.status, built.stderr).toBe(0);
+  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+}
+
 test.afterAll(() => {
   server?.kill();
   if (dir) rmSync(dir, { recursive: true, force: true });
@@ -39,11 +50,7 @@ test('a new version waits for the user, and updating keeps the case being edited
   test.setTimeout(120_000);
   await page.goto(`http://localhost:${PORT}/`);
   await expect(page.getByTestId('quick-wet')).toContainText('Hz');
-  await page.evaluate(async () => {
-    const reg = await navigator.serviceWorker.ready;
-    const sw = reg.active!;
-    if (sw.state !== 'activated') await new Promise<void>((r) => sw.addEventListener('statechange', () => sw.state === 'activated' && r()));
-  });
+  await serviceWorkerActivated(page);
   // A later visit: the page is now controlled by the installed version, as on a surveyor's tablet.
   await page.reload();
   await expect(page.getByTestId('quick-wet')).toContainText('Hz');
@@ -51,13 +58,7 @@ test('a new version waits for the user, and updating keeps the case being edited
   const od = page.locator('[data-field="outerDiameter"] input');
   await od.fill('813 mm');
 
-  // Publish a new build over the served one.
-  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
-    env: { ...process.env, WETMODE_BUILD_STAMP: 'update-test' },
-    encoding: 'utf8',
-  });
-  expect(built.status, built.stderr).toBe(0);
-  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+  await publishBuild(page, 'update-test');
 
   // The prompt appears; the new version waits; nothing reloads by itself; the typed value is still there.
   await expect(page.getByText('A new version of Wetmode is ready')).toBeVisible({ timeout: 30_000 });
@@ -75,19 +76,10 @@ test('a new version that arrives during the very first visit comes in with one t
   test.setTimeout(120_000);
   await page.goto(`http://localhost:${PORT}/`);
   await expect(page.getByTestId('quick-wet')).toContainText('Hz');
-  await page.evaluate(async () => {
-    const reg = await navigator.serviceWorker.ready;
-    const sw = reg.active!;
-    if (sw.state !== 'activated') await new Promise<void>((r) => sw.addEventListener('statechange', () => sw.state === 'activated' && r()));
-  });
+  await serviceWorkerActivated(page);
   // First visit: the page is not controlled yet, so the new worker activates without waiting.
   expect(await page.evaluate(() => navigator.serviceWorker.controller)).toBeNull();
-  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
-    env: { ...process.env, WETMODE_BUILD_STAMP: 'first-visit' },
-    encoding: 'utf8',
-  });
-  expect(built.status, built.stderr).toBe(0);
-  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+  await publishBuild(page, 'first-visit');
   await expect(page.getByText('A new version of Wetmode is ready')).toBeVisible({ timeout: 30_000 });
   await Promise.all([page.waitForEvent('load'), page.getByRole('button', { name: 'Update now' }).click()]);
   await page.goto(`http://localhost:${PORT}/#/report`);
