@@ -39,6 +39,17 @@ export interface CheckResult {
   source: string;
 }
 
+/** What a check says before its verdict: which excitation, which frequency, and the rule's source. */
+export type CheckBase = Pick<CheckResult, 'kind' | 'label' | 'frequencyBasis' | 'frequencyHz' | 'source'>;
+
+/**
+ * A check the excitation cannot reach (not submerged, no flow, damped out): clear, with no margin and no band;
+ * `criticalSpeedMPerS` is the speed at which it would begin, when one exists.
+ */
+export function unreachedCheck(base: CheckBase, criticalSpeedMPerS: number | null, reason: string): CheckResult {
+  return { ...base, verdict: 'clear', marginPercent: null, bandHz: null, criticalSpeedMPerS, reason };
+}
+
 /** Where a mode is evaluated for vortex shedding, and the numbers there. */
 export interface SheddingPoint {
   /** Elevation of the largest |mode shape| within the submerged zones, m. */

@@ -6,7 +6,7 @@
  */
 import { sig } from './format';
 import { sheddingFrequencyHz } from './formulas';
-import type { CheckResult, SheddingPoint } from './results';
+import { unreachedCheck, type CheckResult, type SheddingPoint } from './results';
 import { strouhalRegimes } from './strouhal';
 import type { ScreeningLimits, ZoneSection } from './types';
 import { classifyFrequency } from './verdict';
@@ -55,9 +55,7 @@ export function stemCheck(ctx: StemContext): CheckResult {
     source: ctx.limits.stemFrequencyRatioMax.source,
   };
   const p = ctx.point;
-  if (p === null || ctx.section === null) {
-    return { ...base, verdict: 'clear', marginPercent: null, bandHz: null, criticalSpeedMPerS: null, reason: ctx.notSubmergedReason ?? 'not submerged' };
-  }
+  if (p === null || ctx.section === null) return unreachedCheck(base, null, ctx.notSubmergedReason ?? 'not submerged');
   const uCrit = speedForSheddingFrequency(
     rMax * ctx.frequencyHz,
     p.characteristicSizeM,
@@ -66,14 +64,7 @@ export function stemCheck(ctx: StemContext): CheckResult {
     ctx.strouhalOverrideValue,
   );
   if (p.flowSpeedMPerS === 0) {
-    return {
-      ...base,
-      verdict: 'clear',
-      marginPercent: null,
-      bandHz: null,
-      criticalSpeedMPerS: uCrit,
-      reason: `not excited by shedding: zero flow speed at z = ${sig(p.atZM)} m; f_s would reach ${sig(rMax)} f_n at U = ${sig(uCrit)} m/s`,
-    };
+    return unreachedCheck(base, uCrit, `not excited by shedding: zero flow speed at z = ${sig(p.atZM)} m; f_s would reach ${sig(rMax)} f_n at U = ${sig(uCrit)} m/s`);
   }
   const fs = sheddingFrequencyHz(p.strouhal.value, p.flowSpeedMPerS, p.characteristicSizeM);
   const bandHz = { lowHz: 0, highHz: fs / rMax };

@@ -6,7 +6,7 @@
  */
 import { sig } from './format';
 import { speedForReducedVelocity } from './formulas';
-import type { CheckResult, SheddingPoint } from './results';
+import { unreachedCheck, type CheckResult, type SheddingPoint } from './results';
 import type { ReducedVelocityRange, ScreeningLimits } from './types';
 import { classifyFrequency, EDGE_RTOL } from './verdict';
 
@@ -27,25 +27,18 @@ function rangeCheck(
   ctx: VivContext,
   extraSource: string,
 ): CheckResult {
-  const base = { kind, label, frequencyBasis: 'wet' as const, frequencyHz: ctx.frequencyHz };
-  const source = range.source + extraSource;
+  const base = { kind, label, frequencyBasis: 'wet' as const, frequencyHz: ctx.frequencyHz, source: range.source + extraSource };
   const p = ctx.point;
-  if (p === null) {
-    return { ...base, verdict: 'clear', marginPercent: null, bandHz: null, criticalSpeedMPerS: null, reason: ctx.notSubmergedReason ?? 'not submerged', source };
-  }
+  if (p === null) return unreachedCheck(base, null, ctx.notSubmergedReason ?? 'not submerged');
   const d = p.characteristicSizeM;
   const uCrit = speedForReducedVelocity(range.min, ctx.frequencyHz, d);
   const caveat = ctx.nonCircular ? ' (range for circular cylinders, applied here as an indication)' : '';
   if (p.flowSpeedMPerS === 0) {
-    return {
-      ...base,
-      verdict: 'clear',
-      marginPercent: null,
-      bandHz: null,
-      criticalSpeedMPerS: uCrit,
-      reason: `not excited by shedding: zero flow speed at z = ${sig(p.atZM)} m where the mode moves most; ${label} would begin at U = ${sig(uCrit)} m/s${caveat}`,
-      source,
-    };
+    return unreachedCheck(
+      base,
+      uCrit,
+      `not excited by shedding: zero flow speed at z = ${sig(p.atZM)} m where the mode moves most; ${label} would begin at U = ${sig(uCrit)} m/s${caveat}`,
+    );
   }
   const u = p.flowSpeedMPerS;
   const bandHz = { lowHz: u / (range.max * d), highHz: u / (range.min * d) };
@@ -60,7 +53,6 @@ function rangeCheck(
     reason:
       `V_R = ${sig(p.reducedVelocity)} ${where} ${sig(range.min)}–${sig(range.max)} at z = ${sig(p.atZM)} m ` +
       `(U = ${sig(u)} m/s, D = ${sig(d)} m); begins at U = ${sig(uCrit)} m/s${caveat}`,
-    source,
   };
 }
 
@@ -71,18 +63,11 @@ export function inLineCheck(ctx: VivContext): CheckResult {
   const extra = `; ${limits.inLineStabilityMax.source}`;
   // K_S above the limit: the in-line range is damped out at every speed (DNV-RP-C205 §9), so no critical speed.
   if (p !== null && p.stabilityParameter > ksMax * (1 + EDGE_RTOL)) {
-    return {
-      kind: 'in-line-viv',
-      label: 'in-line VIV',
-      frequencyBasis: 'wet',
-      frequencyHz: ctx.frequencyHz,
-      verdict: 'clear',
-      marginPercent: null,
-      bandHz: null,
-      criticalSpeedMPerS: null,
-      reason: `in-line VIV not expected: K_S = ${sig(p.stabilityParameter)} > ${sig(ksMax)} (damping and mass suppress it at any speed)`,
-      source: limits.inLineReducedVelocity.source + extra,
-    };
+    return unreachedCheck(
+      { kind: 'in-line-viv', label: 'in-line VIV', frequencyBasis: 'wet', frequencyHz: ctx.frequencyHz, source: limits.inLineReducedVelocity.source + extra },
+      null,
+      `in-line VIV not expected: K_S = ${sig(p.stabilityParameter)} > ${sig(ksMax)} (damping and mass suppress it at any speed)`,
+    );
   }
   const r = rangeCheck('in-line-viv', 'in-line VIV', limits.inLineReducedVelocity, ctx, extra);
   if (p !== null && r.bandHz !== null) r.reason += `; K_S = ${sig(p.stabilityParameter)} ≤ ${sig(ksMax)}`;
