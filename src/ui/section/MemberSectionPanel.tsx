@@ -19,13 +19,14 @@ import { SectionPlot } from './SectionPlot';
 export function MemberSectionPanel({ model, system }: { model: MemberModel; system: UnitSystem }) {
   const s = useMemo(() => sectionFormFromMember(model), [model]);
   const input = useMemo(() => (s ? readSectionForm(s.form).input : null), [s]);
-  const map = useMemo(() => (input ? { body: 0, motion: 'x' as const, grid: mapView(input).grid } : null), [input]);
+  const view = useMemo(() => (input ? mapView(input) : null), [input]);
+  const map = useMemo(() => (view ? { body: 0, motion: 'x' as const, grid: view.grid } : null), [view]);
   const solve = useSectionSolve(input, map, { energyCheck: false });
   const unit = system === 'si' ? 'mm' : 'in';
   const formatLength = (m: number) => formatQuantity(m, unit, 4);
   const shown = solve.shown;
   const display = useMemo(() => (shown?.field ? mapDisplay(shown.field, shown.input, 'speed', (m) => formatQuantity(m, unit, 3)) : null), [shown, unit]);
-  if (!s || !input) return null;
+  if (!s || !input || !view) return null;
   const body = shown?.result.bodies[0];
   return (
     <section class="results-block member-section" aria-labelledby="member-section-title">
@@ -34,7 +35,7 @@ export function MemberSectionPanel({ model, system }: { model: MemberModel; syst
       <div class="member-section-row">
         <SectionPlot
           input={input}
-          box={mapView(input).box}
+          box={view.box}
           field={shown?.field ?? null}
           display={display}
           body={0}
