@@ -23,7 +23,7 @@ export function OpenCaseBar({ state, model, store, setStatus, onSaved }: Props) 
     ? 'Received case, not saved on this device'
     : !unsaved
       ? 'Saved'
-      : state.savedKey === null
+      : state.saved === null
         ? 'Not saved yet'
         : 'Changes not saved';
 

@@ -44,7 +44,7 @@ export function useReplaceGuard(store: CaseStore | null, model: AppModel) {
   const prompt =
     pending && doc ? (
       <div class="replace-guard" role="group" aria-labelledby="replace-guard-text">
-        <p id="replace-guard-text">{replaceWarning(doc, model.get().mode, model.get().savedKey !== null)}</p>
+        <p id="replace-guard-text">{replaceWarning(doc, model.get().mode, model.get().saved !== null)}</p>
         {note && <p class={note.error ? 'cases-error' : undefined} role={note.error ? 'alert' : 'status'}>{note.text}</p>}
         <div class="cases-buttons">
           {store ? (

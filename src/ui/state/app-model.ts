@@ -27,8 +27,8 @@ export interface Results {
 export interface ModelState {
   doc: Case | null;
   mode: CaseMode;
-  /** Content key of the case as last saved on the device (null: not saved yet). */
-  savedKey: string | null;
+  /** The open case as last saved on the device (null: not saved yet). */
+  saved: Case | null;
   errors: FieldErrors;
   excitationErrors: FieldErrors;
   results: Results | null;
@@ -65,7 +65,7 @@ export class AppModel {
   private state: ModelState = {
     doc: null,
     mode: 'editing',
-    savedKey: null,
+    saved: null,
     errors: {},
     excitationErrors: {},
     results: null,
@@ -75,7 +75,6 @@ export class AppModel {
   };
   private listeners = new Set<() => void>();
   private draftTimer: ReturnType<typeof setTimeout> | null = null;
-  private savedDoc: Case | null = null;
 
   constructor(
     private readonly solver: Solver,
@@ -103,20 +102,18 @@ export class AppModel {
 
   /** Opens a case: `saved` says whether this exact content is already on the device. */
   open(doc: Case, mode: CaseMode, saved: boolean): void {
-    this.savedDoc = saved ? doc : null;
-    this.set({ doc, mode, savedKey: saved ? contentKey(doc) : null, results: null, solverMessage: null, storageMessage: null });
+    this.set({ doc, mode, saved: saved ? doc : null, results: null, solverMessage: null, storageMessage: null });
     this.recompute();
   }
 
   /** True when the open case has changes not saved as a case (name, note and inputs all count). */
   unsaved(): boolean {
-    const { doc } = this.state;
-    return !!doc && (!this.savedDoc || !sameCaseContent(doc, this.savedDoc));
+    const { doc, saved } = this.state;
+    return !!doc && (!saved || !sameCaseContent(doc, saved));
   }
 
   markSaved(doc: Case): void {
-    this.savedDoc = doc;
-    this.set({ doc, savedKey: contentKey(doc), mode: 'editing' });
+    this.set({ doc, saved: doc, mode: 'editing' });
   }
 
   /** Applies an edit to the open case; a received case becomes editable only through saving. */

@@ -8,8 +8,8 @@ import { createModel, firstCase, openDeviceStore } from './services';
  * fresh device) unless the page was opened from a shared link. Drafts are flushed before an app update and
  * whenever the page is hidden (tablet switched off, app switched away).
  */
-export function useBoot(openingLink: boolean): AppServices & { ready: boolean } {
-  const [services, setServices] = useState<AppServices & { ready: boolean }>(() => ({ model: createModel(), store: null, storeMessage: null, ready: false }));
+export function useBoot(openingLink: boolean): AppServices {
+  const [services, setServices] = useState<AppServices>(() => ({ model: createModel(), store: null, storeMessage: null }));
   useEffect(() => {
     let cancelled = false;
     const { model } = services;
@@ -28,7 +28,7 @@ export function useBoot(openingLink: boolean): AppServices & { ready: boolean } 
           if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = '#/member';
         }
       }
-      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, storeRetryable: opened.retryable, ready: true });
+      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, storeRetryable: opened.retryable });
     })();
     const offUpdate = onBeforeUpdate(() => model.flushDraft());
     const onHide = () => {
