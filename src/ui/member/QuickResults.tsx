@@ -18,6 +18,7 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
         </p>
       )}
       {!a && !stale && <p>Fill in the member to see its frequencies.</p>}
+      {state.solverMessage && <p class="field-error" role="alert">{state.solverMessage}</p>}
       {a && !a.ok && <p class="field-error" data-testid="solve-failure">{a.message}</p>}
       {a && a.ok && (
         <dl class="quick-figures">

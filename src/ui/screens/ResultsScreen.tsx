@@ -20,6 +20,7 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
       ) : (
         <>
           {actions}
+          {state.solverMessage && <p class="field-error" role="alert">{state.solverMessage}</p>}
           <ResultsView
             doc={doc}
             results={state.results}
