@@ -65,7 +65,8 @@ export function marginText(marginPercent: number | null): string {
   if (marginPercent === 0) return '0 %';
   const sign = marginPercent > 0 ? '+' : '\u2212';
   const abs = Math.abs(marginPercent);
-  // Three significant figures also for large margins: 35866 % → "35900 %" (formatSig keeps every integer digit).
+  // Three significant figures in plain digits for large margins: 35866 % → "35900 %" (formatSig would turn
+  // a margin of a million per cent or more into exponent notation).
   return `${sign}${abs >= 1000 ? formatNumber(abs, SIG) : formatSig(abs, SIG)} %`;
 }
 
