@@ -4,6 +4,8 @@
  * returned text, and turns a thrown Error into its message on standard error with a non-zero exit.
  */
 import { cautionLines } from '../text/cautions';
+import { toJson } from './json-out';
+import { formatNumber } from '../units';
 import { parseSectionInput, solveSection } from '../physics/section/index';
 import type { SectionInput, SectionResult } from '../physics/section/index';
 
@@ -12,11 +14,6 @@ export const SECTION_MODEL_LIMITS: readonly string[] = [
   'The free surface is taken in the high-frequency limit (zero potential); it holds only well above the sloshing frequencies.',
   'Two-dimensional strip values: three-dimensional end effects reduce the added mass of short members.',
 ];
-
-/** Rounds to 6 significant digits for a readable report (the solver's own accuracy is ~1e-4 at best). */
-function r6(v: number): number {
-  return v === 0 || !Number.isFinite(v) ? v : Number(v.toPrecision(6));
-}
 
 function describeBody(input: SectionInput, k: number): string {
   const b = input.bodies[k];
@@ -41,42 +38,42 @@ function report(input: SectionInput, r: SectionResult): object {
   return {
     tool: 'wetmode section',
     liquidDensityKgPerM3: input.liquidDensityKgPerM3,
-    addedMass: r.addedMass.map((row) => row.map(r6)),
+    addedMass: r.addedMass,
     addedMassOrder: labels,
     addedMassUnits: 'per metre of length: x–x and y–y kg/m, x–rotation and y–rotation kg·m/m, rotation–rotation kg·m²/m; rotation counter-clockwise about each body\'s reference point',
-    asymmetryBeforeSymmetrising: r6(r.asymmetry),
+    asymmetryBeforeSymmetrising: r.asymmetry,
     bodies: r.bodies.map((b) => ({
       index: b.index,
       section: describeBody(input, b.index),
-      referencePointM: b.referencePointM.map(r6),
-      wettedAreaM2: r6(b.wettedAreaM2),
-      displacedMassKgPerM: r6(b.displacedMassKgPerM),
-      addedMassXKgPerM: r6(b.addedMassX),
-      addedMassYKgPerM: r6(b.addedMassY),
-      addedInertiaRotationKgM2PerM: r6(b.addedInertiaRotation),
-      caX: r6(b.caX),
-      caY: r6(b.caY),
-      caReference: `Ca = added mass / (ρ π a²); x motion a = ${r6(b.referenceHalfWidthXM)} m, y motion a = ${r6(b.referenceHalfWidthYM)} m (half the wetted extent across the motion)`,
-      addedToDisplacedX: r6(b.addedToDisplacedX),
-      addedToDisplacedY: r6(b.addedToDisplacedY),
+      referencePointM: b.referencePointM,
+      wettedAreaM2: b.wettedAreaM2,
+      displacedMassKgPerM: b.displacedMassKgPerM,
+      addedMassXKgPerM: b.addedMassX,
+      addedMassYKgPerM: b.addedMassY,
+      addedInertiaRotationKgM2PerM: b.addedInertiaRotation,
+      caX: b.caX,
+      caY: b.caY,
+      caReference: `Ca = added mass / (ρ π a²); x motion a = ${formatNumber(b.referenceHalfWidthXM, 6)} m, y motion a = ${formatNumber(b.referenceHalfWidthYM, 6)} m (half the wetted extent across the motion)`,
+      addedToDisplacedX: b.addedToDisplacedX,
+      addedToDisplacedY: b.addedToDisplacedY,
       blockedMotions: b.blockedDofs,
       panels: b.panels,
     })),
     errorEstimate: r.errorEstimates.map((e) => ({
       term: `body ${e.body} ${e.motion}`,
-      value: r6(e.fine),
-      atHalfPanels: r6(e.coarse),
-      extrapolated: r6(e.extrapolated),
-      order: r6(e.order),
-      estimatedError: r6(e.absoluteError),
-      estimatedRelativeError: r6(e.relativeError),
+      value: e.fine,
+      atHalfPanels: e.coarse,
+      extrapolated: e.extrapolated,
+      order: e.order,
+      estimatedError: e.absoluteError,
+      estimatedRelativeError: e.relativeError,
     })),
     energyCheck: r.energyChecks.map((e) => ({
       term: `body ${e.body} ${e.motion}`,
-      boundaryIntegral: r6(e.boundaryIntegral),
-      fieldIntegral: r6(e.fieldIntegral),
-      farFieldTail: r6(e.tail),
-      relativeDifference: r6(e.relativeDifference),
+      boundaryIntegral: e.boundaryIntegral,
+      fieldIntegral: e.fieldIntegral,
+      farFieldTail: e.tail,
+      relativeDifference: e.relativeDifference,
     })),
     panels: { fine: r.panelsFine, coarse: r.panelsCoarse },
     method: r.notes,
@@ -104,5 +101,6 @@ export function runSectionCommand(inputText: string): string {
   }
   const outcome = solveSection(input, { energyCheck: true });
   if (!outcome.ok) throw new Error(`section solve failed (${outcome.reason}): ${outcome.message}`);
-  return JSON.stringify(report(input, outcome.result), null, 2);
+  // Numbers to 6 significant figures, as every command prints them.
+  return toJson(report(input, outcome.result));
 }
