@@ -66,6 +66,7 @@ describe('parseQuantity reads the units on drawings into SI', () => {
   });
 
   it('a bare number takes the field’s shown unit', () => {
+    // Unit definitions, exact: 1 in = 25.4 mm (international inch, 1959), 1 GPa = 1e9 Pa, 20 % = 0.2 (SI brochure).
     expectClose(value('610', LENGTH_MM), 0.61, { rtol: 1e-12, label: 'mm' });
     expectClose(value('24', { dimension: 'length', unit: 'in' }), 0.6096, { rtol: 1e-12, label: 'in' });
     expectClose(value('210', { dimension: 'modulus', unit: 'GPa' }), 210e9, { rtol: 1e-12, label: 'GPa' });
@@ -90,6 +91,7 @@ describe('parseQuantity reads the units on drawings into SI', () => {
   });
 
   it('a decimal comma is read as a decimal point when it is unambiguous', () => {
+    // Decimal comma as in ISO 80000-1 §7.1.4 (either sign is allowed as the decimal marker); values exact.
     expectClose(value('0,6 m', LENGTH_MM), 0.6, { rtol: 1e-12, label: '0,6 m' });
     expectClose(value('12,5', LENGTH_MM), 0.0125, { rtol: 1e-12, label: '12,5 mm' });
     expectClose(value('0,125 m', LENGTH_MM), 0.125, { rtol: 1e-12, label: '0,125 m (whole part 0)' });

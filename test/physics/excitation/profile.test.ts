@@ -17,6 +17,7 @@ describe('flow-speed profile along the member', () => {
 
   it('interpolates linearly between points and reproduces the points', () => {
     for (const p of profile) expect(flowSpeedAt(profile, p.zM)).toBe(p.speedMPerS);
+    // Linear interpolation between the given points (exact arithmetic; the profile rule is ours, no source).
     expectClose(flowSpeedAt(profile, 5), 0.5, { rtol: 1e-12, label: 'bed–mid midpoint' });
     expectClose(flowSpeedAt(profile, 17.5), 1.1, { rtol: 1e-12, label: 'mid–surface' });
   });

@@ -21,6 +21,7 @@ describe('wave band', () => {
 
   it('20 % above the short-period edge or below the long-period edge is clear; nearer is close', () => {
     expect(wave(0.3).verdict).toBe('clear');
+    // (0.3 − 0.25) / 0.25 = 20 %: margin from the nearest band edge, ±20 % separation (common practice).
     expectClose(wave(0.3).marginPercent!, 20, { rtol: 1e-9, label: 'above band' });
     expect(wave(0.8 / 12).verdict).toBe('clear');
     expect(wave(0.29).verdict).toBe('close');

@@ -28,6 +28,7 @@ describe('section geometry for drawing', () => {
   });
 
   it('measures the farthest point from the centre: the radius of a circle, half the diagonal of a square', () => {
+    // Classical geometry: circle radius D/2; unit square half-diagonal √2/2.
     expectClose(farthestRadius({ shape: 'circle', diameterM: 0.5, centerM: [3, -1] }), 0.25, { rtol: 1e-12, label: 'circle' });
     expectClose(farthestRadius({ shape: 'rectangle', widthM: 1, heightM: 1 }), Math.SQRT1_2, { rtol: 1e-12, label: 'square' });
   });

@@ -21,6 +21,7 @@ function checkCells(v: ReturnType<typeof mapView>) {
 
 describe('the drawn and mapped region', () => {
   it('spans three body sizes across a body in open water, in 80 square cells', () => {
+    // The view's own rule (three body sizes, 80 cells): a design choice, no source; exact arithmetic for a 1 m circle.
     const v = mapView(circle());
     checkCells(v);
     expect(v.grid.nx).toBe(80);
@@ -30,6 +31,7 @@ describe('the drawn and mapped region', () => {
   });
 
   it('does not depend on where the section sits', () => {
+    // Translation invariance (property test): the box moves with the body, exactly.
     const a = mapView(circle());
     const b = mapView({ ...circle(), bodies: [{ shape: 'circle', diameterM: 1, centerM: [10, -4] }] });
     expect(b.grid.nx).toBe(a.grid.nx);
