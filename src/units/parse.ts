@@ -1,6 +1,6 @@
 /**
- * Reading quantities as people type them: `610 mm`, `24 in`, `2 ft + 6 in`, `7.85 t/m^3`, `210 GPa`, `29000 ksi`,
- * `5 t`, `1200 rpm`. A bare number takes the field's shown unit. Results are SI values; failures are messages
+ * Reading quantities as people type them: `610 mm`, `24 in`, `2 ft + 6 in`, `2' 6"`, `7.85 t/m^3`, `210 GPa`,
+ * `29000 ksi`, `5 t`, `1200 rpm`, `1.5 kt`. A bare number takes the field's shown unit. Results are SI values; failures are messages
  * in words that say what was expected and what was got.
  *
  * Decimal comma: accepted, because a tablet's decimal keypad shows a comma in many locales: `0,6 m` is 0.6 m.
@@ -39,12 +39,34 @@ const REPLACEMENTS: readonly (readonly [RegExp, string])[] = [
   [/³/g, '^3'],
   [/[µμ]/g, 'u'],
   [/°/g, ' deg'],
+  [/[\u2032\u2019]/g, "'"], // prime and right single quote, as a phone keyboard types a foot mark
+  [/[\u2033\u201d\u201c]/g, '"'], // double prime and curly quotes, for the inch mark
 ];
+
+/**
+ * Trade notation that mathjs would misread, rewritten before it reads the text. `kt`/`kts` is the mariner's
+ * knot (mathjs would read kilotonne); `6'` and `24"` are feet and inches; `2' 6"` and `2 ft 6 in` are a sum
+ * of feet and inches, as drawings and surveyors write them.
+ */
+const TRADE_NOTATION: readonly (readonly [RegExp, string])[] = [
+  [/(\d)\s*kts?\b/g, '$1 knot'],
+  [/(\d[\d.]*(?:e[+-]?\d+)?)\s*'/g, '$1 ft '],
+  [/(\d[\d.]*(?:e[+-]?\d+)?)\s*"/g, '$1 in '],
+  [/(\d[\d.]*\s*ft)\s+(?=\d[\d.]*\s*in\b)/g, '$1 + '],
+];
+
+/** Rewrites the trade notation (see TRADE_NOTATION) and trims what it leaves. */
+function tradeNotation(text: string): string {
+  let t = text;
+  for (const [re, to] of TRADE_NOTATION) t = t.replace(re, to);
+  return t.trim();
+}
 
 /** Applies the replacements and the decimal-comma rule (see the file comment). */
 export function normaliseText(text: string): Normalised {
   let t = text.trim();
   for (const [re, to] of REPLACEMENTS) t = t.replace(re, to);
+  t = tradeNotation(t);
   if (!/\d,\d/.test(t)) return { ok: true, text: t };
   if (/\d\.\d/.test(t)) return { ok: false, message: `"${text.trim()}" mixes a comma and a point: write the number without thousands separators, e.g. 1200.5` };
   const many = /\d+(?:,\d+){2,}/.exec(t);

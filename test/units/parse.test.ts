@@ -109,8 +109,8 @@ describe('parseQuantity explains what it could not read', () => {
     expect(message('5 mm/m', LENGTH_MM)).toBe('expected a length such as 610 mm or 24 in, got a plain number (5 mm/m)');
   });
 
-  it('feet and inches side by side are an area, with a hint to add them', () => {
-    expect(message('2 ft 6 in', LENGTH_MM)).toBe('expected a length such as 610 mm or 24 in, got an area (2 ft 6 in) (to add lengths write 2 ft + 6 in)');
+  it('feet times inches is an area, with a hint to add them', () => {
+    expect(message('2 ft * 6 in', LENGTH_MM)).toBe('expected a length such as 610 mm or 24 in, got an area (2 ft * 6 in) (to add lengths write 2 ft + 6 in)');
   });
 
   it('empty, unknown, unavailable, malformed, mixed and infinite inputs each get their message', () => {
