@@ -4,6 +4,8 @@ import { defineConfig } from '@playwright/test';
  * End-to-end tests in Debian's Chromium (never Playwright's own browser download), against the production
  * build served by `vite preview`, so the service worker and precache are the real ones.
  */
+/** Port of the preview server; another worktree may be serving on the default one. */
+const port = Number(process.env.WETMODE_E2E_PORT ?? 4173);
 const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
 export default defineConfig({
@@ -16,7 +18,7 @@ export default defineConfig({
   reporter: [['list']],
   outputDir: 'test-results',
   use: {
-    baseURL: 'http://localhost:4173',
+    baseURL: `http://localhost:${port}`,
     viewport: { width: 1024, height: 768 },
     launchOptions: {
       executablePath,
@@ -26,8 +28,8 @@ export default defineConfig({
     trace: 'off',
   },
   webServer: {
-    command: 'npx vite preview --port 4173 --strictPort',
-    url: 'http://localhost:4173',
+    command: `npx vite preview --port ${port} --strictPort`,
+    url: `http://localhost:${port}`,
     reuseExistingServer: !process.env.CI,
     timeout: 60_000,
   },

@@ -1,4 +1,4 @@
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import pkg from './package.json' with { type: 'json' };
@@ -7,12 +7,41 @@ import pkg from './package.json' with { type: 'json' };
 const themeColour = '#0b3d5c';
 const backgroundColour = '#f7f9fb';
 
+/**
+ * Content-Security-Policy of the built app, as a <meta> (the app is served as static files, often by hosts that
+ * set no headers). Everything comes from our own origin: scripts, module workers, styles, the service worker;
+ * images may also be data: or blob: URLs (QR codes, site photos). No inline script and no eval. Styles set by
+ * script go through the CSSOM, which style-src does not govern, so no 'unsafe-inline' is needed.
+ * Only the production build carries it: the dev server's hot reload needs inline script and a websocket.
+ */
+export const CONTENT_SECURITY_POLICY = [
+  "default-src 'self'",
+  "script-src 'self'",
+  "worker-src 'self'",
+  "style-src 'self'",
+  "img-src 'self' data: blob:",
+  "connect-src 'self'",
+  "font-src 'self'",
+  "object-src 'none'",
+  "base-uri 'self'",
+  "form-action 'self'",
+].join('; ');
+
+function contentSecurityPolicy(): Plugin {
+  return {
+    name: 'wetmode-content-security-policy',
+    apply: 'build',
+    transformIndexHtml: () => [{ tag: 'meta', attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY }, injectTo: 'head-prepend' }],
+  };
+}
+
 export default defineConfig({
   define: {
     // WETMODE_BUILD_STAMP marks a build apart from another of the same version (used by the update test).
     __APP_VERSION__: JSON.stringify(pkg.version + (process.env.WETMODE_BUILD_STAMP ? `+${process.env.WETMODE_BUILD_STAMP}` : '')),
   },
   plugins: [
+    contentSecurityPolicy(),
     preact(),
     VitePWA({
       // The update waits for the user (see src/ui/shell/UpdatePrompt.tsx); the app imports the register module itself.

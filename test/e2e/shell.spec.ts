@@ -111,3 +111,28 @@ for (const theme of ['daylight', 'dark']) {
     }
   });
 }
+
+test('the built app carries a Content-Security-Policy and no screen breaks it', async ({ page }) => {
+  const violations: string[] = [];
+  page.on('console', (m) => {
+    if (/Content Security Policy/i.test(m.text())) violations.push(m.text());
+  });
+  await page.addInitScript(() => {
+    document.addEventListener('securitypolicyviolation', (e) => {
+      (window as unknown as { __csp: string[] }).__csp = [...((window as unknown as { __csp?: string[] }).__csp ?? []), `${e.violatedDirective} ${e.blockedURI}`];
+    });
+  });
+  await page.goto('/');
+  const csp = await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content');
+  expect(csp).toContain("script-src 'self'");
+  expect(csp).not.toContain('unsafe-eval');
+  for (const screen of SCREENS) {
+    await page.goto(`/#/${screen}`);
+    await expect(page.getByTestId('caution-line')).toBeVisible();
+  }
+  // The solver and section workers run under the policy: the Results screen shows a frequency.
+  await page.goto('/#/results');
+  await expect(page.locator('main')).toContainText('Hz');
+  const seen = await page.evaluate(() => (window as unknown as { __csp?: string[] }).__csp ?? []);
+  expect([...violations, ...seen]).toEqual([]);
+});
