@@ -7,6 +7,7 @@ import { InputsTable } from './InputsTable';
 import { inputRows } from './report-inputs';
 import { ReportHeader } from './ReportHeader';
 import { ReportResults } from './ReportResults';
+import { CaseQr } from './CaseQr';
 import '../results/results.css';
 import './report.css';
 
@@ -47,7 +48,14 @@ export function ReportView({ doc, results, link, appVersion }: ReportViewProps) 
         </div>
         <section class="report-section report-link" aria-labelledby="report-link-title">
           <h2 id="report-link-title">Case link</h2>
-          {link ? <p class="report-link-text">{link}</p> : <p>Link not available.</p>}
+          {link ? (
+            <div class="report-link-row">
+              <CaseQr link={link} />
+              <p class="report-link-text">{link}</p>
+            </div>
+          ) : (
+            <p>Link not available.</p>
+          )}
         </section>
       </article>
     </div>
