@@ -59,12 +59,12 @@ export function App() {
       <button type="button" class="skip" onClick={() => document.getElementById('main')?.focus()}>Skip to content</button>
       <NavBar current={route.screen} theme={theme} onTheme={setTheme} />
       <CautionLine />
+      <UpdatePrompt />
       <main id="main" tabIndex={-1}>
         <AppServicesProvider value={services}>
           <Screen route={route} />
         </AppServicesProvider>
       </main>
-      <UpdatePrompt />
     </div>
   );
 }

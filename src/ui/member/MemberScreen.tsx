@@ -8,6 +8,7 @@ import { CaseDetails } from './CaseDetails';
 import { FieldList } from './FieldList';
 import { MemberToolbar } from './MemberToolbar';
 import { QuickResults } from './QuickResults';
+import { AnswerBar } from './AnswerBar';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -84,6 +85,7 @@ export function MemberScreen() {
           )}
         </aside>
       </div>
+      <AnswerBar state={state} stale={stale} />
     </section>
   );
 }
