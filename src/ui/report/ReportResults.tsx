@@ -1,66 +1,79 @@
+import type { ComponentChildren } from 'preact';
 import type { Case } from '../../physics/case';
 import type { Results } from '../state/app-model';
 import { displayUnits, sentence } from '../results/display-units';
 import { MassTable } from '../results/MassTable';
-import { ModeShapeFigure } from '../results/ModeShape';
 import { ModesTable } from '../results/ModesTable';
 import { AssumptionsPanel, DiagnosticsPanel } from '../results/NotesPanels';
-import { ResonancePanel } from '../results/ResonancePanel';
 import { failureText } from '../results/summary';
 import { SummaryPanel } from '../results/SummaryPanel';
 import { methodNotes } from './method-notes';
+import { ModeShapesStrip } from './ModeShapesStrip';
+import { ReportResonance } from './ReportResonance';
 
-/** The results part of the report: summary, tables, plots, method notes with sources, assumptions. */
-export function ReportResults({ doc, results, current }: { doc: Case; results: Results | null; current: boolean }) {
+type Props = { doc: Case; results: Results | null; current: boolean; children?: ComponentChildren };
+
+/** Why there is nothing to print, or null when there are results. */
+function missing(results: Results | null) {
   const answer = results?.answer;
   if (!results || !answer) {
-    return (
-      <section class="report-section">
-        <h2>Results</h2>
-        <p class="report-warning">No results: the inputs are incomplete or have errors. Complete them on the Member screen, then print again.</p>
-      </section>
-    );
+    return <p class="report-warning">No results: the inputs are incomplete or have errors. Complete them on the Member screen, then print again.</p>;
   }
   if (!answer.ok) {
     const f = failureText(answer);
     return (
-      <section class="report-section">
-        <h2>Results</h2>
-        <p class="report-warning">
-          <strong>{f.title}.</strong> {f.text}
-        </p>
-      </section>
+      <p class="report-warning">
+        <strong>{f.title}.</strong> {f.text}
+      </p>
     );
   }
-  const units = displayUnits(doc.unitSystem);
-  const { member, screening } = answer;
+  return null;
+}
+
+/** Page 1 of the record: the verdict with its margin and critical speed, and every mode's frequencies. */
+export function ReportKeyResults({ doc, results, current }: Props) {
+  const none = missing(results);
+  if (none || !results?.answer?.ok) return <section class="report-section"><h2>Results</h2>{none}</section>;
   return (
     <>
       {!current && (
         <p class="report-warning" role="note">
-          These results were computed for earlier inputs than those listed above: recompute before relying on this report.
+          These results were computed for earlier inputs than those listed in this record: recompute before relying on it.
         </p>
       )}
       <div class="report-section">
-        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
+        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={results.answer} />
       </div>
       <div class="report-section">
-        <ModesTable member={member} />
+        <ModesTable member={results.answer.member} />
       </div>
-      <section class="report-section report-figure" aria-labelledby="report-shape-title">
-        <h2 id="report-shape-title">Mode shape, mode 1</h2>
-        <ModeShapeFigure build={results.build} member={member} modeIndex={0} units={units} />
+    </>
+  );
+}
+
+/** The rest of the record: shapes, mass per metre, resonance, solver report, method and sources, assumptions. */
+/** `children` (the case link) sit beside the assumptions, under the solver report. */
+export function ReportDetails({ doc, results, children }: Props) {
+  const answer = results?.answer;
+  if (!results || !answer || !answer.ok) return <>{children}</>;
+  const units = displayUnits(doc.unitSystem);
+  const { member, screening } = answer;
+  return (
+    <>
+      <section class="report-section" aria-labelledby="report-shape-title">
+        <h2 id="report-shape-title">Mode shapes</h2>
+        <ModeShapesStrip member={member} lengthM={results.build.model.lengthM} />
       </section>
       <div class="report-section">
-        <MassTable member={member} units={units} />
+        <MassTable member={member} units={units} withMethod={false} />
       </div>
-      {screening && (
-        <div class="report-section">
-          <ResonancePanel screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />
+      {screening && <ReportResonance screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
+      <div class="report-section report-columns">
+        <div>
+          <DiagnosticsPanel member={member} units={units} />
+          {children}
         </div>
-      )}
-      <div class="report-section">
-        <DiagnosticsPanel member={member} units={units} />
+        <AssumptionsPanel member={member} build={results.build} />
       </div>
       <section class="report-section" aria-labelledby="report-method-title">
         <h2 id="report-method-title">Method and sources</h2>
@@ -72,9 +85,6 @@ export function ReportResults({ doc, results, current }: { doc: Case; results: R
           ))}
         </ul>
       </section>
-      <div class="report-section">
-        <AssumptionsPanel member={member} build={results.build} />
-      </div>
     </>
   );
 }

@@ -1,3 +1,4 @@
+import { useEffect } from 'preact/hooks';
 import type { Case } from '../../physics/case';
 import { FORMS } from '../../forms';
 import { excitationFields } from '../../forms/excitation';
@@ -6,8 +7,11 @@ import { CautionsPanel } from '../results/NotesPanels';
 import { InputsTable } from './InputsTable';
 import { inputRows } from './report-inputs';
 import { ReportHeader } from './ReportHeader';
-import { ReportResults } from './ReportResults';
+import { ReportDetails, ReportKeyResults } from './ReportResults';
+import { ReportSignOff } from './ReportSignOff';
 import { CaseQr } from './CaseQr';
+import { adoptPageRule, pageRule } from './print-header';
+import { formatDateTime } from './report-meta';
 import '../results/results.css';
 import './report.css';
 
@@ -20,13 +24,19 @@ export interface ReportViewProps {
 }
 
 /**
- * The print view: a white sheet on screen in either theme, A4 or Letter on paper. Everything printed
- * comes from the case as entered and its results; the cautions are printed in full.
+ * The print view, a screening record an office files: page 1 carries the case, the verdict with its margin and
+ * critical speed, the frequencies, the cautions and the sign-off; then inputs (as entered, in SI, entered or
+ * default), shapes, resonance, method and sources, and the case link as text and QR code. A running header and
+ * page numbers on every page. A white sheet on screen in either theme, A4 or Letter on paper.
  */
 export function ReportView({ doc, results, link, appVersion }: ReportViewProps) {
-  const memberRows = inputRows(FORMS[doc.kind].fields, doc.inputs, doc.unitSystem);
+  const printedAt = new Date().toISOString();
+  const form = FORMS[doc.kind];
+  const memberRows = inputRows(form.fields, doc.inputs, doc.unitSystem, form.defaults(doc.unitSystem));
   const excitationRows = inputRows(excitationFields(doc.kind), doc.excitation, doc.unitSystem);
   const current = results !== null && results.forKey === contentKey(doc);
+  const header = [doc.name.trim() || '(no name)', doc.tag.trim(), formatDateTime(printedAt)].filter((s) => s !== '').join(' · ');
+  useEffect(() => adoptPageRule(pageRule(header, appVersion)), [header, appVersion]);
   return (
     <div class="report">
       <div class="report-actions">
@@ -36,16 +46,20 @@ export function ReportView({ doc, results, link, appVersion }: ReportViewProps) 
         <span class="report-hint">Choose A4 or Letter in the print dialogue; “Save as PDF” files it.</span>
       </div>
       <article class="report-sheet" aria-label="Wetmode screening report">
-        <ReportHeader doc={doc} appVersion={appVersion} printedAt={new Date().toISOString()} />
-        <section class="report-section" aria-labelledby="report-inputs-title">
-          <h2 id="report-inputs-title">Inputs</h2>
-          <InputsTable caption="Member inputs" rows={memberRows} />
-          <InputsTable caption="Resonance inputs" rows={excitationRows} />
-        </section>
-        <ReportResults doc={doc} results={results} current={current} />
-        <div class="report-section">
+        <ReportHeader doc={doc} appVersion={appVersion} printedAt={printedAt} />
+        <ReportKeyResults doc={doc} results={results} current={current} />
+        <div class="report-section report-cautions">
           <CautionsPanel />
         </div>
+        <ReportSignOff />
+        <section class="report-section report-page-start" aria-labelledby="report-inputs-title">
+          <h2 id="report-inputs-title">Inputs</h2>
+          <div class="report-inputs-cols">
+            <InputsTable caption="Member inputs" rows={memberRows} />
+            <InputsTable caption="Resonance inputs" rows={excitationRows} />
+          </div>
+        </section>
+        <ReportDetails doc={doc} results={results} current={current}>
         <section class="report-section report-link" aria-labelledby="report-link-title">
           <h2 id="report-link-title">Case link</h2>
           {link ? (
@@ -57,6 +71,7 @@ export function ReportView({ doc, results, link, appVersion }: ReportViewProps) 
             <p>Link not available.</p>
           )}
         </section>
+        </ReportDetails>
       </article>
     </div>
   );

@@ -4,15 +4,29 @@
  * the case's unit system (as the forms read it); an empty field says what empty stands for, and a preset
  * field shows the value the chosen option supplies.
  */
-import { choiceValue, fieldUnit, isShown } from '../../forms/read';
+import { choiceValue, fieldUnit, isShown, readFields } from '../../forms/read';
 import type { FieldDef, FieldValues } from '../../forms/types';
-import { formatQuantity, unitLabel, type UnitSystem } from '../../units';
+import { DIMENSIONS, formatQuantity, unitLabel, type UnitSystem } from '../../units';
 
 export interface InputRow {
   key: string;
   label: string;
+  /** As typed, with the field's unit where only a number was typed. */
   value: string;
+  /** The value read, in SI units ('' for choices and empty fields). */
+  si: string;
+  /** True when the field was left at its default (missing, or the default text unchanged). */
+  isDefault: boolean;
   advanced: boolean;
+}
+
+/** The SI value as read, in the dimension's usual SI unit: "0.762 m" → "762 mm". */
+function siText(field: FieldDef, v: unknown): string {
+  if (field.type === 'choice') return '';
+  const unit = DIMENSIONS[field.dimension].units.si[0];
+  if (typeof v === 'number') return formatQuantity(v, unit);
+  if (Array.isArray(v)) return v.map((x: number) => formatQuantity(x, unit)).join(', ');
+  return '';
 }
 
 const NUMBER = String.raw`[+\-−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+\-]?\d+)?`;
@@ -46,9 +60,20 @@ function valueOf(fields: readonly FieldDef[], field: FieldDef, values: FieldValu
   return field.emptyMeans ? `empty: ${field.emptyMeans}` : 'empty';
 }
 
-/** Rows for the fields shown for these values, in form order. */
-export function inputRows(fields: readonly FieldDef[], values: FieldValues, system: UnitSystem): InputRow[] {
+/**
+ * Rows for the fields shown for these values, in form order. `defaults` are the values a fresh form has in
+ * this unit system: a field whose text is missing or equal to its default is marked as a default.
+ */
+export function inputRows(fields: readonly FieldDef[], values: FieldValues, system: UnitSystem, defaults: FieldValues = {}): InputRow[] {
+  const { read } = readFields(fields, values, system);
   return fields
     .filter((f) => isShown(fields, f, values))
-    .map((f) => ({ key: f.key, label: f.label, value: valueOf(fields, f, values, system), advanced: f.advanced === true }));
+    .map((f) => ({
+      key: f.key,
+      label: f.label,
+      value: valueOf(fields, f, values, system),
+      si: siText(f, read.get(f.key)),
+      isDefault: !(f.key in values) || values[f.key].trim() === (defaults[f.key] ?? f.default).trim(),
+      advanced: f.advanced === true,
+    }));
 }

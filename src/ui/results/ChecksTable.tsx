@@ -3,10 +3,21 @@ import { ScrollTable } from './ScrollTable';
 import { VerdictBadge } from './VerdictBadge';
 
 /** Every mode against every excitation: the text twin of the frequency chart. */
-export function ChecksTable({ rows, reasonsInSI }: { rows: readonly CheckRow[]; reasonsInSI: boolean }) {
+export function ChecksTable({
+  rows,
+  reasonsInSI,
+  caption = 'Resonance checks, every mode against every excitation',
+  shortNote = false,
+}: {
+  rows: readonly CheckRow[];
+  reasonsInSI: boolean;
+  caption?: string;
+  /** One line instead of the full explanation of margin and critical speed (the printed record). */
+  shortNote?: boolean;
+}) {
   return (
     <>
-      <ScrollTable caption="Resonance checks, every mode against every excitation" class="checks-table">
+      <ScrollTable caption={caption} class="checks-table">
         <thead>
           <tr>
             <th scope="col">Mode</th>
@@ -38,11 +49,15 @@ export function ChecksTable({ rows, reasonsInSI }: { rows: readonly CheckRow[]; 
           ))}
         </tbody>
       </ScrollTable>
+      {shortNote ? (
+        <p class="table-note">Margin: distance to the nearest band edge, % of that edge (≤ 0 inside). Critical speed: flow speed at which the check begins.</p>
+      ) : (
       <p class="table-note">
         Margin: distance from the mode frequency to the nearest edge of the excitation band, as a percentage of that edge;
         positive outside the band, zero or negative inside. Critical speed: the flow speed, where the mode moves most under the
         liquid, at which the check begins (for a machine, the shaft speed that would hit the mode exactly).
       </p>
+      )}
     </>
   );
 }

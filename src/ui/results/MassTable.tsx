@@ -3,8 +3,11 @@ import { type DisplayUnits, sentence, unitText } from './display-units';
 import { ScrollTable } from './ScrollTable';
 import { addedMassLines, referenceAreas, refMark, zoneCells } from './zone-rows';
 
-/** Mass per metre by zone, Ca with its reference area, and the added-mass method and factors with sources. */
-export function MassTable({ member, units }: { member: MemberResult; units: DisplayUnits }) {
+/**
+ * Mass per metre by zone, Ca with its reference area, and the added-mass method and factors with sources
+ * (`withMethod` false where the method is listed elsewhere, as in the printed record's method section).
+ */
+export function MassTable({ member, units, withMethod = true }: { member: MemberResult; units: DisplayUnits; withMethod?: boolean }) {
   const refs = referenceAreas(member.zones);
   const rows = member.zones.map((z) => zoneCells(z, units, refs));
   const mpl = unitText(units.massPerLength);
@@ -53,7 +56,7 @@ export function MassTable({ member, units }: { member: MemberResult; units: Disp
         )}
         {anyTaper && <p>† On a taper: values are averages over the zone.</p>}
       </div>
-      {lines.length > 0 && (
+      {withMethod && lines.length > 0 && (
         <>
           <h3>Added mass method</h3>
           <ul class="sourced-list">

@@ -37,6 +37,8 @@ export interface CheckRow {
   /** "wet 0.606 Hz". */
   compared: string;
   verdict: Verdict;
+  /** Signed margin in per cent (null where the check has none), for picking the governing row. */
+  marginPercent: number | null;
   margin: string;
   band: string;
   /** Flow speed at which the check begins, or the shaft speed that hits the mode exactly; "—" if none. */
@@ -61,6 +63,7 @@ export function checkRows(s: ScreeningResult, units: DisplayUnits, sources: Sour
         label: c.label,
         compared: `${c.frequencyBasis} ${formatHz(c.frequencyHz)}`,
         verdict: c.verdict,
+        marginPercent: c.marginPercent,
         margin: marginText(c.marginPercent),
         band: bandText(c.bandHz),
         critical,
@@ -70,6 +73,22 @@ export function checkRows(s: ScreeningResult, units: DisplayUnits, sources: Sour
     }
   }
   return rows;
+}
+
+const SEVERITY: Readonly<Record<Verdict, number>> = { 'inside-band': 2, close: 1, clear: 0 };
+
+/**
+ * The governing row of each excitation: the worst verdict over the modes, and among equals the smallest
+ * margin (then the lowest mode). For the printed record, where every row of every mode would not fit.
+ */
+export function governingRows(rows: readonly CheckRow[]): CheckRow[] {
+  const best = new Map<string, CheckRow>();
+  const margin = (r: CheckRow): number => (r.marginPercent === null ? Infinity : Math.abs(r.marginPercent));
+  for (const r of rows) {
+    const b = best.get(r.label);
+    if (!b || SEVERITY[r.verdict] > SEVERITY[b.verdict] || (SEVERITY[r.verdict] === SEVERITY[b.verdict] && margin(r) < margin(b))) best.set(r.label, r);
+  }
+  return [...best.values()];
 }
 
 /** Bands as drawn on the chart (union over modes per excitation), as text. */

@@ -4,6 +4,8 @@ import { h } from 'preact';
 // The components are rendered by calling them (render-text.ts); useState just returns its initial value.
 vi.mock('preact/hooks', () => ({
   useState: <T,>(init: T | (() => T)) => [typeof init === 'function' ? (init as () => T)() : init, () => {}],
+  // Effects (the report's print header) do not run when rendering to text.
+  useEffect: () => {},
 }));
 
 import { DEMO_CASES } from '../../../src/forms';
