@@ -9,3 +9,4 @@ export { RECORD_LIMITS, checkRecordSize, type MotionRecord, type RecordResult, t
 export { analyseMotionRecord, type SpectrumAnalysis, type SpectrumOptions, type PeakReport } from './spectrum';
 export { resampleUniform, sampleTiming, type SampleTiming, type UniformRecord } from './resample';
 export { welchPsd, chooseSegmentLength, type WelchSpectrum } from './welch';
+export { MotionRecorder, type MotionSample, type MotionSource, type MotionTrace, type PushOutcome, type Triple } from './motion-recorder';
