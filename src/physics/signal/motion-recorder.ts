@@ -89,7 +89,16 @@ export class MotionRecorder {
   trace(maxPoints: number, lastS?: number): MotionTrace {
     const end = this.n;
     let start = 0;
-    if (lastS !== undefined && end > 0) while (start < end && this.t[start] < this.t[end - 1] - lastS) start++;
+    if (lastS !== undefined && end > 0) {
+      // First sample at or after (last time − lastS), by bisection: the trace is redrawn many times a second.
+      const from = this.t[end - 1] - lastS;
+      let hi = end - 1;
+      while (start < hi) {
+        const mid = (start + hi) >> 1;
+        if (this.t[mid] < from) start = mid + 1;
+        else hi = mid;
+      }
+    }
     const count = end - start;
     const buckets = Math.max(1, Math.floor(maxPoints / 2));
     if (count <= 2 * buckets) return { timeS: this.t.slice(start, end), axes: [this.a[0].slice(start, end), this.a[1].slice(start, end), this.a[2].slice(start, end)] };

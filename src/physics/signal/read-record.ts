@@ -16,7 +16,8 @@ export function parseMotionRecord(text: string): RecordResult {
   if (text.length > RECORD_LIMITS.maxChars) {
     return { ok: false, reason: 'too-large', message: `file too large: expected at most ${RECORD_LIMITS.maxChars} characters, got ${text.length}; cut the record to the part of interest` };
   }
-  const lines = text.split(/\r\n|\n|\r/);
+  // A byte-order mark (spreadsheets on Windows write one) is not part of the first value.
+  const lines = (text.charCodeAt(0) === 0xfeff ? text.slice(1) : text).split(/\r\n|\n|\r/);
   const content: number[] = []; // indices of lines that are not blank or comments
   for (let i = 0; i < lines.length; i++) if (!isSkippable(lines[i])) content.push(i);
   if (content.length === 0) return { ok: false, reason: 'no-data', message: 'no rows found: the file is empty or has only blank and comment lines' };

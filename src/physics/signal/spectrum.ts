@@ -80,6 +80,7 @@ export function analyseMotionRecord(record: MotionRecord, options: SpectrumOptio
   ];
   if (timing.intervalJitter > 0.01) notes.push(`the samples were not evenly timed (interval scatter ${fmt(100 * timing.intervalJitter)} %); they were put on an even ${fmt(rateHz)} Hz grid by straight-line interpolation`);
   if (timing.longestGapS > 5 * timing.medianIntervalS) notes.push(`a gap of ${fmt(timing.longestGapS)} s at ${fmt(timing.longestGapAtS)} s into the record was bridged by a straight line`);
+  if (rateHz < 5) notes.push(`the samples are ${fmt(1 / rateHz)} s apart: if the time column is in milliseconds, convert it to seconds`);
   if (seg.note) notes.push(seg.note);
   if (peaks.length === 0) notes.push(`no peak stands ${minQualityDb} dB above the noise floor between ${fmt(FIRST_BIN * resolutionHz)} and ${fmt(nyquistHz)} Hz`);
 

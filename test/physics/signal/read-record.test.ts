@@ -49,6 +49,12 @@ describe('reading a motion record from a logger file', () => {
     expect(spaces.notes[0]).toContain('space-separated, decimal comma, 2 header lines');
   });
 
+  it('ignores a byte-order mark before the first value', () => {
+    const r = read('\uFEFF' + table(300, 1, ';', true).join('\n'));
+    expect(r.record.timeS[0]).toBe(0);
+    expect(r.record.axes.length).toBe(1);
+  });
+
   it('counts the rows that do not read and names the first, with what was expected and what was got', () => {
     const lines = table(300, 3, ',');
     lines[40] = '0.40,0.1,oops,0.3';

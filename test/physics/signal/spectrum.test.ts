@@ -92,6 +92,19 @@ describe('spectrum and peaks of synthetic records of known content', () => {
     expectClose(ratios.reduce((s, v) => s + v, 0) / ratios.length, 0.02, { rtol: 0.1, label: 'mean half-power damping over four records' });
   }, 30_000);
 
+  it('fits the decay after the strongest of several taps', () => {
+    // Three taps of one mode (5.3 Hz, ζ = 0.015) at 3 s, 25 s and 44 s, the second the strongest; each has died
+    // away (an e-fold in 2 s) long before the next.
+    const taps = [3, 25, 44].map((startS, i) => ({ frequencyHz: 5.3, dampingRatio: 0.015, amplitude: [0.4, 1, 0.6][i], startS, phase: i }));
+    const a = analysed(analyseMotionRecord(syntheticRecord(regularTimes(200, 60), [taps], 0.01, 31)));
+    expect(a.peaks.length).toBe(1);
+    const p = a.peaks[0];
+    expect(p.freeDecay.fromS as number).toBeGreaterThan(25);
+    expect(p.freeDecay.toS as number).toBeLessThan(44);
+    // Reference: the damping the taps were made with (exact); 12 % as for the single taps above.
+    expectClose(p.dampingRatio as number, 0.015, { rtol: 0.12, label: 'damping after the strongest tap' });
+  });
+
   it('says "not resolved" when a peak is narrower than three bins, and finds nothing in pure noise', () => {
     const r = syntheticRecord(regularTimes(200, 60), [[{ frequencyHz: 9, dampingRatio: 0.002, amplitude: 1, startS: 1 }]], 0.01, 8);
     const a = analysed(analyseMotionRecord(r));
