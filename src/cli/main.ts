@@ -7,6 +7,7 @@ import { cautionLines } from '../text/cautions';
 import { runCaseCommand } from './case-command';
 import { runMemberCommand } from './member-command';
 import { runSectionCommand } from './section-command';
+import { runSpectrumCommand } from './spectrum-command';
 
 interface Subcommand {
   summary: string;
@@ -18,6 +19,7 @@ const SUBCOMMANDS: Record<string, Subcommand> = {
   member: { usage: 'member FILE', summary: 'dry and wet modes of a member model (SI JSON)', run: runMemberCommand },
   section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
   case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
+  spectrum: { usage: 'spectrum FILE', summary: 'peaks of a motion record (CSV or text: time s, 1 to 3 accelerations)', run: runSpectrumCommand },
 };
 
 function help(): string {
