@@ -6,6 +6,7 @@ vi.mock('preact/hooks', () => ({
   useState: <T,>(init: T | (() => T)) => [typeof init === 'function' ? (init as () => T)() : init, () => {}],
   // Effects (the report's print header) do not run when rendering to text.
   useEffect: () => {},
+  useRef: <T,>(init: T) => ({ current: init }),
 }));
 
 import { DEMO_CASES } from '../../../src/forms';

@@ -7,6 +7,7 @@ vi.mock('preact/hooks', () => ({
   useState: <T,>(init: T | (() => T)) => [typeof init === 'function' ? (init as () => T)() : init, () => {}],
   useMemo: <T,>(f: () => T) => f(),
   useEffect: () => {},
+  useRef: <T,>(init: T) => ({ current: init }),
 }));
 
 import { solveSection, type SectionInput } from '../../../src/physics/section';
