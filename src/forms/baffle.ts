@@ -39,7 +39,7 @@ const FIELDS: readonly FieldDef[] = [
     default: '0',
     min: NON_NEGATIVE,
     max: { valueSI: MAX_PERFORATION_RATIO, inclusive: true },
-    help: 'Holes reduce the added mass (DNV-RP-H103 §4.6.4.3, from memory), up to 50 % open area.',
+    help: 'Holes reduce the added mass (DNV-RP-H103, Modelling and Analysis of Marine Operations, §4.6.4.3), up to 50 % open area.',
   },
   END_EFFECT_FIELD,
   BEAM_THEORY_FIELD,

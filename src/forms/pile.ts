@@ -43,7 +43,7 @@ const FIELDS: readonly FieldDef[] = [
     default: '5',
     min: POSITIVE,
     showWhen: { key: 'foundation', values: ['soil-springs'] },
-    help: 'Lateral spring per metre of pile per metre of deflection. Clays: about 67 × undrained shear strength (Davisson, from memory).',
+    help: 'Lateral spring per metre of pile per metre of deflection. Clays: about 67 × undrained shear strength (M.T. Davisson & K.E. Robinson, Bending and buckling of partially embedded piles, 6th ICSMFE, 1965).',
   },
   {
     key: 'soilModulusGradient',
@@ -54,7 +54,7 @@ const FIELDS: readonly FieldDef[] = [
     default: '4.4',
     min: POSITIVE,
     showWhen: { key: 'foundation', values: ['soil-springs-linear'] },
-    help: 'Rise of the spring modulus per metre of depth. Submerged sand: loose 1.3, medium 4.4, dense 10.7 MN/m³ (Terzaghi 1955, from memory).',
+    help: 'Rise of the spring modulus per metre of depth. Submerged sand: loose 1.3, medium 4.4, dense 10.7 MN/m³ (K. Terzaghi, Evaluation of coefficients of subgrade reaction, Géotechnique 5, 1955).',
   },
   {
     key: 'topMass',
@@ -78,7 +78,7 @@ const FIELDS: readonly FieldDef[] = [
   },
   sizeField('growthThickness', 'Marine growth thickness', '50', {
     min: NON_NEGATIVE,
-    help: 'Typically 50 to 100 mm in the upper 40 m of North Sea waters (NORSOK N-003, from memory); 0 for none.',
+    help: 'Typically 50 to 100 mm in the upper 40 m of North Sea waters (NORSOK N-003, Actions and action effects); 0 for none.',
   }),
   liquidDensityField(1025, SEAWATER_HELP),
   {
@@ -92,8 +92,8 @@ const FIELDS: readonly FieldDef[] = [
     advanced: true,
     help: 'About a horizontal axis through the pile top.',
   },
-  densityField('growthDensity', 'Marine growth density', '1325', { advanced: true, help: 'About 1325 kg/m³ (NORSOK N-003, from memory).' }),
-  heightField('growthTop', 'Marine growth from (above still water)', '2', { advanced: true, help: 'Top of the growth zone above the still water level (NORSOK N-003 zoning, from memory).' }),
+  densityField('growthDensity', 'Marine growth density', '1325', { advanced: true, help: 'About 1325 kg/m³ (NORSOK N-003, Actions and action effects).' }),
+  heightField('growthTop', 'Marine growth from (above still water)', '2', { advanced: true, help: 'Top of the growth zone above the still water level (NORSOK N-003, Actions and action effects, marine growth zones).' }),
   heightField('growthBottom', 'Marine growth down to (below still water)', '40', { advanced: true, help: 'Bottom of the growth zone below the still water level; it stops at the mudline.' }),
   END_EFFECT_FIELD,
   BEAM_THEORY_FIELD,

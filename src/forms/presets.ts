@@ -12,7 +12,7 @@ export function densityField(key: string, label: string, def: string, extra: Par
   return { key, label, type: 'quantity', dimension: 'density', units: { si: 'kg/m^3', us: 'lb/ft^3' }, default: def, min: NON_NEGATIVE, ...extra };
 }
 
-/** Common inputs of Wetmode's check values §6 (carbon steel; stainless 316); ν = 0.3 for both (common practice). */
+/** Common inputs (carbon steel; stainless 316, docs/sources.md §S7); ν = 0.3 for both (common practice). */
 export const MATERIAL_CHOICES: readonly Choice[] = [
   {
     value: 'carbon-steel',
@@ -70,7 +70,7 @@ export function materialFields(defaultMaterial: 'carbon-steel' | 'stainless-316'
 /**
  * Riser contents. Gas: ρ = pM/(ZRT) (classical) gives about 80 to 130 kg/m³ for natural gas at 100 to 150 bar
  * and 15 °C; 100 is a round middle value (our estimate). Oil 850 (crude oils 800 to 950, common practice).
- * Water 1000, seawater 1025 (check values §6). Drilling mud 1500, middle of 1200 to 2000 (design notes): enter the
+ * Water 1000, seawater 1025 (docs/sources.md §S7). Drilling mud 1500, middle of 1200 to 2000 (common practice, §S7): enter the
  * actual mud weight.
  */
 export const CONTENTS_CHOICES: readonly Choice[] = [
@@ -114,7 +114,7 @@ export function yesNoField(key: string, label: string, def: 'yes' | 'no', extra:
   };
 }
 
-/** Beam theory: automatic (shear included when length / depth < 10, design notes §3), or chosen. */
+/** Beam theory: automatic (shear included when length / depth < 10, common practice: docs/sources.md §S13), or chosen. */
 export const BEAM_THEORY_FIELD: ChoiceField = {
   key: 'beamTheory',
   label: 'Beam theory',
@@ -131,5 +131,5 @@ export const BEAM_THEORY_FIELD: ChoiceField = {
 /** The beam engine's optional 3D end-effect reduction of added mass. */
 export const END_EFFECT_FIELD: ChoiceField = yesNoField('endEffect3d', '3D end effect on added mass', 'no', {
   advanced: true,
-  help: 'Reduce the added mass of a short submerged length (DNV-RP-H103 Table A-2, from memory). Off: two-dimensional strip theory.',
+  help: 'Reduce the added mass of a short submerged length (DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-2). Off: two-dimensional strip theory.',
 });

@@ -11,7 +11,7 @@ import { ResultsScreen } from './screens/ResultsScreen';
 import { OpenLinkScreen } from './screens/OpenLinkScreen';
 import { CasesScreen, ReceivedBanner, ShareActions } from './cases';
 import { ReportScreen } from './screens/ReportScreen';
-import { AppServicesProvider, useModel } from './state/context';
+import { AppServicesProvider, useModel, useServices } from './state/context';
 import { useBoot } from './state/use-boot';
 import type { Route } from './shell/router';
 
@@ -25,6 +25,10 @@ function ResultsWithActions() {
   );
 }
 
+function SectionWithModel() {
+  return <SectionScreen model={useServices().section} />;
+}
+
 function Screen({ route }: { route: Route }) {
   switch (route.screen) {
     case 'cases':
@@ -36,7 +40,7 @@ function Screen({ route }: { route: Route }) {
     case 'report':
       return <ReportScreen />;
     case 'section':
-      return <SectionScreen />;
+      return <SectionWithModel />;
     case 'cautions':
       return <CautionsScreen />;
     case 'open':

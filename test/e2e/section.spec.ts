@@ -39,4 +39,8 @@ test('the Results screen shows the submerged section of the open member with its
   await page.getByRole('link', { name: 'Open in the Section view' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Section' })).toBeVisible();
   await expect(page.getByText(/This member's section at z =/)).toBeVisible();
+  // The pile stands up through the water: its section is a plan view, with quay or tank walls, not a seabed.
+  await expect(page.getByLabel('Section seen')).toHaveValue('plan');
+  await expect(page.getByText('Quay wall or tank wall alongside', { exact: false })).toBeVisible();
+  await expect(page.locator('.section-numbers')).toContainText('1.000');
 });

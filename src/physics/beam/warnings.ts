@@ -28,7 +28,7 @@ export function memberWarnings(model: MemberModel, plan: AddedMassPlan | null, c
     if (plan && s.shape === 'plate-strip' && s.widthM / s.thicknessM < 20) {
       out.push(
         `Plate width / thickness is ${(s.widthM / s.thicknessM).toPrecision(3)}: the thin-plate added mass ρπ(w/2)² ` +
-          'neglects thickness (a rectangle of aspect 10 has Ca ≈ 1.14, DNV-RP-H103 Table A-1, from memory).',
+          'neglects thickness (a rectangle of aspect 10 has Ca ≈ 1.14 in DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-1).',
       );
       break;
     }

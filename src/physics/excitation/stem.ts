@@ -1,6 +1,6 @@
 /**
  * Sensor-stem screen: the shedding frequency should stay at or below a fraction of the natural frequency,
- * f_s / f_n ≤ r_max (0.8, common practice; also in thermowell guidance, from memory).
+ * f_s / f_n ≤ r_max (0.8, common practice; docs/sources.md §S6.3).
  * Equality passes, so the excitation band in mode frequency is f_n < f_s / r_max (upper edge excluded).
  * The critical speed is the flow speed at which f_s = r_max · f_n.
  */

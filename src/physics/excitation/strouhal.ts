@@ -27,7 +27,7 @@ export interface StrouhalValue {
   source: string;
 }
 
-/** Circular cylinder Reynolds-number ranges (check-values.md §5). */
+/** Circular cylinder Reynolds-number ranges (docs/sources.md §S6.2). */
 export const RE_SUBCRITICAL_MIN = 300;
 export const RE_SUBCRITICAL_MAX = 2e5;
 export const RE_TRANSCRITICAL_MIN = 3.5e6;
@@ -43,7 +43,7 @@ const SUBCRITICAL: StrouhalValue = {
   regime: 'subcritical',
   source:
     'circle, subcritical 300 ≤ Re ≤ 2×10⁵: St ≈ 0.2 (common practice; DNV-RP-C205 §9). ' +
-    'EN 1991-1-4 Annex E uses 0.18 for design (from memory).',
+    'EN 1991-1-4 (Eurocode 1, wind actions) Annex E, Table E.1 uses 0.18 for design.',
 };
 
 const LAMINAR: StrouhalValue = {
@@ -53,14 +53,14 @@ const LAMINAR: StrouhalValue = {
   regime: 'laminar',
   source:
     'circle, Re < 300: no shedding below Re ≈ 40–50, then St rises from about 0.12 towards 0.2 ' +
-    '(A. Roshko, NACA Report 1191, 1954, from memory); 0.2 used as the conservative upper value.',
+    '(A. Roshko, On the development of turbulent wakes from vortex streets, NACA Report 1191, 1954); 0.2 used as the conservative upper value.',
 };
 
 /**
  * Critical and supercritical range: the laminar boundary layer separation moves, regular shedding weakens
  * and measured St scatters widely. We screen with the band between the two published anchors around it
  * (0.2 subcritical, 0.27 transcritical) and use its upper end. Narrow-band values up to about 0.45 have been
- * reported near Re ≈ 5×10⁵ (from memory), so the source text says so and invites an override.
+ * reported near Re ≈ 5×10⁵ (docs/sources.md §S6.2), so the source text says so and invites an override.
  */
 const CRITICAL: StrouhalValue = {
   value: 0.27,
@@ -70,7 +70,7 @@ const CRITICAL: StrouhalValue = {
   source:
     'circle, critical/supercritical 2×10⁵ < Re ≤ 3.5×10⁶: shedding is weak and St scatters; Wetmode screens with the ' +
     'band 0.2 (subcritical, DNV-RP-C205 §9) to 0.27 (transcritical, Roshko 1961) and uses 0.27 (conservative). ' +
-    'Values up to ≈0.45 were reported near Re ≈ 5×10⁵ (from memory): override St if that matters.',
+    'Values up to ≈0.45 were reported near Re ≈ 5×10⁵ (R.D. Blevins, Flow-Induced Vibration, 2nd ed., 1990, ch. 3): override St if that matters.',
 };
 
 const TRANSCRITICAL: StrouhalValue = {
@@ -88,7 +88,7 @@ const PLATE_NORMAL: StrouhalValue = {
   regime: 'plate-normal',
   source:
     'flat plate normal to the flow (d/b ≤ 0.1): St ≈ 0.14–0.15 on plate width (Fage & Johansen, Proc. R. Soc. A 116 ' +
-    '(1927) 170; R.D. Blevins, Flow-Induced Vibration, 2nd ed., 1990; both from memory); 0.15 used.',
+    '(1927) 170; R.D. Blevins, Flow-Induced Vibration, 2nd ed., 1990); 0.15 used.',
 };
 
 const SQUARE: StrouhalValue = {
@@ -97,8 +97,8 @@ const SQUARE: StrouhalValue = {
   high: 0.13,
   regime: 'square',
   source:
-    'square section, flow normal to a face (0.9 ≤ d/b ≤ 1.1): St ≈ 0.13 (S. Okajima, J. Fluid Mech. 123 (1982) 379, ' +
-    'from memory); EN 1991-1-4 Table E.1 gives 0.12 (from memory); 0.13 used.',
+    'square section, flow normal to a face (0.9 ≤ d/b ≤ 1.1): St ≈ 0.13 (S. Okajima, J. Fluid Mech. 123 (1982) 379); ' +
+    'EN 1991-1-4 Table E.1 gives 0.12; 0.13 used.',
 };
 
 const RECTANGLE_DEFAULT: StrouhalValue = {
@@ -108,7 +108,7 @@ const RECTANGLE_DEFAULT: StrouhalValue = {
   regime: 'rectangle-default',
   source:
     'Wetmode default, no source: sharp-edged rectangles have St from about 0.06 to 0.2 depending on d/b ' +
-    '(EN 1991-1-4 Figure E.1, from memory); 0.2 is used as an upper value. Enter St for this section if known.',
+    '(EN 1991-1-4 Annex E, Figure E.1); 0.2 is used as an upper value. Enter St for this section if known.',
 };
 
 /** Strouhal number of a circular cylinder at Reynolds number `re` (ranges above, boundaries inclusive as listed). */

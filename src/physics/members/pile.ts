@@ -60,7 +60,7 @@ export interface PileInput {
   beamTheory?: BeamTheoryChoice;
 }
 
-/** Default fixity depth in outer diameters below the mudline (common practice; check-values §6 gives 3.5–8 D). */
+/** Default fixity depth in outer diameters below the mudline (common practice, 3.5–8 D: docs/sources.md §S9). */
 export const DEFAULT_FIXITY_DIAMETERS = 6;
 /** Steps used to represent springs that rise linearly with depth by piecewise-constant ranges. */
 export const LINEAR_SOIL_STEPS = 10;

@@ -1,6 +1,6 @@
 /**
  * Which beam theory a member gets. Euler–Bernoulli leaves out shear deformation and rotary inertia, which lower
- * the frequencies of stubby members; the design notes (§3) set the line at length / section depth ≈ 10, the same
+ * the frequencies of stubby members; common practice sets the line at length / section depth ≈ 10 (docs/sources.md §S13), the same
  * line at which the beam engine warns. 'auto' takes Timoshenko below it.
  */
 import { oneOf } from './check';
@@ -9,7 +9,7 @@ export type BeamTheory = 'euler-bernoulli' | 'timoshenko';
 export type BeamTheoryChoice = 'auto' | BeamTheory;
 export const BEAM_THEORY_CHOICES: readonly BeamTheoryChoice[] = ['auto', 'euler-bernoulli', 'timoshenko'];
 
-/** Length / section depth below which 'auto' includes shear deformation (design notes §3). */
+/** Length / section depth below which 'auto' includes shear deformation (common practice, docs/sources.md §S13). */
 export const STUBBY_LENGTH_TO_DEPTH = 10;
 
 /** Checks `beamTheory` (absent = 'auto'). */

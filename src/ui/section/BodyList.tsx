@@ -5,16 +5,20 @@ import { BodyCard } from './BodyCard';
 interface Props {
   form: SectionForm;
   errors: FieldErrors;
+  /** Words of the Add button ("Add a body", or "Add a neighbour pile or body" in a plan view). */
+  addLabel?: string;
+  /** The axes in a few words ("x to the right, y up"). */
+  axes?: string;
   onChange: (form: SectionForm) => void;
 }
 
 /** The bodies of the section, each in its own card, with Add and Remove. */
-export function BodyList({ form, errors, onChange }: Props) {
+export function BodyList({ form, errors, addLabel = 'Add a body', axes = 'x to the right, y up', onChange }: Props) {
   const full = form.bodies.length >= MAX_EDITOR_BODIES;
   return (
     <div class="section-bodies">
       <h2 class="section-subhead">Bodies</h2>
-      <p class="field-help">Sizes in mm unless you type a unit (24 in, 0.6 m). x to the right, y up, from the origin of the section.</p>
+      <p class="field-help">Sizes in mm unless you type a unit (24 in, 0.6 m). {axes}, from the origin of the section.</p>
       {errors['bodies'] && (
         <p class="field-error" role="alert">
           <span aria-hidden="true">✖ </span>
@@ -33,7 +37,7 @@ export function BodyList({ form, errors, onChange }: Props) {
         />
       ))}
       <button type="button" class="btn" disabled={full} onClick={() => onChange(addBody(form))}>
-        Add a body
+        {addLabel}
       </button>
       {full && <p class="field-help">At most {MAX_EDITOR_BODIES} bodies.</p>}
     </div>

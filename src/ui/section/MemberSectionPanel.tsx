@@ -3,11 +3,12 @@ import { useMemo } from 'preact/hooks';
 import type { MemberModel } from '../../physics/beam/model';
 import { formatQuantity, type UnitSystem } from '../../units';
 import { formatSig } from '../format/numbers';
-import { sectionFormFromMember } from './from-member';
+import { useServices } from '../state/context';
+import { sectionFromMember } from './from-member';
 import { mapView } from './map-grid';
 import { mapDisplay } from './map-values';
-import { readSectionForm } from './read-form';
 import { useSectionSolve } from './use-section-solve';
+import { SURROUND_WORDS } from './view-words';
 import { MapLegend } from './MapLegend';
 import { MemberSectionLink } from './MemberSectionLink';
 import { SectionPlot } from './SectionPlot';
@@ -17,11 +18,13 @@ import { SectionPlot } from './SectionPlot';
  * map for sway (the motion of bending), and its Ca. The full numbers are one tap away in the Section view.
  */
 export function MemberSectionPanel({ model, system }: { model: MemberModel; system: UnitSystem }) {
-  const s = useMemo(() => sectionFormFromMember(model), [model]);
-  const input = useMemo(() => (s ? readSectionForm(s.form).input : null), [s]);
+  const { sectionSolver } = useServices();
+  // The member's own section input, solved as the member engine sees it (no rounding through the editor's text).
+  const s = useMemo(() => sectionFromMember(model), [model]);
+  const input = s?.input ?? null;
   const view = useMemo(() => (input ? mapView(input) : null), [input]);
   const map = useMemo(() => (view ? { body: 0, motion: 'x' as const, grid: view.grid } : null), [view]);
-  const solve = useSectionSolve(input, map, { energyCheck: false });
+  const solve = useSectionSolve(sectionSolver, input, map, { energyCheck: false });
   const unit = system === 'si' ? 'mm' : 'in';
   const formatLength = (m: number) => formatQuantity(m, unit, 4);
   const shown = solve.shown;
@@ -43,6 +46,7 @@ export function MemberSectionPanel({ model, system }: { model: MemberModel; syst
           stale={!shown}
           label="The member's submerged section to scale, with the liquid speed around it as it sways"
           formatLength={formatLength}
+          axes={SURROUND_WORDS[s.plan ? 'plan' : 'elevation'].axes}
         />
         <div>
           {display && <MapLegend display={display} quantity="speed" />}

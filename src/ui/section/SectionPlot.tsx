@@ -21,6 +21,8 @@ interface Props {
   /** One-sentence description for screen readers. */
   label: string;
   formatLength: (m: number) => string;
+  /** The axes in a few words (elevation "x to the right, y up", or a plan view's words). */
+  axes?: string;
 }
 
 /** The map as a data URL of one pixel per cell (the browser scales it; pixelated, so cells stay cells). */
@@ -40,7 +42,7 @@ function useMapImage(field: SectionField | null, display: MapDisplay | null): st
 }
 
 /** The section to scale with the flow map underneath; a tap reads the value at that point. */
-export function SectionPlot({ input, box, field, display, body, motion, stale, label, formatLength }: Props) {
+export function SectionPlot({ input, box, field, display, body, motion, stale, label, formatLength, axes = 'x to the right, y up' }: Props) {
   const f = plotFrame(box, WIDTH);
   const image = useMapImage(field, display);
   const [picked, setPicked] = useState<{ x: number; y: number } | null>(null);
@@ -87,7 +89,7 @@ export function SectionPlot({ input, box, field, display, body, motion, stale, l
       </svg>
       <figcaption>
         {stale && <strong class="stale-note">Out of date: drawn for the section before your last change. </strong>}
-        <span>Drawn to scale; x to the right, y up; + marks each body's centre, the arrow its motion.</span>{' '}
+        <span>Drawn to scale; {axes}; + marks each body's centre, the arrow its motion.</span>{' '}
         {display && (
           <span class="sec-readout" aria-live="polite">
             {pick

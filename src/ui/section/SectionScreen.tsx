@@ -1,15 +1,15 @@
 import './section.css';
-import { useMemo, useState } from 'preact/hooks';
-import type { SectionDof, SectionInput } from '../../physics/section';
-import { formatQuantity, type UnitSystem } from '../../units';
-import { patchSurround, type SectionForm } from './form';
+import { useEffect, useMemo, useState } from 'preact/hooks';
+import type { SectionInput } from '../../physics/section';
+import { formatQuantity } from '../../units';
+import { patchSurround } from './form';
 import { clearance, enclosureOf, straightBoundaries } from './geometry';
 import { mapView } from './map-grid';
-import { mapDisplay, type MapQuantity } from './map-values';
+import { mapDisplay } from './map-values';
 import { MOTION_WORDS } from './numbers';
-import { SECTION_PRESETS, type SectionPreset } from './presets';
-import { readSectionForm } from './read-form';
-import { inputKey, useSectionSolve, type SolveState } from './use-section-solve';
+import type { SectionModel, SectionModelState } from './section-model';
+import { inputKey, type SolveState } from './section-solves';
+import { SURROUND_WORDS } from './view-words';
 import { BodyList } from './BodyList';
 import { MapControls } from './MapControls';
 import { MapLegend } from './MapLegend';
@@ -19,25 +19,19 @@ import { SectionPlot } from './SectionPlot';
 import { FREE_SURFACE_NOTE, SurroundingsEditor, type Clearances } from './SurroundingsEditor';
 import { TextField } from '../controls/TextField';
 
-interface ViewState {
-  form: SectionForm;
-  motion: SectionDof;
-  body: number;
-  quantity: MapQuantity;
-  system: UnitSystem;
-  about: string;
-}
-
-function fromPreset(p: SectionPreset, keep?: ViewState): ViewState {
-  return { form: p.make(), motion: p.motion, body: 0, quantity: keep?.quantity ?? 'speed', system: keep?.system ?? 'si', about: p.about };
-}
-
-/** The editor's state outlives the screen (kept for the page's life), so a visit to another screen loses nothing. */
-let remembered: ViewState | null = null;
-
-/** Puts a section (for example the open member's) into the editor; the next visit to the screen shows it. */
-export function loadSectionForm(form: SectionForm, about: string): void {
-  remembered = { form, motion: 'x', body: 0, quantity: remembered?.quantity ?? 'speed', system: remembered?.system ?? 'si', about };
+/** The model's state, re-rendered on every change; the model solves only while a screen is attached. */
+function useSectionModel(model: SectionModel): SectionModelState {
+  const [state, setState] = useState(() => model.get());
+  useEffect(() => {
+    setState(model.get());
+    const off = model.subscribe(() => setState(model.get()));
+    const detach = model.attach();
+    return () => {
+      off();
+      detach();
+    };
+  }, [model]);
+  return state;
 }
 
 function clearancesOf(input: SectionInput | null): Clearances {
@@ -59,18 +53,10 @@ function statusText(solve: SolveState, invalid: boolean, stale: boolean): { text
 }
 
 /** The Section view: edit a section and its surroundings, see it to scale with its flow map, read its added mass. */
-export function SectionScreen() {
-  const [v, setV] = useState<ViewState>(() => remembered ?? fromPreset(SECTION_PRESETS[0]));
-  const update = (patch: Partial<ViewState>) =>
-    setV((old) => {
-      remembered = { ...old, ...patch };
-      return remembered;
-    });
-  const reading = useMemo(() => readSectionForm(v.form), [v.form]);
-  const input = reading.input;
-  const body = Math.min(v.body, v.form.bodies.length - 1);
-  const mapRequest = useMemo(() => (input ? { body, motion: v.motion, grid: mapView(input).grid } : null), [input, body, v.motion]);
-  const solve = useSectionSolve(input, mapRequest);
+export function SectionScreen({ model }: { model: SectionModel }) {
+  const v = useSectionModel(model);
+  const { reading, input, body, solve } = v;
+  const words = SURROUND_WORDS[v.view];
   const shown = solve.shown;
   const stale = !shown || shown.key !== inputKey(input);
   const unit = v.system === 'si' ? 'mm' : 'in';
@@ -90,7 +76,7 @@ export function SectionScreen() {
     <section class="screen section-screen" aria-labelledby="screen-title">
       <h1 id="screen-title" tabIndex={-1}>Section</h1>
       <p class="lead">Added mass of any cross-section in still liquid, near walls, a free surface or inside a pipe. Start from a preset and change it.</p>
-      <PresetBar onPick={(p) => update(fromPreset(p, v))} />
+      <PresetBar onPick={(p) => model.pickPreset(p)} />
       {v.about && <p class="field-help section-about">{v.about}</p>}
       <div class="section-layout">
         <div class="section-editor">
@@ -103,16 +89,18 @@ export function SectionScreen() {
               unit="kg/m³"
               error={reading.errors['density']}
               help="Seawater about 1025, fresh water 998, fuel about 800."
-              onInput={(t) => update({ form: { ...v.form, density: t }, about: '' })}
+              onInput={(t) => model.editForm({ ...v.form, density: t })}
             />
           </fieldset>
-          <BodyList form={v.form} errors={reading.errors} onChange={(form) => update({ form, about: '' })} />
+          <BodyList form={v.form} errors={reading.errors} addLabel={words.addBody} axes={words.axes} onChange={(form) => model.editForm(form)} />
           <SurroundingsEditor
             s={v.form.surround}
             errors={reading.errors}
             clearances={clearancesOf(input)}
             formatLength={formatLength}
-            onChange={(patch) => update({ form: patchSurround(v.form, patch), about: '' })}
+            view={v.view}
+            onView={(view) => model.setView(view)}
+            onChange={(patch) => model.editForm(patchSurround(v.form, patch))}
           />
         </div>
         <div class="section-view">
@@ -121,9 +109,9 @@ export function SectionScreen() {
             body={body}
             motion={v.motion}
             quantity={v.quantity}
-            onBody={(k) => update({ body: k })}
-            onMotion={(m) => update({ motion: m })}
-            onQuantity={(q) => update({ quantity: q })}
+            onBody={(k) => model.setBody(k)}
+            onMotion={(m) => model.setMotion(m)}
+            onQuantity={(q) => model.setQuantity(q)}
           />
           <p class={`status section-status${status.error ? ' error' : ''}`} role="status" aria-live="polite">{status.text}</p>
           {drawn ? (
@@ -137,6 +125,7 @@ export function SectionScreen() {
               stale={stale}
               label={label}
               formatLength={formatLength}
+              axes={words.axes}
             />
           ) : (
             <p class="panel notice">The drawing appears once the section reads.</p>
@@ -151,7 +140,7 @@ export function SectionScreen() {
               input={shown.input}
               result={shown.result}
               system={v.system}
-              onSystem={(system) => update({ system })}
+              onSystem={(system) => model.setSystem(system)}
               checking={solve.phase === 'checking'}
               stale={stale}
               formatLength={formatLength}

@@ -1,6 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { surroundKey, type EnclosureShape, type FieldErrors, type SurroundForm, type WallSide } from './form';
 import { TextField } from '../controls/TextField';
+import { SECTION_VIEWS, SURROUND_WORDS, type SectionView } from './view-words';
 
 export type Clearances = Partial<Record<'wallBelow' | 'wallBeside' | 'freeSurface', number>>;
 
@@ -10,6 +11,9 @@ interface Props {
   /** Clear gap (m) from each straight boundary to the nearest body; negative when a body crosses it. */
   clearances: Clearances;
   formatLength: (m: number) => string;
+  /** How the section is seen: the words for the walls and the surface follow it. */
+  view: SectionView;
+  onView: (view: SectionView) => void;
   onChange: (patch: Partial<SurroundForm>) => void;
 }
 
@@ -30,7 +34,8 @@ function Toggle({ id, label, checked, onChange, children }: { id: string; label:
 }
 
 /** Walls, free surface and enclosure around the bodies; open water when none is chosen. */
-export function SurroundingsEditor({ s, errors, clearances, formatLength, onChange }: Props) {
+export function SurroundingsEditor({ s, errors, clearances, formatLength, view, onView, onChange }: Props) {
+  const w = SURROUND_WORDS[view];
   const err = (f: keyof SurroundForm | 'all') => errors[surroundKey(f)];
   const gap = (m: number | undefined) =>
     m === undefined ? undefined : m > 0 ? `Clear gap to the nearest body: ${formatLength(m)}.` : 'A body reaches or crosses it: only the part on the liquid side is wetted.';
@@ -40,6 +45,17 @@ export function SurroundingsEditor({ s, errors, clearances, formatLength, onChan
   return (
     <fieldset class="section-surround">
       <legend>Surroundings</legend>
+      <div class="field">
+        <label for="sec-s-view">Section seen</label>
+        <select id="sec-s-view" value={view} onChange={(e) => onView((e.target as HTMLSelectElement).value as SectionView)}>
+          {SECTION_VIEWS.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+        <p class="field-help">{w.seen}</p>
+      </div>
       <p class="field-help">None ticked: open water, the liquid reaching far in every direction.</p>
       {err('all') && (
         <p class="field-error" role="alert">
@@ -47,10 +63,10 @@ export function SurroundingsEditor({ s, errors, clearances, formatLength, onChan
           {err('all')}
         </p>
       )}
-      <Toggle id="sec-s-wallBelow" label="Wall or seabed below" checked={s.wallBelow} onChange={(on) => onChange({ wallBelow: on })}>
-        {len('wallBelowDistance', 'Distance below the origin', gap(clearances.wallBelow))}
+      <Toggle id="sec-s-wallBelow" label={w.wallBelow} checked={s.wallBelow} onChange={(on) => onChange({ wallBelow: on })}>
+        {len('wallBelowDistance', w.wallBelowDistance, gap(clearances.wallBelow))}
       </Toggle>
-      <Toggle id="sec-s-wallBeside" label="Wall beside" checked={s.wallBeside} onChange={(on) => onChange({ wallBeside: on })}>
+      <Toggle id="sec-s-wallBeside" label={w.wallBeside} checked={s.wallBeside} onChange={(on) => onChange({ wallBeside: on })}>
         <div class="field">
           <label for="sec-s-side">Side</label>
           <select id="sec-s-side" value={s.wallBesideSide} onChange={(e) => onChange({ wallBesideSide: (e.target as HTMLSelectElement).value as WallSide })}>
@@ -58,12 +74,15 @@ export function SurroundingsEditor({ s, errors, clearances, formatLength, onChan
             <option value="left">Left (−x)</option>
           </select>
         </div>
-        {len('wallBesideDistance', 'Distance from the origin', gap(clearances.wallBeside))}
+        {len('wallBesideDistance', w.wallBesideDistance, gap(clearances.wallBeside))}
       </Toggle>
-      <Toggle id="sec-s-freeSurface" label="Free surface above" checked={s.freeSurface} onChange={(on) => onChange({ freeSurface: on })}>
-        {len('freeSurfaceDistance', 'Distance above the origin', gap(clearances.freeSurface))}
-        <p class="field-help field-wide">{FREE_SURFACE_NOTE}</p>
-      </Toggle>
+      {/* A free surface is horizontal: in a plan view it is offered only to switch off one already set. */}
+      {(view === 'elevation' || s.freeSurface) && (
+        <Toggle id="sec-s-freeSurface" label={w.freeSurface} checked={s.freeSurface} onChange={(on) => onChange({ freeSurface: on })}>
+          {len('freeSurfaceDistance', w.freeSurfaceDistance, gap(clearances.freeSurface))}
+          <p class="field-help field-wide">{FREE_SURFACE_NOTE}</p>
+        </Toggle>
+      )}
       <div class={`field${err('enclosure') ? ' has-error' : ''}`}>
         <label for="sec-s-enclosure">Enclosure (pipe, caisson, tank)</label>
         <select

@@ -4,35 +4,19 @@
  */
 import type { MemberModel } from '../../physics/beam/model';
 import { sectionAt } from '../../physics/beam/section-props';
-import type { BoundarySpec } from '../../physics/section/types';
-import { newBody, openWater, type SectionForm, type SurroundForm } from './form';
+import type { BodySpec, SectionInput } from '../../physics/section/types';
+import type { SectionForm } from './form';
+import { formFromInput, leftOutNote } from './form-from-input';
 
-/** Metres to the editor's millimetre text, to 5 significant figures. */
-function mm(m: number): string {
-  return String(Number((m * 1000).toPrecision(5)));
-}
-
-/** The surroundings the editor can show for these boundaries; the rest are listed as left out. */
-function surroundOf(boundaries: readonly BoundarySpec[]): { surround: SurroundForm; leftOut: number } {
-  const s = openWater();
-  let leftOut = 0;
-  for (const b of boundaries) {
-    if (b.kind === 'enclosure' && b.shape === 'circle') {
-      Object.assign(s, { enclosure: 'circle', enclosureDiameter: mm(b.diameterM), enclosureX: mm(b.centerM?.[0] ?? 0), enclosureY: mm(b.centerM?.[1] ?? 0) });
-    } else if (b.kind === 'enclosure' && b.shape === 'rectangle' && !b.angleDeg) {
-      Object.assign(s, { enclosure: 'rectangle', enclosureWidth: mm(b.widthM), enclosureHeight: mm(b.heightM), enclosureX: mm(b.centerM?.[0] ?? 0), enclosureY: mm(b.centerM?.[1] ?? 0) });
-    } else if (b.kind === 'wall' && b.normal[1] === 0 && b.normal[0] !== 0) {
-      // A vertical wall x = p: to the left of the member when the liquid is on its +x side.
-      Object.assign(s, { wallBeside: true, wallBesideSide: b.normal[0] > 0 ? 'left' : 'right', wallBesideDistance: mm(Math.abs(b.pointM[0])) });
-    } else if (b.kind === 'wall' && b.normal[0] === 0 && b.normal[1] > 0) {
-      Object.assign(s, { wallBelow: true, wallBelowDistance: mm(Math.abs(b.pointM[1])) });
-    } else if (b.kind === 'free-surface' && b.normal[0] === 0 && b.normal[1] < 0) {
-      Object.assign(s, { freeSurface: true, freeSurfaceDistance: mm(Math.abs(b.pointM[1])) });
-    } else {
-      leftOut++;
-    }
-  }
-  return { surround: s, leftOut };
+/** A member's submerged section as the solver's input, with a line on where it was taken. */
+export interface MemberSection {
+  input: SectionInput;
+  about: string;
+  /**
+   * True when the liquid level lies below the member's top: the member stands up through the surface, so its
+   * cross-section is horizontal and the Section view is a plan view (walls beside it, neighbouring piles).
+   */
+  plan: boolean;
 }
 
 /**
@@ -40,7 +24,7 @@ function surroundOf(boundaries: readonly BoundarySpec[]): { surround: SurroundFo
  * A tube or rod is a circle of its outer diameter; a plate strip is a plate with its width across the
  * motion (along y) and its thickness along the motion (x).
  */
-export function sectionFormFromMember(model: MemberModel): { form: SectionForm; about: string } | null {
+export function sectionFromMember(model: MemberModel): MemberSection | null {
   const liquid = model.liquid;
   if (!liquid) return null;
   const from = Math.max(0, liquid.fromM);
@@ -50,13 +34,21 @@ export function sectionFormFromMember(model: MemberModel): { form: SectionForm; 
   const seg = model.segments.find((s) => z >= s.fromM && z <= s.toM);
   if (!seg) return null;
   const p = sectionAt(seg, (z - seg.fromM) / (seg.toM - seg.fromM));
-  const body =
+  const body: BodySpec =
     seg.section.shape === 'plate-strip'
-      ? newBody('plate', { width: mm(p.outerWidthM), thickness: mm(p.depthM), angle: '90' })
-      : newBody('circle', { diameter: mm(p.outerWidthM) });
-  const { surround, leftOut } = surroundOf(liquid.boundaries ?? []);
-  const about =
-    `This member's section at z = ${Number(z.toPrecision(4))} m, in its surroundings, moving sideways (sway x) as it bends.` +
-    (leftOut > 0 ? ` ${leftOut} boundary${leftOut > 1 ? ' shapes' : ' shape'} could not be shown here and ${leftOut > 1 ? 'were' : 'was'} left out.` : '');
-  return { form: { density: String(liquid.densityKgPerM3), bodies: [body], surround }, about };
+      ? { shape: 'plate', widthM: p.outerWidthM, thicknessM: p.depthM, angleDeg: 90 }
+      : { shape: 'circle', diameterM: p.outerWidthM };
+  // The member's own boundaries, as the member engine solves them (none dropped, no rounding).
+  const input: SectionInput = { liquidDensityKgPerM3: liquid.densityKgPerM3, bodies: [body] };
+  if (liquid.boundaries && liquid.boundaries.length > 0) input.boundaries = [...liquid.boundaries];
+  const about = `This member's section at z = ${Number(z.toPrecision(4))} m, in its surroundings, moving sideways (sway x) as it bends.`;
+  return { input, about, plan: liquid.toM < model.lengthM };
+}
+
+/** The same section as the editor's form (millimetre text), for showing it; see sectionFromMember. */
+export function sectionFormFromMember(model: MemberModel): { form: SectionForm; about: string } | null {
+  const s = sectionFromMember(model);
+  if (!s) return null;
+  const { form, leftOut } = formFromInput(s.input);
+  return { form, about: s.about + leftOutNote(leftOut) };
 }

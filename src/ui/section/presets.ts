@@ -4,6 +4,7 @@
  */
 import type { SectionDof } from '../../physics/section';
 import { newBody, openWater, type SectionForm } from './form';
+import type { SectionView } from './view-words';
 
 export interface SectionPreset {
   id: string;
@@ -12,6 +13,8 @@ export interface SectionPreset {
   about: string;
   /** Motion shown on the map first. */
   motion: SectionDof;
+  /** How the section is seen (see view-words.ts); absent: along a horizontal member (elevation). */
+  view?: SectionView;
   make: () => SectionForm;
 }
 
@@ -67,6 +70,7 @@ export const SECTION_PRESETS: readonly SectionPreset[] = [
     label: 'Two piles side by side',
     about: 'Two 900 mm piles 1.8 m apart centre to centre: the off-diagonal terms couple them.',
     motion: 'x',
+    view: 'plan',
     make: () => ({
       density: SEAWATER,
       bodies: [newBody('circle', { diameter: '900', x: '-900' }), newBody('circle', { diameter: '900', x: '900' })],

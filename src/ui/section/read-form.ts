@@ -11,6 +11,7 @@ import { validateSectionInput, type BodySpec, type BoundarySpec, type SectionInp
 import { parseQuantity, type Dimension } from '../../units';
 import { bodyKey, surroundKey, type BodyForm, type FieldErrors, type FieldKey, type SectionForm, type SurroundForm } from './form';
 import { humanise, locate } from './messages';
+import { SURROUND_WORDS, type SurroundWords } from './view-words';
 
 /** Most bodies the editor offers (the dense solve grows as the cube of the panel count). */
 export const MAX_EDITOR_BODIES = 8;
@@ -115,7 +116,7 @@ interface Boundaries {
   keys: FieldKey[];
 }
 
-function readSurround(s: SurroundForm, r: Reader): Boundaries {
+function readSurround(s: SurroundForm, r: Reader, words: SurroundWords): Boundaries {
   const out: Boundaries = { list: [], names: [], keys: [] };
   const add = (b: BoundarySpec, name: string, key: FieldKey) => {
     out.list.push(b);
@@ -124,7 +125,7 @@ function readSurround(s: SurroundForm, r: Reader): Boundaries {
   };
   const len = (f: keyof SurroundForm, rule: 'positive' | 'any' = 'any', empty?: number) =>
     r.q(surroundKey(f), s[f] as string, 'length', 'mm', rule, empty);
-  if (s.wallBelow) add({ kind: 'wall', pointM: [0, -len('wallBelowDistance')], normal: [0, 1] }, 'the wall below', surroundKey('wallBelowDistance'));
+  if (s.wallBelow) add({ kind: 'wall', pointM: [0, -len('wallBelowDistance')], normal: [0, 1] }, words.wallBelowName, surroundKey('wallBelowDistance'));
   if (s.wallBeside) {
     const d = len('wallBesideDistance');
     const right = s.wallBesideSide === 'right';
@@ -143,14 +144,17 @@ function readSurround(s: SurroundForm, r: Reader): Boundaries {
   return out;
 }
 
-/** Reads the whole form; `input` is set only when every field reads and the geometry passes the solver's checks. */
-export function readSectionForm(form: SectionForm): FormReading {
+/**
+ * Reads the whole form; `input` is set only when every field reads and the geometry passes the solver's checks.
+ * `words` name the boundaries in messages (elevation or plan view, see view-words.ts).
+ */
+export function readSectionForm(form: SectionForm, words: SurroundWords = SURROUND_WORDS.elevation): FormReading {
   const r = reader();
   const density = r.q('density', form.density, 'density', 'kg/m^3', 'positive');
   if (form.bodies.length === 0) r.errors['bodies'] = 'add at least one body';
   if (form.bodies.length > MAX_EDITOR_BODIES) r.errors['bodies'] = `at most ${MAX_EDITOR_BODIES} bodies, got ${form.bodies.length}`;
   const bodies = form.bodies.map((b) => readBody(b, r));
-  const bounds = readSurround(form.surround, r);
+  const bounds = readSurround(form.surround, r, words);
   if (Object.keys(r.errors).length > 0) return { input: null, errors: r.errors, boundaryNames: bounds.names };
   const input: SectionInput = { liquidDensityKgPerM3: density, bodies: bodies as BodySpec[] };
   if (bounds.list.length > 0) input.boundaries = bounds.list;

@@ -14,6 +14,7 @@ import type { FieldErrors } from '../../forms';
 import { readCase } from '../../forms/read-case';
 import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
 import type { Answer } from '../../worker/solver-client';
+import { CASE_ADVICE, solverFailureWords } from './solver-words';
 
 export type CaseMode = 'editing' | 'received';
 
@@ -173,13 +174,7 @@ export class AppModel {
         const current = this.state.doc && contentKey(this.state.doc) === key;
         this.set({ results: { answer: ans.value, build, forKey: key }, computing: !current, solverMessage: null });
       } else {
-        this.set({
-          computing: false,
-          solverMessage:
-            ans.status === 'timeout'
-              ? `The solver took longer than ${Math.round(ans.afterMs / 1000)} s and was stopped. Check the inputs for extreme values.`
-              : `The solver stopped unexpectedly (${ans.message}). Your inputs are kept; change a value to try again.`,
-        });
+        this.set({ computing: false, solverMessage: solverFailureWords(ans, CASE_ADVICE) });
       }
     });
   }

@@ -10,12 +10,31 @@ import { excitationDefaults } from '../../forms/excitation';
 import { sameCaseContent, type Case } from '../../physics/case';
 import type { DemoCase } from '../../forms';
 import { AppModel } from './app-model';
+import type { SectionAnswer, SectionRequest } from '../../worker/solve-section';
+import { SectionModel } from '../section/section-model';
+import type { SectionSolver } from '../section/section-solves';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
     () => new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
   );
   return new AppModel(client);
+}
+
+/** The energy check of eight bodies takes about 9 s on the development machine; allow a slow tablet well beyond that. */
+const SECTION_TIMEOUT_MS = 60_000;
+
+/** The page's one section worker (started on first use), shared by the Section screen and the Results panel. */
+export function createSectionSolver(): SectionSolver {
+  return new SolverClient<SectionRequest, SectionAnswer>(
+    () => new Worker(new URL('../../worker/section.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
+    SECTION_TIMEOUT_MS,
+  );
+}
+
+/** The Section screen's model on the page's section worker. */
+export function createSectionModel(solver: SectionSolver): SectionModel {
+  return new SectionModel(solver);
 }
 
 /** A fresh, unsaved case from a demo, with its own id. */

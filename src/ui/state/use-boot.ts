@@ -1,7 +1,7 @@
 import { useEffect, useState } from 'preact/hooks';
 import { onBeforeUpdate } from '../shell/before-update';
 import type { AppServices } from './context';
-import { createModel, firstCase, openDeviceStore } from './services';
+import { createModel, createSectionModel, createSectionSolver, firstCase, openDeviceStore } from './services';
 
 /**
  * Creates the services once, opens the device store, and opens the first case (draft, or the demo on a
@@ -9,10 +9,13 @@ import { createModel, firstCase, openDeviceStore } from './services';
  * whenever the page is hidden (tablet switched off, app switched away).
  */
 export function useBoot(openingLink: boolean): AppServices {
-  const [services, setServices] = useState<AppServices>(() => ({ model: createModel(), store: null, storeMessage: null }));
+  const [services, setServices] = useState<AppServices>(() => {
+    const sectionSolver = createSectionSolver();
+    return { model: createModel(), section: createSectionModel(sectionSolver), sectionSolver, store: null, storeMessage: null };
+  });
   useEffect(() => {
     let cancelled = false;
-    const { model } = services;
+    const { model, section, sectionSolver } = services;
     void (async () => {
       const opened = await openDeviceStore();
       if (cancelled) return;
@@ -28,7 +31,7 @@ export function useBoot(openingLink: boolean): AppServices {
           if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = '#/member';
         }
       }
-      if (!cancelled) setServices({ model, store: opened.store, storeMessage: opened.message, storeRetryable: opened.retryable });
+      if (!cancelled) setServices({ model, section, sectionSolver, store: opened.store, storeMessage: opened.message, storeRetryable: opened.retryable });
     })();
     const offUpdate = onBeforeUpdate(() => model.flushDraft());
     const onHide = () => {

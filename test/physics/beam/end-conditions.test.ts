@@ -8,7 +8,7 @@ const L = 10;
 const { ei, m } = uniformProps();
 
 /**
- * Euler–Bernoulli eigenvalues λ1..λ4 (check-values.md §1): W.T. Thomson, Theory of Vibration with
+ * Euler–Bernoulli eigenvalues λ1..λ4 (docs/sources.md §S1): W.T. Thomson, Theory of Vibration with
  * Applications, Table 9.5-1 and App. D; R.D. Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1.
  */
 const CASES: { ends: string; supports: MemberSupport[]; lambdas: number[] }[] = [

@@ -2,7 +2,7 @@
 import type { MemberModel, MemberSegment, MemberSupport } from '../../../src/physics/beam';
 import { sectionAt } from '../../../src/physics/beam';
 
-/** Steel pipe 0.5 m × 20 mm, E = 210 GPa, ρ = 7850 kg/m³ (check-values.md §6). */
+/** Steel pipe 0.5 m × 20 mm, E = 210 GPa, ρ = 7850 kg/m³ (common inputs, docs/sources.md §S7). */
 export const PIPE: MemberSegment = {
   fromM: 0,
   toM: 10,

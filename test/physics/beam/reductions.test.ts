@@ -4,7 +4,7 @@ import { expectClose } from '../../helpers/expect-close';
 
 describe('added-mass reductions (DNV-RP-H103, from memory)', () => {
   it('reproduces the cylinder end-effect table at its points: L/D 1.2, 2.5, 5, 9 → 0.62, 0.78, 0.90, 0.96', () => {
-    // DNV-RP-H103 Table A-2 (from memory), check-values.md §3.
+    // DNV-RP-H103 Table A-2 (from memory), docs/sources.md §S4.1.
     const table: [number, number][] = [[1.2, 0.62], [2.5, 0.78], [5, 0.9], [9, 0.96]];
     for (const [ld, ca] of table) expectClose(cylinderEndEffectFactor(ld), ca, { rtol: 1e-12, label: `L/D ${ld}` });
     expectClose(cylinderEndEffectFactor(1e9), 1, { rtol: 1e-8, label: 'long cylinder' });
@@ -12,7 +12,7 @@ describe('added-mass reductions (DNV-RP-H103, from memory)', () => {
   });
 
   it('reproduces the plate table at b/a = 1, 2, 3, 5, 10 and is continuous at L = w', () => {
-    // DNV-RP-H103 Table A-2 (from memory), check-values.md §3, Ca on V_R = (π/4) a² b.
+    // DNV-RP-H103 Table A-2 (from memory), docs/sources.md §S4.1, Ca on V_R = (π/4) a² b.
     const table: [number, number][] = [[1, 0.579], [2, 0.757], [3, 0.83], [5, 0.897], [10, 0.947]];
     for (const [ba, ca] of table) expectClose(plateTableCa(1 / ba), ca, { rtol: 1e-12, label: `b/a ${ba}` });
     // A plate strip as long as it is wide is a square plate either way.

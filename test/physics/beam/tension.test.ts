@@ -10,7 +10,7 @@ const pinned = [
   { atM: L, kind: 'pinned' as const },
 ];
 
-/** Blevins, beams with axial load (check-values.md §1): f_n = (n²π / 2L²) √(EI/m) √(1 + T L² / (n²π² EI)). */
+/** Blevins, beams with axial load (docs/sources.md §S1.3): f_n = (n²π / 2L²) √(EI/m) √(1 + T L² / (n²π² EI)). */
 function blevins(n: number, t: number): number {
   return ((n * n * Math.PI) / (2 * L * L)) * Math.sqrt(ei / m) * Math.sqrt(1 + (t * L * L) / (n * n * Math.PI * Math.PI * ei));
 }

@@ -41,10 +41,10 @@ describe('case verdict and result contents', () => {
   it('defaults come with their sources: seawater, damping, DNV-RP-C205 §9 limits, ±20 % margin', () => {
     const r = screenResonance(pileCase(1, 0.3));
     expect(r.liquid).toEqual(SEAWATER);
-    expect(r.liquid.densityKgPerM3).toBe(1025); // check-values.md §6, seawater
+    expect(r.liquid.densityKgPerM3).toBe(1025); // seawater, common design value (docs/sources.md §S7)
     expect(r.damping).toEqual({ ratio: DEFAULT_DAMPING.ratio, source: DEFAULT_DAMPING.source });
     expect(r.limits).toEqual(DEFAULT_LIMITS);
-    // DNV-RP-C205 §9 and common practice, check-values.md §5.
+    // DNV-RP-C205 §9 and common practice, docs/sources.md §S6.
     expect(r.limits.inLineReducedVelocity).toMatchObject({ min: 1.0, max: 4.5 });
     expect(r.limits.inLineStabilityMax.value).toBe(1.8);
     expect(r.limits.crossFlowReducedVelocity).toMatchObject({ min: 3.0, max: 16 });

@@ -6,7 +6,7 @@ import { expectClose } from '../../helpers/expect-close';
 import { stemCase } from './fixtures';
 
 // Screen under test: f_s / f_n ≤ 0.8 for stems in flow — common practice (also thermowell guidance, from memory),
-// check-values.md §5. St = 0.2 subcritical (common practice; DNV-RP-C205 §9); 0.27 above (Roshko 1961 / Wetmode band).
+// docs/sources.md §S6.3. St = 0.2 subcritical (common practice; DNV-RP-C205 §9); 0.27 above (Roshko 1961 / Wetmode band).
 
 function stem(r: ScreeningResult): CheckResult {
   const c = r.modes[0].checks.find((x) => x.kind === 'stem-frequency-ratio');

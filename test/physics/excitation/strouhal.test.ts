@@ -10,7 +10,7 @@ import {
 
 describe('Strouhal number by section and Reynolds number', () => {
   it('is 0.2 for a circle in the subcritical range 300 … 2×10⁵, both ends included', () => {
-    // Published: St ≈ 0.2 for subcritical Re (common practice; DNV-RP-C205 §9), check-values.md §5.
+    // Published: St ≈ 0.2 for subcritical Re (common practice; DNV-RP-C205 §9), docs/sources.md §S6.2.
     for (const re of [300, 1e3, 5e4, 2e5]) {
       const st = strouhalCircle(re);
       expect(st.value, `Re = ${re}`).toBe(0.2);
@@ -22,7 +22,7 @@ describe('Strouhal number by section and Reynolds number', () => {
   });
 
   it('is 0.27 for a circle in the transcritical range above 3.5×10⁶', () => {
-    // Published: St = 0.27 for Re > 3.5×10⁶, A. Roshko, J. Fluid Mech. 10 (1961) 345; check-values.md §5.
+    // Published: St = 0.27 for Re > 3.5×10⁶, A. Roshko, J. Fluid Mech. 10 (1961) 345; docs/sources.md §S6.2.
     expect(RE_TRANSCRITICAL_MIN).toBe(3.5e6);
     for (const re of [3.5e6 * (1 + 1e-9), 1e7, 1e9]) {
       const st = strouhalCircle(re);

@@ -3,7 +3,7 @@ import { classifyFrequency, compareSeverity, VERDICT_WORDS, worstIndex } from '.
 import { expectClose } from '../../helpers/expect-close';
 
 // The rule under test is Wetmode's own (verdict.ts); the ±20 % figure is common practice, no source
-// (check-values.md §5). Margins are ratios of nearby numbers: rtol 1e-9 covers rounding.
+// (docs/sources.md §S6.4). Margins are ratios of nearby numbers: rtol 1e-9 covers rounding.
 const M = 0.2;
 
 describe('verdict rule: a mode frequency against an excitation band', () => {

@@ -5,7 +5,7 @@ import type { ScreeningInput } from '../../../src/physics/excitation/types';
 import { expectClose } from '../../helpers/expect-close';
 import { linearMode, pileCase } from './fixtures';
 
-// Ranges under test: DNV-RP-C205 §9 (check-values.md §5): in-line 1.0 ≤ V_R ≤ 4.5 when K_S ≤ 1.8,
+// Ranges under test: DNV-RP-C205 §9 (docs/sources.md §S6.1): in-line 1.0 ≤ V_R ≤ 4.5 when K_S ≤ 1.8,
 // cross-flow 3.0 ≤ V_R ≤ 16; ranges are closed. Standard pile: D = 1 m, mode evaluated at the waterline.
 
 function check(r: ScreeningResult, kind: CheckResult['kind'], mode = 0): CheckResult {

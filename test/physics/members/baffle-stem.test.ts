@@ -77,7 +77,7 @@ describe('sensor stem model (hand calculation)', () => {
   });
 
   it('a stubby stem gets the Timoshenko beam automatically; a slender one, or an explicit choice, does not', () => {
-    // Length / largest diameter = 0.25 / 0.028 = 8.9 < 10 (design notes §3 threshold): shear included.
+    // Length / largest diameter = 0.25 / 0.028 = 8.9 < 10 (common-practice threshold, docs/sources.md §S13): shear included.
     const stubby = buildStemModel(STEM);
     expect(stubby.model.beamTheory).toBe('timoshenko');
     expect(stubby.notes.some((n) => n.includes('Timoshenko'))).toBe(true);

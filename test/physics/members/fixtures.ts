@@ -1,7 +1,7 @@
-/** Invented members shared by the member-builder tests; material values are the common inputs of check-values §6. */
+/** Invented members shared by the member-builder tests; material values are the common inputs of docs/sources.md §S7. */
 import type { BaffleInput, PileInput, RiserInput, StemInput } from '../../../src/physics/members';
 
-// Invented pile; material values are the common inputs of check-values §6 (E = 210 GPa, ρ = 7850 kg/m³),
+// Invented pile; material values are the common inputs of docs/sources.md §S7 (E = 210 GPa, ρ = 7850 kg/m³),
 // marine growth 1325 kg/m³ (NORSOK N-003, from memory), seawater 1025 kg/m³.
 export const PILE: PileInput = {
   outerDiameterM: 0.61,
@@ -18,7 +18,7 @@ export const PILE: PileInput = {
   marineGrowth: { thicknessM: 0.05, densityKgPerM3: 1325, topAboveStillWaterM: 2, bottomBelowStillWaterM: 40 },
 };
 
-// Invented riser: 12.75 in (323.9 mm) × 12.7 mm steel (check-values §6 material), oil 850 kg/m³, 3 mm coating.
+// Invented riser: 12.75 in (323.9 mm) × 12.7 mm steel (docs/sources.md §S7 material), oil 850 kg/m³, 3 mm coating.
 export const RISER: RiserInput = {
   outerDiameterM: 0.3239,
   wallThicknessM: 0.0127,
@@ -35,7 +35,7 @@ export const RISER: RiserInput = {
   caisson: { innerDiameterM: 0.6, offsetM: 0.05, offsetAngleDeg: 90 },
 };
 
-// Invented members; material values are the common inputs of check-values §6.
+// Invented members; material values are the common inputs of docs/sources.md §S7.
 export const BAFFLE: BaffleInput = {
   spanM: 1.5,
   widthM: 0.3,

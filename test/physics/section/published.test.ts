@@ -1,5 +1,5 @@
 /**
- * Added mass of sections against published values (shared/docs/check-values.md §2), at the default
+ * Added mass of sections against published values (docs/sources.md §S3), at the default
  * resolution unless stated. The accuracy goal for exact results (circle, ellipse, annulus, half-immersed
  * circle) is 0.1 %; tabulated shapes are checked within their table's rounding.
  */
@@ -7,7 +7,7 @@ import { describe, expect, test } from 'vitest';
 import { expectClose } from '../../helpers/expect-close';
 import { RHO, alone, solved } from './helpers';
 
-// Accuracy goal of the project for exact results at default resolution (issue 3): 0.1 %.
+// Accuracy goal of the project for exact results at default resolution: 0.1 % (Wetmode's choice, docs/design.md).
 const GOAL = 1e-3;
 
 describe('unbounded liquid, exact results', () => {
@@ -82,7 +82,7 @@ describe('confined liquid and boundaries', () => {
     expectClose(r.bodies[0].displacedMassKgPerM, (RHO * Math.PI) / 2, { rtol: 1e-5, label: 'displaced mass of the half disc' });
   });
 
-  test('circle resting on a rigid wall, moving along it: Ca = π²/3 − 1 (limit of 2D potential theory, check-values §2)', () => {
+  test('circle resting on a rigid wall, moving along it: Ca = π²/3 − 1 (limit of 2D potential theory, docs/sources.md §S3.3)', () => {
     // Exact contact is handled directly (the circle and its image touch at one point). The cusp-shaped gap
     // converges at about O(h²): default resolution is within 2e-4 of the limit; 1e-3 leaves margin.
     const r = solved(alone({ shape: 'circle', diameterM: 2, centerM: [0, 1] }, [{ kind: 'wall', pointM: [0, 0], normal: [0, 1] }]));
@@ -116,7 +116,7 @@ describe('confined liquid and boundaries', () => {
     expect(ca[2]).toBeGreaterThan(Math.PI ** 2 / 6 - 1);
   });
 
-  test('far from a wall or the surface the circle returns to Ca = 1 (check-values §2)', () => {
+  test('far from a wall or the surface the circle returns to Ca = 1 (docs/sources.md §S3.3)', () => {
     // A wall at 20 radii changes Ca by about (R/2d)² ≈ 1e-3 (image dipole estimate, classical).
     const r = solved(alone({ shape: 'circle', diameterM: 2, centerM: [0, 20] }, [{ kind: 'wall', pointM: [0, 0], normal: [0, 1] }]));
     expectClose(r.bodies[0].caX, 1, { rtol: 2e-3, label: 'circle far from a wall' });

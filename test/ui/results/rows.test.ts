@@ -45,18 +45,18 @@ describe('mass per length by zone', () => {
   it('names the closed form used and the reduction factors with their sources', () => {
     const m = wetMember({
       addedMass: {
-        endEffect: { factor: 0.62, basis: 'rectangular plate', submergedLengthM: 1.5, widthM: 0.25, source: 'DNV-RP-H103 Table A-2 (from memory)' },
-        perforation: { ratio: 0.2, factor: 0.85, source: 'DNV-RP-H103 §4.6.4.3 (from memory)' },
+        endEffect: { factor: 0.62, basis: 'rectangular plate', submergedLengthM: 1.5, widthM: 0.25, source: 'DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-2' },
+        perforation: { ratio: 0.2, factor: 0.85, source: 'DNV-RP-H103, Modelling and Analysis of Marine Operations, §4.6.4.3' },
         sectionSolves: 0,
         sectionRelativeError: null,
       },
     });
     const lines = addedMassLines(m, displayUnits('si'));
     expect(lines[0]).toEqual({ text: 'Circle in open liquid, closed form m_a = ρ π D²/4 (Ca = 1)', source: 'H. Lamb, Hydrodynamics (classical)' });
-    expect(lines[1]).toEqual({ text: 'Perforation ratio 20.0 %: added mass × 0.850', source: 'DNV-RP-H103 §4.6.4.3 (from memory)' });
+    expect(lines[1]).toEqual({ text: 'Perforation ratio 20.0 %: added mass × 0.850', source: 'DNV-RP-H103, Modelling and Analysis of Marine Operations, §4.6.4.3' });
     expect(lines[2]).toEqual({
       text: '3D end effect (rectangular plate, submerged length 1.5 m, width 250 mm): added mass × 0.620',
-      source: 'DNV-RP-H103 Table A-2 (from memory)',
+      source: 'DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-2',
     });
   });
 

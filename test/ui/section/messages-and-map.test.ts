@@ -75,12 +75,15 @@ describe('flow map values relative to the body’s motion', () => {
   });
 });
 
-import { answerProblem, inputKey } from '../../../src/ui/section/use-section-solve';
+import { answerProblem, inputKey } from '../../../src/ui/section/section-solves';
 
 describe('what the view says when a solve gives no numbers', () => {
   it('words a timeout, a crash and a solver failure; says nothing for a superseded request', () => {
-    expect(answerProblem({ status: 'timeout', afterMs: 60000 })).toBe('The solve took longer than 60 s and was stopped. Try fewer bodies.');
-    expect(answerProblem({ status: 'crashed', message: 'out of memory' })).toBe('The solver stopped unexpectedly (out of memory).');
+    // The same sentences as the Member and Results screens (ui/state/solver-words.ts), with the Section screen's advice.
+    expect(answerProblem({ status: 'timeout', afterMs: 60000 })).toBe('The solver took longer than 60 s and was stopped. Try fewer bodies.');
+    expect(answerProblem({ status: 'crashed', message: 'out of memory' })).toBe(
+      'The solver stopped unexpectedly (out of memory). Your section is kept; change a value to try again.',
+    );
     expect(answerProblem({ status: 'superseded' })).toBeNull();
     expect(answerProblem({ status: 'done', value: { ok: false, reason: 'singular-system', message: 'the boundary-element system is singular' } })).toBe(
       'No numbers for this section: the boundary-element system is singular.',

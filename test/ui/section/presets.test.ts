@@ -60,7 +60,7 @@ describe('section presets', () => {
 
   it('flat plate: heave Ca between the zero-thickness plate and a 10 : 1 rectangle', () => {
     // Zero thickness: Ca = 1 (classical, Lamb). Width/thickness 10: Ca = 1.14 (DNV-RP-C205 App. D table, from
-    // memory, via check-values.md). The preset's 1000 × 10 mm plate is far thinner, so it lies between, near 1.
+    // memory, docs/sources.md §S3). The preset's 1000 × 10 mm plate is far thinner, so it lies between, near 1.
     const ca = solved('plate').bodies[0].caY;
     expect(ca).toBeGreaterThan(1);
     expect(ca).toBeLessThan(1.14);

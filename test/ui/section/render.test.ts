@@ -21,6 +21,7 @@ import { MapLegend } from '../../../src/ui/section/MapLegend';
 import { SectionNumbers } from '../../../src/ui/section/SectionNumbers';
 import { SectionPlot } from '../../../src/ui/section/SectionPlot';
 import { SectionScreen } from '../../../src/ui/section/SectionScreen';
+import { SectionModel } from '../../../src/ui/section/section-model';
 import { SurroundingsEditor } from '../../../src/ui/section/SurroundingsEditor';
 import { renderToText, textOf } from '../results/render-text';
 
@@ -35,7 +36,9 @@ function expectWellFormed(html: string): void {
 }
 
 describe('Section screen as first opened', () => {
-  const html = renderToText(h(SectionScreen, {}));
+  // A solver that never answers: the render shows the screen as first opened (effects do not run here anyway).
+  const model = new SectionModel({ request: () => new Promise(() => {}), terminate: () => {} });
+  const html = renderToText(h(SectionScreen, { model }));
   const text = textOf(html);
 
   it('offers the presets, the liquid, one body and the surroundings', () => {
@@ -79,15 +82,30 @@ describe('section editor pieces', () => {
   });
 
   it('shows distance fields only for chosen surroundings, with the gap and the free-surface note', () => {
-    const none = textOf(renderToText(h(SurroundingsEditor, { s: openWater(), errors: {}, clearances: {}, formatLength: mm, onChange: noop })));
+    const none = textOf(renderToText(h(SurroundingsEditor, { s: openWater(), errors: {}, clearances: {}, formatLength: mm, view: 'elevation', onView: noop, onChange: noop })));
     expect(none).not.toContain('Distance below the origin');
     const s = openWater({ wallBelow: true, freeSurface: true, enclosure: 'rectangle' });
-    const text = textOf(renderToText(h(SurroundingsEditor, { s, errors: {}, clearances: { wallBelow: 0.45, freeSurface: -0.5 }, formatLength: mm, onChange: noop })));
+    const text = textOf(
+      renderToText(h(SurroundingsEditor, { s, errors: {}, clearances: { wallBelow: 0.45, freeSurface: -0.5 }, formatLength: mm, view: 'elevation', onView: noop, onChange: noop })),
+    );
     expect(text).toContain('Distance below the origin');
     expect(text).toContain('Clear gap to the nearest body: 450 mm.');
     expect(text).toContain('A body reaches or crosses it: only the part on the liquid side is wetted.');
     expect(text).toContain('high-frequency limit (φ = 0, pressure release): valid well above the sloshing frequencies');
     expect(text).toContain('Inside width (x)');
+  });
+
+  it('in a plan view (a vertical member seen from above) names quay or tank walls and offers no free surface', () => {
+    const plan = textOf(renderToText(h(SurroundingsEditor, { s: openWater({ wallBelow: true }), errors: {}, clearances: {}, formatLength: mm, view: 'plan', onView: noop, onChange: noop })));
+    expect(plan).toContain('Quay wall or tank wall alongside');
+    expect(plan).toContain('Quay wall or tank wall ahead');
+    expect(plan).toContain('Plan view of a vertical member, seen from above');
+    expect(plan).not.toContain('seabed');
+    expect(plan).not.toContain('Free surface above');
+    expect(plan).not.toContain('Pressure-release line');
+    // A free surface already set stays offered, so it can be switched off.
+    const kept = textOf(renderToText(h(SurroundingsEditor, { s: openWater({ freeSurface: true }), errors: {}, clearances: {}, formatLength: mm, view: 'plan', onView: noop, onChange: noop })));
+    expect(kept).toContain('Pressure-release line');
   });
 });
 

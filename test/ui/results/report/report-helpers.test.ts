@@ -82,7 +82,7 @@ describe('method notes with their published sources', () => {
   });
 
   it('cites DNV-RP-H103 when a perforation factor was applied', () => {
-    const m = wetMember({ addedMass: { endEffect: null, perforation: { ratio: 0.2, factor: 0.85, source: 'DNV-RP-H103 §4.6.4.3 (from memory)' }, sectionSolves: 0, sectionRelativeError: null } });
+    const m = wetMember({ addedMass: { endEffect: null, perforation: { ratio: 0.2, factor: 0.85, source: 'DNV-RP-H103, Modelling and Analysis of Marine Operations, §4.6.4.3' }, sectionSolves: 0, sectionRelativeError: null } });
     expect(methodNotes(m, null, si).some((n) => n.source.startsWith('DNV-RP-H103'))).toBe(true);
   });
 });
