@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import { solveMember } from '../../../src/physics/beam';
+import { memberBand } from '../../../src/physics/uncertain/band';
+import { seededUniform01 } from '../../../src/physics/linalg/seeded';
+import { expectClose } from '../../helpers/expect-close';
+import { beamFrequency, uniformMember, uniformProps, PIPE } from '../beam/fixtures';
+import { tipMassLambdas } from './fixtures';
+
+const L = 10;
+const { ei, m } = uniformProps();
+
+function bandOf(...args: Parameters<typeof memberBand>) {
+  const out = memberBand(...args);
+  if (!out.ok) throw new Error(out.message);
+  return out.band;
+}
+
+describe('frequency band over ranged inputs', () => {
+  it('a fully submerged uniform cantilever with a range on liquid density scales by √(m/(m+m_a)) at both ends', () => {
+    // No Ca override exists in the member model; the added mass of an open circle is m_a = Ca ρ π D²/4 with
+    // Ca = 1 (H. Lamb, Hydrodynamics, classical), so ranging ρ ranges m_a exactly as ranging Ca would.
+    const model = uniformMember(L, [{ atM: 0, kind: 'clamped' }], { modes: 3, liquid: { densityKgPerM3: 1025, fromM: 0, toM: L } });
+    const band = bandOf(model, [{ path: 'liquid.densityKgPerM3', low: 800, high: 2000 }]);
+    const d = PIPE.section.shape === 'tube' ? PIPE.section.outerDiameterM : NaN;
+    const area = (Math.PI * d * d) / 4;
+    for (let j = 0; j < 3; j++) {
+      const fDry = band.dry.likelyHz[j];
+      // Mass-ratio rule f_wet/f_dry = √(m/(m+m_a)) for a uniform added mass (classical). Same mesh, same
+      // shapes: exact up to rounding.
+      expectClose(band.wet!.lowHz[j], fDry * Math.sqrt(m / (m + 2000 * area)), { rtol: 1e-6, label: `wet low, mode ${j + 1}` });
+      expectClose(band.wet!.highHz[j], fDry * Math.sqrt(m / (m + 800 * area)), { rtol: 1e-6, label: `wet high, mode ${j + 1}` });
+      // Density does not touch the dry member.
+      expect(band.dry.lowHz[j]).toBe(band.dry.highHz[j]);
+      expect(band.wet!.modes[j].method).toBe('corners');
+    }
+    // Cantilever λ1 = 1.875104 (R.D. Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1);
+    // 1e-5: the converged mesh is far better than that.
+    expectClose(band.dry.likelyHz[0], beamFrequency(1.875104, L, ei, m), { rtol: 1e-5, label: 'dry cantilever f1' });
+    expect(band.method).toBe('corners');
+  });
+
+  it('a cantilever with a tip-mass range has band ends at the tip-mass frequency equation for the two masses', () => {
+    const model = uniformMember(L, [{ atM: 0, kind: 'clamped' }], { modes: 3, masses: [{ atM: L, massKg: m * L }] });
+    const band = bandOf(model, [{ path: 'masses.0.massKg', low: 0.2 * m * L, high: 2 * m * L }]);
+    // Cross-check of the published equation (Blevins Table 8-8) solved here by scan and bisection.
+    const light = tipMassLambdas(0.2, 3);
+    const heavy = tipMassLambdas(2, 3);
+    for (let j = 0; j < 3; j++) {
+      // 1e-4: the mesh tolerance of 0.05 % on changes between doublings leaves errors well below this.
+      expectClose(band.dry.highHz[j], beamFrequency(light[j], L, ei, m), { rtol: 1e-4, label: `high end (μ = 0.2), mode ${j + 1}` });
+      expectClose(band.dry.lowHz[j], beamFrequency(heavy[j], L, ei, m), { rtol: 1e-4, label: `low end (μ = 2), mode ${j + 1}` });
+      expect(band.dry.modes[j].method).toBe('corners');
+    }
+    expect(band.wet).toBeNull();
+  });
+
+  it('a pinned support moved across the mid-span node is caught as non-monotone and searched; the band holds 200 random samples', () => {
+    // Pinned–pinned beam with a third pin moving over [3, 7] m: the lowest frequency peaks with the pin at
+    // mid-span, the node of the second pinned–pinned mode, where it equals that mode: λ = 2π
+    // (R.D. Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1, pinned–pinned).
+    const model = uniformMember(
+      L,
+      [{ atM: 0, kind: 'pinned' }, { atM: 4, kind: 'pinned' }, { atM: L, kind: 'pinned' }],
+      { modes: 2, mesh: { initialElements: 60, refine: false } },
+    );
+    const band = bandOf(model, [{ path: 'supports.1.atM', low: 3, high: 7 }]);
+    expect(band.dry.modes[0].method).toBe('sampled');
+    expect(band.dry.modes[0].reason).toContain('supports.1.atM');
+    // 1e-6: the search's line tolerance is 1e-6 of the range at a smooth peak; the 60-element mesh error is below it.
+    expectClose(band.dry.highHz[0], beamFrequency(2 * Math.PI, L, ei, m), { rtol: 1e-6, label: 'peak of f1 with the pin at mid-span' });
+    expectClose(band.dry.modes[0].highAt[0], 5, { rtol: 1e-3, label: 'pin position of the peak' });
+    // The corners alone (pin at 3 or 7 m) would miss the peak by far more than 1 %.
+    const corner = solveMember({ ...model, supports: [model.supports[0], { atM: 3, kind: 'pinned' }, model.supports[2]] });
+    if (!corner.ok) throw new Error(corner.message);
+    expect(corner.result.dry.frequenciesHz[0]).toBeLessThan(0.99 * band.dry.highHz[0]);
+
+    const rnd = seededUniform01(2026);
+    for (let s = 0; s < 200; s++) {
+      const at = 3 + 4 * rnd();
+      const out = solveMember({ ...model, supports: [model.supports[0], { atM: at, kind: 'pinned' }, model.supports[2]] });
+      if (!out.ok) throw new Error(out.message);
+      out.result.dry.frequenciesHz.forEach((f, j) => {
+        // Same mesh settings as the band's solves, so the containment is exact up to rounding (1e-12).
+        expect(f, `sample ${s} at ${at} m, mode ${j + 1}`).toBeGreaterThanOrEqual(band.dry.lowHz[j] * (1 - 1e-12));
+        expect(f, `sample ${s} at ${at} m, mode ${j + 1}`).toBeLessThanOrEqual(band.dry.highHz[j] * (1 + 1e-12));
+      });
+    }
+  });
+});
