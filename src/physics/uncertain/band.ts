@@ -15,7 +15,7 @@ import { solveMember } from '../beam/solve-member';
 import { parseMemberModel } from '../beam/validate';
 import type { AxisResult, BandMethod, BandOutcome, ModeBand, StateBand } from './band-types';
 import { type EvalFailure, gridShapes, MemberEvaluator, rememberingSectionSolver } from './evaluate';
-import { type Axis, axisValues, cornerDirections, crossedModes, type Direction, directionOf, disagree } from './monotone';
+import { type Axis, axisValues, cornerDirections, crossedModes, type Direction, directionOf, disagree, FLAT_RTOL } from './monotone';
 import { type ResolvedRange, resolveRanges } from './ranges';
 import { refineExtreme, sampleBox, type SearchTarget } from './search';
 import { sensitivityFromAxes } from './sensitivity';
@@ -155,7 +155,7 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
       for (let j = 0; j < modes; j++) {
         if (judged[s][j].method !== 'corners') continue;
         const [lo, hi] = before[si][j];
-        const tol = 1e-6 * hi;
+        const tol = FLAT_RTOL * hi;
         if (cornerLow(s, j) < lo - tol || cornerHigh(s, j) > hi + tol) judged[s][j] = { method: 'sampled', reason: 'a sample inside the ranges fell outside the corner band' };
       }
     });

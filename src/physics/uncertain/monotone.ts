@@ -13,8 +13,12 @@ import { SHAPE_GRID } from './evaluate';
 
 export type Direction = 'up' | 'down' | 'flat' | 'non-monotone';
 
-/** Relative change below which two frequencies count as equal (the fixed mesh's count rounding as breakpoints move). */
-export const FLAT_RTOL = 1e-6;
+/**
+ * Relative change below which two frequencies count as equal: a tenth of the default mesh tolerance (0.05 %).
+ * Moving a breakpoint (a water level, a support) re-spreads the fixed element count, which moves the
+ * frequencies by about the mesh's own accuracy; a turn smaller than that is not a turn a screening can see.
+ */
+export const FLAT_RTOL = 5e-5;
 
 /** Values along one input's axis (others at their likely values), with the store index of each setting. */
 export interface Axis {
