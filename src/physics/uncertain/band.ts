@@ -3,8 +3,10 @@
  * frequency at the likely inputs and the lowest and highest over the box of ranges.
  *
  * Method, per mode and state: the corner (vertex) method where the frequency is monotone in every ranged
- * input (then its extremes over the box lie at corners: 2^k solves), checked along each input's axis, across
- * the corners and for modes changing order (`monotone.ts`); otherwise a sampled search (`search.ts`).
+ * input (then its extremes over the box lie at corners), checked along each input's axis, across the corners
+ * and for modes changing order (`monotone.ts`); otherwise a sampled search (`search.ts`). Up to
+ * ALL_CORNERS_UP_TO inputs every corner is solved (2^k); beyond, when every axis is monotone, only the
+ * corners the axis directions point to, confirmed by 2k samples (any sample beyond them: every corner).
  * Band mode k is the k-th lowest frequency at each setting. Work is bounded: at most MAX_RANGED_INPUTS
  * inputs and `maxSolves` member solves, on the likely answer's converged mesh (`evaluate.ts`).
  */
@@ -30,9 +32,13 @@ export interface BandOptions {
   /** Seed of the samples (default 1), so a band repeats exactly. */
   seed?: number;
   sectionSolver?: SectionSolver;
+  /** Solve every corner even beyond ALL_CORNERS_UP_TO inputs (checks, studies). Default false. */
+  allCorners?: boolean;
 }
 
 export const DEFAULT_MAX_SOLVES = 600;
+/** Up to this many ranged inputs every corner is solved (2^4 = 16); beyond, only the corners the axis directions point to. */
+export const ALL_CORNERS_UP_TO = 4;
 
 type State = 'dry' | 'wet';
 
@@ -129,38 +135,84 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
   const axes = scanAxes(ev, ranges, x0, e0.index, shapes0, model.lengthM);
   if (!Array.isArray(axes)) return axes;
 
-  const cornerPoints: number[] = [];
-  for (let c = 0; c < 2 ** k; c++) {
-    const e = ev.solve(ranges.map((r, i) => (c & (1 << i) ? r.high : r.low)));
-    if (!e.ok) return e;
-    cornerPoints.push(e.index);
-  }
-  const cornerDirs = { dry: ranges.map((_, i) => cornerDirections(ev.store, cornerPoints, i, 'dry')), wet: hasWet ? ranges.map((_, i) => cornerDirections(ev.store, cornerPoints, i, 'wet')) : null };
+  // Extremes over every stored setting so far, per state and mode.
+  const extremes = (st: State, j: number): [number, number] => {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let p = 0; p < ev.store.count; p++) {
+      const f = ev.store.frequency(p, st, j);
+      lo = Math.min(lo, f);
+      hi = Math.max(hi, f);
+    }
+    return [lo, hi];
+  };
+  const outside = (before: [number, number], after: [number, number]) => after[0] < before[0] * (1 - FLAT_RTOL) || after[1] > before[1] * (1 + FLAT_RTOL);
   const judged = { dry: [] as { method: BandMethod; reason: string }[], wet: [] as { method: BandMethod; reason: string }[] };
-  for (const s of states) for (let j = 0; j < modes; j++) judged[s].push(judgeMode(axes, (i) => cornerDirs[s]![i][j], s, j));
+  let cornersUsed = 0;
+  // Many inputs, all monotone along their axes: solve only the corners the directions point to, and confirm
+  // with a few samples that nothing inside the box goes beyond them (else fall back to every corner).
+  const allMonotone = states.every((st) => axes.every((a) => a.direction[st]!.every((d) => d !== 'non-monotone') && a.crossing[st]!.every((c) => !c)));
+  if (k > ALL_CORNERS_UP_TO && allMonotone && !options.allCorners) {
+    const masks = new Set<number>();
+    for (const st of states) {
+      for (let j = 0; j < modes; j++) {
+        let lo = 0;
+        let hi = 0;
+        axes.forEach((a, i) => {
+          const d = a.direction[st]![j];
+          if (d === 'down') lo |= 1 << i;
+          if (d === 'up') hi |= 1 << i;
+        });
+        masks.add(lo).add(hi);
+      }
+    }
+    for (const c of masks) {
+      const e = ev.solve(ranges.map((r, i) => (c & (1 << i) ? r.high : r.low)));
+      if (!e.ok) return e;
+    }
+    const before = states.map((st) => Array.from({ length: modes }, (_, j) => extremes(st, j)));
+    const checks = 2 * k;
+    const failed = sampleBox(ev, ranges, checks, (options.seed ?? 1) + 7919);
+    if (failed) return failed;
+    if (states.every((st, si) => before[si].every((b, j) => !outside(b, extremes(st, j))))) {
+      cornersUsed = masks.size;
+      const reason = `monotone in every ranged input along its axis; extremes at the corners its directions point to, confirmed by ${checks} samples`;
+      for (const st of states) for (let j = 0; j < modes; j++) judged[st].push({ method: 'corners', reason });
+    }
+  }
+  if (cornersUsed === 0) {
+    const cornerPoints: number[] = [];
+    for (let c = 0; c < 2 ** k; c++) {
+      const e = ev.solve(ranges.map((r, i) => (c & (1 << i) ? r.high : r.low)));
+      if (!e.ok) return e;
+      cornerPoints.push(e.index);
+    }
+    cornersUsed = 2 ** k;
+    for (const st of states) {
+      const dirs = ranges.map((_, i) => cornerDirections(ev.store, cornerPoints, i, st));
+      judged[st] = Array.from({ length: modes }, (_, j) => judgeMode(axes, (i) => dirs[i][j], st, j));
+    }
+  }
 
-  // Cheapest first: corners only. Where a mode needs it, sample the box and refine that mode's extremes.
-  const cornerLow = (s: State, j: number) => Math.min(...cornerPoints.map((p) => ev.store.frequency(p, s, j)), ...axes.flatMap((a) => a.points.map((p) => ev.store.frequency(p, s, j))));
-  const cornerHigh = (s: State, j: number) => Math.max(...cornerPoints.map((p) => ev.store.frequency(p, s, j)), ...axes.flatMap((a) => a.points.map((p) => ev.store.frequency(p, s, j))));
+  // Where a mode needs it, sample the box and refine that mode's extremes.
   const notes: string[] = [];
-  const anySampled = () => states.some((s) => judged[s].some((m) => m.method === 'sampled'));
+  const anySampled = () => states.some((st) => judged[st].some((m) => m.method === 'sampled'));
   let sampleCount = 0;
   if (anySampled()) {
-    const before = states.map((s) => Array.from({ length: modes }, (_, j) => [cornerLow(s, j), cornerHigh(s, j)]));
+    const before = states.map((st) => Array.from({ length: modes }, (_, j) => extremes(st, j)));
     sampleCount = Math.min(options.samples ?? 16 + 8 * k, ev.budgetLeft);
     const failed = sampleBox(ev, ranges, sampleCount, options.seed ?? 1);
     if (failed) return failed;
     // A sample outside the corner band of a mode judged monotone shows a turn the checks missed.
-    states.forEach((s, si) => {
+    states.forEach((st, si) => {
       for (let j = 0; j < modes; j++) {
-        if (judged[s][j].method !== 'corners') continue;
-        const [lo, hi] = before[si][j];
-        const tol = FLAT_RTOL * hi;
-        if (cornerLow(s, j) < lo - tol || cornerHigh(s, j) > hi + tol) judged[s][j] = { method: 'sampled', reason: 'a sample inside the ranges fell outside the corner band' };
+        if (judged[st][j].method === 'corners' && outside(before[si][j], extremes(st, j))) {
+          judged[st][j] = { method: 'sampled', reason: 'a sample inside the ranges fell outside the corner band' };
+        }
       }
     });
     const targets: SearchTarget[] = [];
-    for (let j = 0; j < modes; j++) for (const s of states) if (judged[s][j].method === 'sampled') targets.push({ state: s, mode: j });
+    for (let j = 0; j < modes; j++) for (const st of states) if (judged[st][j].method === 'sampled') targets.push({ state: st, mode: j });
     for (const t of targets) {
       for (const sense of [1, -1] as const) {
         const failed2 = refineExtreme(ev, ranges, t, sense);
@@ -204,11 +256,11 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
   const allSampled = states.every((s) => sampledModes(s).length === modes);
   const noneSampled = states.every((s) => sampledModes(s).length === 0);
   const methodText = noneSampled
-    ? `corners: every mode is monotone in every ranged input (${2 ** k} corners)`
+    ? `corners: every mode is monotone in every ranged input (${cornersUsed} of ${2 ** k} corners solved)`
     : `sampled search (${sampleCount} seeded Latin-hypercube samples, then Brent line searches) for ${states
         .filter((s) => sampledModes(s).length > 0)
         .map((s) => `${s} mode${sampledModes(s).length > 1 ? 's' : ''} ${modeList(sampledModes(s))}`)
-        .join(' and ')}${allSampled ? '' : `; corners (${2 ** k}) for the others`}`;
+        .join(' and ')}${allSampled ? '' : `; corners (${cornersUsed} of ${2 ** k}) for the others`}`;
 
   const axisResults: AxisResult[] = axes.map((a) => ({
     path: a.path,

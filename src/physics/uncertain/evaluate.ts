@@ -17,17 +17,24 @@ import { withNumbersAt } from './paths';
 /** Points in the shape grid used to compare mode shapes between settings. */
 export const SHAPE_GRID = 48;
 
-/** A section solver that remembers its answers by input (the inputs are plain JSON). */
+/**
+ * A section solver that remembers its answers by geometry across settings. Added mass from potential flow
+ * is the liquid density times a purely geometric integral (classical: H. Lamb, Hydrodynamics), so the
+ * geometry is solved once at unit density and scaled, and a ranged liquid density costs no section solves.
+ */
 export function rememberingSectionSolver(inner: SectionSolver = defaultSectionSolver): SectionSolver {
   const memo = new Map<string, SectionSolverOutcome>();
   return (input) => {
-    const key = JSON.stringify(input);
+    const rho = input.liquidDensityKgPerM3;
+    const unit = { ...input, liquidDensityKgPerM3: 1 };
+    const key = JSON.stringify(unit);
     let out = memo.get(key);
     if (!out) {
-      out = inner(input);
+      out = inner(unit);
       memo.set(key, out);
     }
-    return out;
+    if (!out.ok) return out;
+    return { ok: true, result: { ...out.result, addedMass: out.result.addedMass.map((row) => row.map((v) => v * rho)) } };
   };
 }
 

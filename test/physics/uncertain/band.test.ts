@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { solveMember } from '../../../src/physics/beam';
+import { parseMemberModel, solveMember } from '../../../src/physics/beam';
+import pile from '../../../examples/member-fender-pile-port-halloran.json';
+import riser from '../../../examples/member-riser-skerry-alpha.json';
 import { memberBand } from '../../../src/physics/uncertain/band';
+import { FLAT_RTOL } from '../../../src/physics/uncertain/monotone';
 import { seededUniform01 } from '../../../src/physics/linalg/seeded';
 import { expectClose } from '../../helpers/expect-close';
 import { beamFrequency, uniformMember, uniformProps, PIPE } from '../beam/fixtures';
@@ -85,5 +88,42 @@ describe('frequency band over ranged inputs', () => {
         expect(f, `sample ${s} at ${at} m, mode ${j + 1}`).toBeLessThanOrEqual(band.dry.highHz[j] * (1 + 1e-12));
       });
     }
+  });
+});
+
+describe('band with many ranged inputs', () => {
+  it('solving only the corners the axis directions point to gives the same band as every corner', () => {
+    // Six inputs of the Port Halloran fender pile, all monotone; cross-check of the two corner routes.
+    const model = parseMemberModel(pile);
+    const ranges = [
+      { path: 'masses.0.massKg', low: 1500, high: 4000 },
+      { path: 'liquid.toM', low: 14, high: 18 },
+      { path: 'segments.1.coating.thicknessM', low: 0, high: 0.1 },
+      { path: 'segments.1.coating.densityKgPerM3', low: 1000, high: 1400 },
+      { path: 'soilSprings.0.modulusNPerM2', low: 3e6, high: 12e6 },
+      { path: 'soilSprings.0.toM', low: 4.5, high: 6 },
+    ];
+    const directed = bandOf(model, ranges);
+    const every = bandOf(model, ranges, { allCorners: true });
+    expect(directed.method).toBe('corners');
+    expect(directed.solves).toBeLessThan(every.solves);
+    for (const s of ['dry', 'wet'] as const) {
+      directed[s]!.lowHz.forEach((lo, j) => {
+        // FLAT_RTOL: an input that moves a mode by less than that (a dry mode and the water level, through the
+        // mesh alone) counts as flat, and either of its ends may then be the one solved.
+        expectClose(lo, every[s]!.lowHz[j], { rtol: FLAT_RTOL, label: `${s} low, mode ${j + 1}` });
+        expectClose(directed[s]!.highHz[j], every[s]!.highHz[j], { rtol: FLAT_RTOL, label: `${s} high, mode ${j + 1}` });
+      });
+    }
+  });
+
+  it('a ranged liquid density on a confined section reuses one section solve scaled by density, exactly', () => {
+    // Potential-flow added mass is ρ times a geometric integral (H. Lamb, Hydrodynamics, classical).
+    const model = parseMemberModel(riser);
+    const direct = solveMember({ ...model, liquid: { ...model.liquid!, densityKgPerM3: 1010 } });
+    const band = bandOf(model, [{ path: 'liquid.densityKgPerM3', low: 1010, high: 1030 }]);
+    if (!direct.ok) throw new Error(direct.message);
+    // 1e-6: the band's fixed mesh against the adaptive one at 72 elements (both converged far below this).
+    expectClose(band.wet!.highHz[0], direct.result.wet!.frequenciesHz[0], { rtol: 1e-6, label: 'wet f1 at 1010 kg/m³' });
   });
 });
