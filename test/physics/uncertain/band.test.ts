@@ -127,3 +127,44 @@ describe('band with many ranged inputs', () => {
     expectClose(band.wet!.highHz[0], direct.result.wet!.frequenciesHz[0], { rtol: 1e-6, label: 'wet f1 at 1010 kg/m³' });
   });
 });
+
+describe('band limits and failures', () => {
+  it('a compression range that buckles the member is a typed failure naming the setting', () => {
+    // Euler load of a cantilever π²EI/(4L²) (classical); the range runs to twice it in compression.
+    const pcr = (Math.PI ** 2 * ei) / (4 * L * L);
+    const model = uniformMember(L, [{ atM: 0, kind: 'clamped' }], { modes: 2, tensionN: 0 });
+    const out = memberBand(model, [{ path: 'tensionN', low: -2 * pcr, high: 0 }]);
+    expect(out.ok).toBe(false);
+    if (!out.ok) {
+      expect(out.reason).toBe('buckles');
+      expect(out.message).toContain('at tensionN = ');
+    }
+  });
+
+  it('a sampled search stops at the solve budget and says so', () => {
+    const model = uniformMember(L, [{ atM: 0, kind: 'pinned' }, { atM: 4, kind: 'pinned' }, { atM: L, kind: 'pinned' }], { modes: 2 });
+    const band = bandOf(model, [{ path: 'supports.1.atM', low: 3, high: 7 }], { maxSolves: 20 });
+    expect(band.solves).toBe(20);
+    expect(band.budgetExhausted).toBe(true);
+    expect(band.notes.join(' ')).toContain('budget of 20 solves');
+    expect(() => memberBand(model, [{ path: 'supports.1.atM', low: 3, high: 7 }], { maxSolves: 3 })).toThrow('maxSolves must be at least 7');
+  });
+
+  it('sensitivity entries equal the member solved with one input at each end, largest swing first', () => {
+    const model = uniformMember(L, [{ atM: 0, kind: 'clamped' }], {
+      modes: 2,
+      masses: [{ atM: L, massKg: 500 }],
+      liquid: { densityKgPerM3: 1025, fromM: 0, toM: 6 },
+    });
+    const band = bandOf(model, [
+      { path: 'liquid.toM', low: 4, high: 8 },
+      { path: 'masses.0.massKg', low: 0, high: 3000 },
+    ]);
+    expect(band.sensitivity.map((e) => e.path)).toEqual(['masses.0.massKg', 'liquid.toM']);
+    const direct = solveMember({ ...model, masses: [{ atM: L, massKg: 3000 }] });
+    if (!direct.ok) throw new Error(direct.message);
+    // Cross-check by a direct adaptive solve; 1e-6: the band's fixed mesh is the likely answer's converged one.
+    expectClose(band.sensitivity[0].atHighHz, direct.result.wet!.frequenciesHz[0], { rtol: 1e-6, label: 'f1 with 3000 kg at the tip' });
+    expect(band.sensitivity[0].direction).toBe('down');
+  });
+});
