@@ -10,17 +10,11 @@ import pile from '../../examples/member-fender-pile-port-halloran.json';
 import riser from '../../examples/member-riser-skerry-alpha.json';
 import baffle from '../../examples/member-baffle-marrow-creek.json';
 import stem from '../../examples/member-temperature-stem-tern-haven.json';
+import { PILE_RANGES } from '../physics/uncertain/fixtures';
 import { report, time } from './timing';
 
 const CASES: [string, unknown, InputRange[]][] = [
-  ['fender pile', pile, [
-    { path: 'masses.0.massKg', low: 1500, high: 4000 },
-    { path: 'liquid.toM', low: 14, high: 18 },
-    { path: 'segments.1.coating.thicknessM', low: 0, high: 0.1 },
-    { path: 'segments.1.coating.densityKgPerM3', low: 1000, high: 1400 },
-    { path: 'soilSprings.0.modulusNPerM2', low: 3e6, high: 12e6 },
-    { path: 'soilSprings.0.toM', low: 4.5, high: 6 },
-  ]],
+  ['fender pile', pile, PILE_RANGES],
   ['riser in caisson', riser, [
     { path: 'tensionN', low: 40000, high: 80000 },
     { path: 'liquid.toM', low: 24, high: 28 },

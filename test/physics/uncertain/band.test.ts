@@ -7,7 +7,7 @@ import { FLAT_RTOL } from '../../../src/physics/uncertain/monotone';
 import { seededUniform01 } from '../../../src/physics/linalg/seeded';
 import { expectClose } from '../../helpers/expect-close';
 import { beamFrequency, uniformMember, uniformProps, PIPE } from '../beam/fixtures';
-import { tipMassLambdas } from './fixtures';
+import { PILE_RANGES, tipMassLambdas } from './fixtures';
 
 const L = 10;
 const { ei, m } = uniformProps();
@@ -95,14 +95,7 @@ describe('band with many ranged inputs', () => {
   it('solving only the corners the axis directions point to gives the same band as every corner', () => {
     // Six inputs of the Port Halloran fender pile, all monotone; cross-check of the two corner routes.
     const model = parseMemberModel(pile);
-    const ranges = [
-      { path: 'masses.0.massKg', low: 1500, high: 4000 },
-      { path: 'liquid.toM', low: 14, high: 18 },
-      { path: 'segments.1.coating.thicknessM', low: 0, high: 0.1 },
-      { path: 'segments.1.coating.densityKgPerM3', low: 1000, high: 1400 },
-      { path: 'soilSprings.0.modulusNPerM2', low: 3e6, high: 12e6 },
-      { path: 'soilSprings.0.toM', low: 4.5, high: 6 },
-    ];
+    const ranges = PILE_RANGES;
     const directed = bandOf(model, ranges);
     const every = bandOf(model, ranges, { allCorners: true });
     expect(directed.method).toBe('corners');

@@ -1,5 +1,6 @@
 /** Shared helpers for the band and calibration tests (invented members; common steel values). */
 import { solveMember, type MemberModel } from '../../../src/physics/beam';
+import type { InputRange } from '../../../src/physics/uncertain/ranges';
 
 /** Roots of g on [a, b] by a fine scan and bisection (a simple root finder for cross-checks, kept apart from Brent's). */
 export function scanRoots(g: (x: number) => number, a: number, b: number, steps = 4000): number[] {
@@ -47,3 +48,13 @@ export function freqs(model: MemberModel, state: 'dry' | 'wet'): number[] {
   if (!out.ok) throw new Error(out.message);
   return state === 'dry' ? out.result.dry.frequenciesHz : out.result.wet!.frequenciesHz;
 }
+
+/** Six uncertain inputs of the Port Halloran fender pile example, of the size a surveyor would enter (invented). */
+export const PILE_RANGES: InputRange[] = [
+  { path: 'masses.0.massKg', low: 1500, high: 4000 },
+  { path: 'liquid.toM', low: 14, high: 18 },
+  { path: 'segments.1.coating.thicknessM', low: 0, high: 0.1 },
+  { path: 'segments.1.coating.densityKgPerM3', low: 1000, high: 1400 },
+  { path: 'soilSprings.0.modulusNPerM2', low: 3e6, high: 12e6 },
+  { path: 'soilSprings.0.toM', low: 4.5, high: 6 },
+];
