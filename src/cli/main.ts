@@ -4,6 +4,7 @@
  */
 import { readInput } from './read-input';
 import { cautionLines } from '../text/cautions';
+import { runCalibrateCommand } from './calibrate-command';
 import { runCaseCommand } from './case-command';
 import { runMemberCommand } from './member-command';
 import { runSectionCommand } from './section-command';
@@ -20,6 +21,7 @@ const SUBCOMMANDS: Record<string, Subcommand> = {
   section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
   case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
   spectrum: { usage: 'spectrum FILE', summary: 'peaks of a motion record (CSV or text: time s, 1 to 3 accelerations)', run: runSpectrumCommand },
+  calibrate: { usage: 'calibrate FILE', summary: 'back-calculate one unknown input from a measured frequency', run: runCalibrateCommand },
 };
 
 function help(): string {

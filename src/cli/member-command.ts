@@ -5,10 +5,12 @@
  */
 import { MECHANISM_MESSAGE, parseMemberModel, solveMember } from '../physics/beam';
 import { cautionLines } from '../text/cautions';
+import { bandJson, splitRanges } from './band-output';
 import { parseJsonText, toJson } from './json-out';
 
 export function runMemberCommand(inputText: string): string {
-  const model = parseMemberModel(parseJsonText(inputText, 'member'));
+  const { member, ranges } = splitRanges(parseJsonText(inputText, 'member'));
+  const model = parseMemberModel(member);
   const outcome = solveMember(model);
   const cautions = cautionLines();
   if (!outcome.ok) {
@@ -30,6 +32,7 @@ export function runMemberCommand(inputText: string): string {
     addedMass: r.addedMass,
     mesh: r.mesh,
     warnings: r.warnings,
+    ...(ranges === undefined ? {} : { band: bandJson(model, ranges, r) }),
     cautions,
   };
   return toJson(out);
