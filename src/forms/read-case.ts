@@ -2,7 +2,7 @@
  * A whole case as entered → what the solver needs: the member build and the resonance inputs, or the
  * messages by field. One function for the app, the worker's caller and the command line.
  */
-import type { Case } from '../physics/case';
+import type { Case } from '../case';
 import type { CaseExcitation } from '../physics/excitation/from-member';
 import type { MemberBuild } from '../physics/members';
 import { FORMS } from './index';

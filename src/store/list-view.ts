@@ -1,5 +1,5 @@
 /** Pure helpers for the Cases screen: text search and sorting of a loaded list. */
-import type { Case } from '../physics/case';
+import type { Case } from '../case';
 
 export type CaseSort = 'updated' | 'name' | 'tag' | 'kind';
 

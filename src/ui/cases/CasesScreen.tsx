@@ -1,5 +1,5 @@
 import { useRef, useState } from 'preact/hooks';
-import type { Case, MemberKind, UnitSystem } from '../../physics/case';
+import type { Case, MemberKind, UnitSystem } from '../../case';
 import type { DemoCase } from '../../forms';
 import { useModel, useServices } from '../state/context';
 import { caseFromDemo } from '../state/services';

@@ -1,5 +1,5 @@
 import { useId, useState } from 'preact/hooks';
-import { MEMBER_KINDS, type MemberKind, type UnitSystem } from '../../physics/case';
+import { MEMBER_KINDS, type MemberKind, type UnitSystem } from '../../case';
 import { DEMO_CASES, FORMS, type DemoCase } from '../../forms';
 import { kindTitle } from './format';
 import { loadNewCaseUnits, storeNewCaseUnits } from './new-case';

@@ -2,7 +2,7 @@
  * Pure formatting for the Cases screen: dates, byte counts, the storage line and one list row.
  * No DOM, no store: tested on their own (test/ui/cases).
  */
-import type { Case, MemberKind, Verdict } from '../../physics/case';
+import type { Case, MemberKind, Verdict } from '../../case';
 import { FORMS } from '../../forms';
 import { formatHz } from '../format/numbers';
 

@@ -1,5 +1,5 @@
 /** A fresh case of a member kind with the form's defaults, for the four "new case" buttons. */
-import { sameCaseContent, type Case, type MemberKind, type UnitSystem } from '../../physics/case';
+import { sameCaseContent, type Case, type MemberKind, type UnitSystem } from '../../case';
 import { DEMO_CASES, FORMS } from '../../forms';
 import { excitationDefaults } from '../../forms/excitation';
 import { newCase } from '../../store/new-case';

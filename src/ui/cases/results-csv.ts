@@ -3,7 +3,7 @@
  * checks, one table after another, for a spreadsheet. Numbers stay numbers (rounded to 6 significant figures,
  * more than any input justifies); `resultsToCsv` (src/share/csv.ts) writes them and defuses formula-like text.
  */
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { VERDICT_WORDS } from '../../physics/excitation/verdict';
 import { FORMS, type FieldDef } from '../../forms';
 import { excitationFields } from '../../forms/excitation';

@@ -1,4 +1,4 @@
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import type { Results } from '../state/app-model';
 import { displayUnits, sentence } from '../results/display-units';
 import { MassTable } from '../results/MassTable';

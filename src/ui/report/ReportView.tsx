@@ -1,4 +1,4 @@
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { FORMS } from '../../forms';
 import { excitationFields } from '../../forms/excitation';
 import { contentKey, type Results } from '../state/app-model';

@@ -7,8 +7,8 @@
  * does not read keeps the last good results on screen, marked out of date. Every edit of an editable case is
  * saved as a draft shortly after, so closing the tab, an update or a crash loses nothing.
  */
-import type { Case, KeyResult } from '../../physics/case';
-import { sameCaseContent } from '../../physics/case';
+import type { Case, KeyResult } from '../../case';
+import { sameCaseContent } from '../../case';
 import type { MemberBuild } from '../../physics/members';
 import type { FieldErrors } from '../../forms';
 import { readCase } from '../../forms/read-case';

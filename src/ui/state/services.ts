@@ -7,7 +7,7 @@ import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
 import { openStore, newCase, type CaseStore } from '../../store';
 import { DEMO_CASES, FORMS } from '../../forms';
 import { excitationDefaults } from '../../forms/excitation';
-import { sameCaseContent, type Case } from '../../physics/case';
+import { sameCaseContent, type Case } from '../../case';
 import type { DemoCase } from '../../forms';
 import { AppModel } from './app-model';
 

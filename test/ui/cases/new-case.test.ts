@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MEMBER_KINDS, parseCase } from '../../../src/physics/case';
+import { MEMBER_KINDS, parseCase } from '../../../src/case';
 import { FORMS } from '../../../src/forms';
 import { excitationDefaults } from '../../../src/forms/excitation';
 import { readCase } from '../../../src/forms/read-case';

@@ -8,8 +8,8 @@ vi.mock('preact/hooks', () => ({
 
 import { DEMO_CASES } from '../../../src/forms';
 import { readCase } from '../../../src/forms/read-case';
-import { createCase } from '../../../src/physics/case';
-import type { Case } from '../../../src/physics/case';
+import { createCase } from '../../../src/case';
+import type { Case } from '../../../src/case';
 import { CAUTIONS } from '../../../src/text/cautions';
 import { contentKey, type Results } from '../../../src/ui/state/app-model';
 import { ResultsView } from '../../../src/ui/results/ResultsView';

@@ -5,12 +5,12 @@
  *   and answers a newer version with `NEWER_VERSION_MESSAGE`.
  * - `sameCaseContent(a, b)` decides "same case" for received links.
  * - `createCase(init)` builds an empty case from an id, a time and the app version.
- * The parts live in `./case/`.
+ * The parts live beside this file.
  */
-export * from './case/types';
-export { CASE_LIMITS, cutText } from './case/limits';
-export { isPlainObject } from './case/fields';
-export { parseCase } from './case/parse';
-export { CASE_STEPS, caseV0toV1, type CaseStep } from './case/migrations';
-export { isRenamedCopy, sameCaseContent } from './case/compare';
-export { createCase, type CaseInit } from './case/create';
+export * from './types';
+export { CASE_LIMITS, cutText } from './limits';
+export { isPlainObject } from './fields';
+export { parseCase } from './parse';
+export { CASE_STEPS, caseV0toV1, type CaseStep } from './migrations';
+export { isRenamedCopy, sameCaseContent } from './compare';
+export { createCase, type CaseInit } from './create';

@@ -3,6 +3,8 @@
  * Everything from outside (a record read back, a link, a file) reaches the app only through `parseCase`.
  * The schema is ours; its field list and limits are documented here and in `limits.ts`.
  */
+import type { UnitSystem } from '../units/systems';
+import type { Verdict } from '../physics/excitation/verdict';
 
 /** Value of `format` in every case; tells a Wetmode case from any other JSON. */
 export const CASE_FORMAT = 'wetmode-case';
@@ -14,13 +16,9 @@ export const MEMBER_KINDS = ['pile', 'riser', 'baffle', 'stem'] as const;
 /** Member kind: pile, riser (or conductor), tank baffle, sensor stem. */
 export type MemberKind = (typeof MEMBER_KINDS)[number];
 
-export const UNIT_SYSTEMS = ['si', 'us'] as const;
-/** Units the forms offer first; every value still carries its own unit as typed. */
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
-
-export const VERDICTS = ['clear', 'close', 'inside-band'] as const;
-/** Resonance verdict words, shown with an icon shape and never by colour alone. */
-export type Verdict = (typeof VERDICTS)[number];
+// One declaration each: the unit systems belong to the units edge, the verdict words to the resonance screening.
+export { UNIT_SYSTEMS, type UnitSystem } from '../units/systems';
+export { VERDICTS, type Verdict } from '../physics/excitation/verdict';
 
 /** Result figures kept with a saved case so the Cases list can show them without solving again. */
 export interface KeyResult {
