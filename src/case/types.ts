@@ -5,6 +5,7 @@
  */
 import type { UnitSystem } from '../units/systems';
 import type { Verdict } from '../physics/excitation/verdict';
+import type { KindId as MemberKind } from '../kinds/registry-pure';
 
 /** Value of `format` in every case; tells a Wetmode case from any other JSON. */
 export const CASE_FORMAT = 'wetmode-case';
@@ -12,9 +13,8 @@ export const CASE_FORMAT = 'wetmode-case';
 /** The schema version this build writes. Older versions are migrated step by step (`migrations.ts`). */
 export const CASE_SCHEMA_VERSION = 1;
 
-export const MEMBER_KINDS = ['pile', 'riser', 'baffle', 'stem'] as const;
-/** Member kind: pile, riser (or conductor), tank baffle, sensor stem. */
-export type MemberKind = (typeof MEMBER_KINDS)[number];
+/** The member kinds a case may hold: the registry's ids (src/kinds/registry-pure.ts). */
+export { KIND_IDS as MEMBER_KINDS, type KindId as MemberKind } from '../kinds/registry-pure';
 
 // One declaration each: the unit systems belong to the units edge, the verdict words to the resonance screening.
 export { UNIT_SYSTEMS, type UnitSystem } from '../units/systems';

@@ -4,8 +4,8 @@
  */
 import type { Case } from '../case';
 import type { CaseExcitation } from '../physics/excitation/from-member';
-import type { MemberBuild } from '../physics/members';
-import { FORMS } from './index';
+import type { MemberBuild } from '../kinds/common/types';
+import { kindOf } from '../kinds/registry';
 import { readExcitation } from './excitation';
 import type { FieldErrors } from './types';
 
@@ -18,10 +18,10 @@ export type CaseReading =
  * stop the frequencies: the excitation is null and its messages come back beside the fields.
  */
 export function readCase(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitSystem'>): CaseReading {
-  const form = FORMS[c.kind];
-  const r = form.build(c.inputs, c.unitSystem);
+  const kind = kindOf(c.kind);
+  const r = kind.form.build(c.inputs, c.unitSystem);
   if (!r.ok) return { ok: false, errors: r.errors, excitationErrors: {} };
-  const e = readExcitation(c.kind, c.excitation, c.unitSystem, r.build);
+  const e = readExcitation(kind.resonance, c.excitation, c.unitSystem, r.build);
   return e.ok
     ? { ok: true, build: r.build, excitation: e.excitation, excitationErrors: {} }
     : { ok: true, build: r.build, excitation: null, excitationErrors: e.errors };

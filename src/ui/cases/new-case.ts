@@ -1,15 +1,15 @@
 /** A fresh case of a member kind with the form's defaults, for the four "new case" buttons. */
 import { sameCaseContent, type Case, type MemberKind, type UnitSystem } from '../../case';
-import { DEMO_CASES, FORMS } from '../../forms';
 import { excitationDefaults } from '../../forms/excitation';
 import { newCase } from '../../store/new-case';
 import { caseFromDemo } from '../state/services';
+import { DEMO_CASES, kindOf } from '../../kinds/registry';
 
 export function blankCase(kind: MemberKind, system: UnitSystem): Case {
   return {
     ...newCase({ kind, unitSystem: system }),
-    inputs: { ...FORMS[kind].defaults(system) },
-    excitation: { ...excitationDefaults(kind, system) },
+    inputs: { ...kindOf(kind).form.defaults(system) },
+    excitation: { ...excitationDefaults(kindOf(kind).resonance, system) },
   };
 }
 

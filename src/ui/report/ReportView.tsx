@@ -1,6 +1,4 @@
 import type { Case } from '../../case';
-import { FORMS } from '../../forms';
-import { excitationFields } from '../../forms/excitation';
 import { contentKey, type Results } from '../state/app-model';
 import { CautionsPanel } from '../results/NotesPanels';
 import { InputsTable } from './InputsTable';
@@ -9,6 +7,7 @@ import { ReportHeader } from './ReportHeader';
 import { ReportResults } from './ReportResults';
 import '../results/results.css';
 import './report.css';
+import { kindOf } from '../../kinds/registry';
 
 export interface ReportViewProps {
   doc: Case;
@@ -23,8 +22,8 @@ export interface ReportViewProps {
  * comes from the case as entered and its results; the cautions are printed in full.
  */
 export function ReportView({ doc, results, link, appVersion }: ReportViewProps) {
-  const memberRows = inputRows(FORMS[doc.kind].fields, doc.inputs, doc.unitSystem);
-  const excitationRows = inputRows(excitationFields(doc.kind), doc.excitation, doc.unitSystem);
+  const memberRows = inputRows(kindOf(doc.kind).form.fields, doc.inputs, doc.unitSystem);
+  const excitationRows = inputRows(kindOf(doc.kind).resonance.fields, doc.excitation, doc.unitSystem);
   const current = results !== null && results.forKey === contentKey(doc);
   return (
     <div class="report">

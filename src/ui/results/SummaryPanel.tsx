@@ -1,4 +1,4 @@
-import type { MemberKind } from '../../physics/members';
+import type { MemberKind } from '../../case';
 import type { UnitSystem } from '../../units';
 import type { CaseAnswer } from '../../worker/solve-case';
 import { summarise } from './summary';

@@ -9,7 +9,7 @@
  */
 import type { Case, KeyResult } from '../../case';
 import { sameCaseContent } from '../../case';
-import type { MemberBuild } from '../../physics/members';
+import type { MemberBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
 import { readCase } from '../../forms/read-case';
 import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';

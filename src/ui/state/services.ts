@@ -5,11 +5,11 @@
 import { SolverClient, type WorkerLike } from '../../worker/solver-client';
 import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
 import { openStore, newCase, type CaseStore } from '../../store';
-import { DEMO_CASES, FORMS } from '../../forms';
 import { excitationDefaults } from '../../forms/excitation';
 import { sameCaseContent, type Case } from '../../case';
 import type { DemoCase } from '../../forms';
 import { AppModel } from './app-model';
+import { DEMO_CASES, kindOf } from '../../kinds/registry';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
@@ -23,8 +23,8 @@ export function caseFromDemo(demo: DemoCase): Case {
   const c = newCase({ kind: demo.kind, unitSystem: demo.system, name: demo.name, tag: demo.tag, note: demo.note });
   return {
     ...c,
-    inputs: { ...FORMS[demo.kind].defaults(demo.system), ...demo.values },
-    excitation: { ...excitationDefaults(demo.kind, demo.system), ...(demo.excitation ?? {}) },
+    inputs: { ...kindOf(demo.kind).form.defaults(demo.system), ...demo.values },
+    excitation: { ...excitationDefaults(kindOf(demo.kind).resonance, demo.system), ...(demo.excitation ?? {}) },
   };
 }
 

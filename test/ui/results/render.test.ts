@@ -6,7 +6,7 @@ vi.mock('preact/hooks', () => ({
   useState: <T,>(init: T | (() => T)) => [typeof init === 'function' ? (init as () => T)() : init, () => {}],
 }));
 
-import { DEMO_CASES } from '../../../src/forms';
+
 import { readCase } from '../../../src/forms/read-case';
 import { createCase } from '../../../src/case';
 import type { Case } from '../../../src/case';
@@ -16,6 +16,7 @@ import { ResultsView } from '../../../src/ui/results/ResultsView';
 import { ReportView } from '../../../src/ui/report/ReportView';
 import { solveCase } from '../../../src/worker/solve-case';
 import { renderToText, textOf } from './render-text';
+import { DEMO_CASES } from '../../../src/kinds/registry';
 
 function demo(kind: Case['kind']): { doc: Case; results: Results } {
   const d = DEMO_CASES.find((c) => c.kind === kind)!;

@@ -2,7 +2,7 @@
  * Shared layout helpers: cutting the member into segments where a property changes, clipping bands and
  * ordering landmarks.
  */
-import type { MemberSegment } from '../beam/model';
+import type { MemberSegment } from '../../physics/beam/model';
 import type { Band, BandId, Landmark } from './types';
 
 /** Relative distance (of the member length) under which two cut points are the same. */

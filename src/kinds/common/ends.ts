@@ -2,7 +2,7 @@
  * End conditions in trade words and the supports they become, plus the rigid-body check shared by the kinds
  * whose supports the user picks (riser, baffle).
  */
-import type { MemberSupport } from '../beam/model';
+import type { MemberSupport } from '../../physics/beam/model';
 
 /**
  * clamped: position and rotation held; pinned: position held, free to rotate; sliding: rotation held, free to

@@ -8,13 +8,13 @@
  * inner diameter D_c whose centre is offset by e from the riser's, at angle θ from the direction of motion,
  * is the circular enclosure centred at −e·(cos θ, sin θ) (so the riser sits e from the caisson centre towards θ).
  */
-import type { MemberModel, MemberSegment, MemberSupport } from '../beam/model';
-import type { BoundarySpec } from '../section/types';
-import { bool, fail, failText, finite, material, nonNegative, num, oneOf, optional, positive, record, tubeWall } from './check';
-import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from './ends';
-import { band, sortLandmarks } from './layout';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from './theory';
-import type { Landmark, MemberBuild } from './types';
+import type { MemberModel, MemberSegment, MemberSupport } from '../../physics/beam/model';
+import type { BoundarySpec } from '../../physics/section/types';
+import { bool, fail, failText, finite, material, nonNegative, num, oneOf, optional, positive, record, tubeWall } from '../common/check';
+import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
+import { band, sortLandmarks } from '../common/layout';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import type { Landmark, MemberBuild } from '../common/types';
 
 export interface RiserCaisson {
   innerDiameterM: number;

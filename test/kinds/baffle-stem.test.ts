@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { sectionAt, solveMember } from '../../../src/physics/beam';
-import { buildBaffleModel, buildStemModel } from '../../../src/physics/members';
+import { sectionAt, solveMember } from '../../src/physics/beam';
+import { buildBaffleModel } from '../../src/kinds/baffle/build';
+import { buildStemModel } from '../../src/kinds/stem/build';
 import { BAFFLE, STEM } from './fixtures';
-import { expectClose } from '../../helpers/expect-close';
+import { expectClose } from '../helpers/expect-close';
 import { expectWellFormed, landmark, massAt } from './helpers';
 
 describe('baffle model (hand calculation)', () => {

@@ -10,11 +10,11 @@
  * End conditions in trade words: welded = clamped, bolted = pinned (a bolted cleat lets the plate rotate),
  * free = no support (common practice, no source).
  */
-import type { MemberModel, MemberSegment, MemberSupport } from '../beam/model';
-import { bool, fail, failText, material, nonNegative, oneOf, optional, positive, record } from './check';
-import { band, sortLandmarks } from './layout';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from './theory';
-import type { Landmark, MemberBuild } from './types';
+import type { MemberModel, MemberSegment, MemberSupport } from '../../physics/beam/model';
+import { bool, fail, failText, material, nonNegative, oneOf, optional, positive, record } from '../common/check';
+import { band, sortLandmarks } from '../common/layout';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import type { Landmark, MemberBuild } from '../common/types';
 
 export type PlateEnd = 'welded' | 'bolted' | 'free';
 export const PLATE_ENDS: readonly PlateEnd[] = ['welded', 'bolted', 'free'];

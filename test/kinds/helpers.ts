@@ -1,8 +1,8 @@
 /** Helpers for the member-builder tests: reading a built model at a point, as the beam engine will. */
 import { expect } from 'vitest';
-import { parseMemberModel, sectionAt } from '../../../src/physics/beam';
-import type { MemberModel, MemberSegment } from '../../../src/physics/beam';
-import type { MemberBuild } from '../../../src/physics/members';
+import { parseMemberModel, sectionAt } from '../../src/physics/beam';
+import type { MemberModel, MemberSegment } from '../../src/physics/beam';
+import type { MemberBuild } from '../../src/kinds/common/types';
 
 export function segmentAt(model: MemberModel, zM: number): MemberSegment {
   const seg = model.segments.find((s) => zM >= s.fromM && zM <= s.toM);

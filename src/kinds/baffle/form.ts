@@ -1,9 +1,9 @@
 /** The tank baffle form: fields, cross-field checks and the mapping to BaffleInput. */
-import { type BaffleInput, buildBaffleModel, MAX_PERFORATION_RATIO, type PlateEnd, validateBaffleInput } from '../physics/members';
-import { commonInput } from './common-input';
-import { defineForm } from './define';
-import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from './presets';
-import type { Choice, FieldDef } from './types';
+import { type BaffleInput, buildBaffleModel, MAX_PERFORATION_RATIO, type PlateEnd, validateBaffleInput } from './build';
+import { commonInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
+import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import type { Choice, FieldDef } from '../../forms/types';
 
 /** Welded = clamped, bolted = pinned (common practice, no source). */
 const PLATE_END_CHOICES: readonly Choice[] = [

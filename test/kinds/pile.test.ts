@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { solveMember } from '../../../src/physics/beam';
-import { buildPileModel, LINEAR_SOIL_STEPS } from '../../../src/physics/members';
+import { solveMember } from '../../src/physics/beam';
+import { buildPileModel, LINEAR_SOIL_STEPS } from '../../src/kinds/pile/build';
 import { PILE } from './fixtures';
-import { expectClose } from '../../helpers/expect-close';
+import { expectClose } from '../helpers/expect-close';
 import { expectWellFormed, landmark, massAt } from './helpers';
 
 // Tolerance for hand arithmetic: values below are quoted to 6 figures, so rtol 1e-5.

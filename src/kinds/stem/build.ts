@@ -10,11 +10,11 @@
  * its section and is not confinement in this sense.
  * Root: rigid = clamped; otherwise held in position with a rotational spring (flexible nozzle or flange).
  */
-import type { MemberModel, MemberSection, MemberSegment, MemberSupport } from '../beam/model';
-import { bool, fail, material, nonNegative, num, optional, positive, record } from './check';
-import { band, sortLandmarks } from './layout';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from './theory';
-import type { Landmark, MemberBuild } from './types';
+import type { MemberModel, MemberSection, MemberSegment, MemberSupport } from '../../physics/beam/model';
+import { bool, fail, material, nonNegative, num, optional, positive, record } from '../common/check';
+import { band, sortLandmarks } from '../common/layout';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import type { Landmark, MemberBuild } from '../common/types';
 
 export type StemRoot = { kind: 'rigid' } | { kind: 'rotational-spring'; stiffnessNmPerRad: number };
 

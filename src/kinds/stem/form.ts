@@ -1,9 +1,9 @@
 /** The sensor stem form: fields, cross-field checks and the mapping to StemInput. */
-import { buildStemModel, type StemInput, validateStemInput } from '../physics/members';
-import { commonInput } from './common-input';
-import { defineForm } from './define';
-import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from './presets';
-import type { FieldDef } from './types';
+import { buildStemModel, type StemInput, validateStemInput } from './build';
+import { commonInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
+import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import type { FieldDef } from '../../forms/types';
 
 const FIELDS: readonly FieldDef[] = [
   sizeField('insertionLength', 'Insertion length', '250', { help: 'From the support face (pipe or vessel wall, or nozzle weld) to the tip.' }),

@@ -9,11 +9,11 @@
  *   lengthM           pile top = z_swl + topAboveStillWaterM (measured from the reference level, not the tide).
  * The liquid runs from the mudline to the water surface (clipped to the top if the pile is overtopped).
  */
-import type { MemberModel, MemberSegment, SoilSprings } from '../beam/model';
-import { bool, fail, finite, material, nonNegative, num, optional, positive, record, tubeWall } from './check';
-import { band, cutSegments, sortLandmarks } from './layout';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from './theory';
-import type { Landmark, MemberBuild } from './types';
+import type { MemberModel, MemberSegment, SoilSprings } from '../../physics/beam/model';
+import { bool, fail, finite, material, nonNegative, num, optional, positive, record, tubeWall } from '../common/check';
+import { band, cutSegments, sortLandmarks } from '../common/layout';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import type { Landmark, MemberBuild } from '../common/types';
 
 /** Marine growth over a band of elevations; adds mass and outer diameter (so added mass), no stiffness. */
 export interface MarineGrowth {

@@ -1,7 +1,8 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
-import { buildRiserModel, type EndCondition, endSupports, leavesRigidBodyMotion, type RiserInput, validateRiserInput } from '../physics/members';
-import { commonInput, tubeInput } from './common-input';
-import { defineForm } from './define';
+import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
+import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
+import { commonInput, tubeInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
 import {
   BEAM_THEORY_FIELD,
   CONTENTS_CHOICES,
@@ -15,8 +16,8 @@ import {
   SEAWATER_HELP,
   sizeField,
   yesNoField,
-} from './presets';
-import type { Choice, FieldDef } from './types';
+} from '../../forms/presets';
+import type { Choice, FieldDef } from '../../forms/types';
 
 const END_CHOICES: readonly Choice[] = [
   { value: 'clamped', label: 'Clamped', help: 'Held in position and rotation.' },

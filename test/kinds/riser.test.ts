@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { solveMember } from '../../../src/physics/beam';
-import { buildRiserModel } from '../../../src/physics/members';
+import { solveMember } from '../../src/physics/beam';
+import { buildRiserModel } from '../../src/kinds/riser/build';
 import { RISER } from './fixtures';
-import { expectClose } from '../../helpers/expect-close';
+import { expectClose } from '../helpers/expect-close';
 import { expectWellFormed, landmark, massAt } from './helpers';
 
 describe('riser model (hand calculation)', () => {

@@ -1,5 +1,10 @@
 /** Invented members shared by the member-builder tests; material values are the common inputs of check-values §6. */
-import type { BaffleInput, PileInput, RiserInput, StemInput } from '../../../src/physics/members';
+import type { MemberInputs } from '../../src/kinds/registry';
+
+type PileInput = MemberInputs['pile'];
+type RiserInput = MemberInputs['riser'];
+type BaffleInput = MemberInputs['baffle'];
+type StemInput = MemberInputs['stem'];
 
 // Invented pile; material values are the common inputs of check-values §6 (E = 210 GPa, ρ = 7850 kg/m³),
 // marine growth 1325 kg/m³ (NORSOK N-003, from memory), seawater 1025 kg/m³.

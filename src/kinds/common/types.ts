@@ -3,9 +3,11 @@
  * results screen need to draw and explain it. All lengths in metres; every z is measured along the member
  * axis from z = 0 (stated per kind in `origin`), positive towards the member's top or tip.
  */
-import type { MemberModel } from '../beam/model';
+import type { MemberModel } from '../../physics/beam/model';
+import type { KindId } from '../registry-pure';
 
-export type MemberKind = 'pile' | 'riser' | 'baffle' | 'stem';
+/** The member kind of a build (the ids are listed once, in ../registry-pure.ts). */
+export type MemberKind = KindId;
 
 /** Machine-readable name of a level along the member, so the schematic can pick a symbol for it. */
 export type LandmarkId =

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { buildBaffleModel, buildMember, buildPileModel, buildRiserModel, buildStemModel, type MemberKind, type PileInput } from '../../../src/physics/members';
+import { buildBaffleModel } from '../../src/kinds/baffle/build';
+import type { MemberKind } from '../../src/kinds/common/types';
+import { buildPileModel, type PileInput } from '../../src/kinds/pile/build';
+import { buildMember } from '../../src/kinds/registry';
+import { buildRiserModel } from '../../src/kinds/riser/build';
+import { buildStemModel } from '../../src/kinds/stem/build';
 import { BAFFLE, PILE, RISER, STEM } from './fixtures';
 
 /** Lets a test pass deliberately wrong values through the typed builders. */

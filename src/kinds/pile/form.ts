@@ -1,10 +1,10 @@
 /** The pile form: fields, defaults with their sources, cross-field checks and the mapping to PileInput. */
-import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type PileInput, validatePileInput } from '../physics/members';
-import { commonInput, tubeInput } from './common-input';
-import { defineForm } from './define';
-import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from './presets';
-import type { Reader } from './read';
-import type { FieldDef } from './types';
+import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type PileInput, validatePileInput } from './build';
+import { commonInput, tubeInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
+import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
+import type { Reader } from '../../forms/read';
+import type { FieldDef } from '../../forms/types';
 
 const SPRINGS = ['soil-springs', 'soil-springs-linear'] as const;
 
