@@ -11,6 +11,7 @@
  * free = no support (common practice, no source).
  */
 import type { MemberModel, MemberSegment, MemberSupport } from '../../physics/beam/model';
+import { plateStripSection } from '../../physics/shapes/plate-strip';
 import { bool, fail, failText, material, nonNegative, oneOf, optional, positive, record } from '../common/check';
 import { band, sortLandmarks } from '../common/layout';
 import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
@@ -95,7 +96,7 @@ export function buildBaffleModel(raw: BaffleInput): MemberBuild {
   const segment: MemberSegment = {
     fromM: 0,
     toM: L,
-    section: { shape: 'plate-strip', widthM: b.widthM, thicknessM: b.thicknessM },
+    section: plateStripSection(b.widthM, b.thicknessM),
     youngsModulusPa: b.youngsModulusPa,
     densityKgPerM3: b.materialDensityKgPerM3,
     poissonRatio: b.poissonRatio,

@@ -10,6 +10,7 @@
  * The liquid runs from the mudline to the water surface (clipped to the top if the pile is overtopped).
  */
 import type { MemberModel, MemberSegment, SoilSprings } from '../../physics/beam/model';
+import { tubeSection } from '../../physics/shapes/tube';
 import { bool, fail, finite, material, nonNegative, num, optional, positive, record, tubeWall } from '../common/check';
 import { band, cutSegments, sortLandmarks } from '../common/layout';
 import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
@@ -176,7 +177,7 @@ export function buildPileModel(raw: PileInput): MemberBuild {
     const seg: MemberSegment = {
       fromM,
       toM,
-      section: { shape: 'tube', outerDiameterM: p.outerDiameterM, wallThicknessM: p.wallThicknessM },
+      section: tubeSection(p.outerDiameterM, p.wallThicknessM),
       youngsModulusPa: p.youngsModulusPa,
       densityKgPerM3: p.materialDensityKgPerM3,
     };

@@ -10,6 +10,7 @@
  */
 import type { MemberModel, MemberSegment, MemberSupport } from '../../physics/beam/model';
 import type { BoundarySpec } from '../../physics/section/types';
+import { tubeSection } from '../../physics/shapes/tube';
 import { bool, fail, failText, finite, material, nonNegative, num, oneOf, optional, positive, record, tubeWall } from '../common/check';
 import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { band, sortLandmarks } from '../common/layout';
@@ -128,7 +129,7 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
   const segment: MemberSegment = {
     fromM: 0,
     toM: L,
-    section: { shape: 'tube', outerDiameterM: r.outerDiameterM, wallThicknessM: r.wallThicknessM },
+    section: tubeSection(r.outerDiameterM, r.wallThicknessM),
     youngsModulusPa: r.youngsModulusPa,
     densityKgPerM3: r.materialDensityKgPerM3,
   };

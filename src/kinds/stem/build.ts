@@ -11,6 +11,8 @@
  * Root: rigid = clamped; otherwise held in position with a rotational spring (flexible nozzle or flange).
  */
 import type { MemberModel, MemberSection, MemberSegment, MemberSupport } from '../../physics/beam/model';
+import { rodSection } from '../../physics/shapes/rod';
+import { tubeSection } from '../../physics/shapes/tube';
 import { bool, fail, material, nonNegative, num, optional, positive, record } from '../common/check';
 import { band, sortLandmarks } from '../common/layout';
 import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
@@ -69,7 +71,7 @@ export function validateStemInput(raw: StemInput): StemInput {
 }
 
 function stemSection(diameterM: number, boreM: number): MemberSection {
-  return boreM > 0 ? { shape: 'tube', outerDiameterM: diameterM, wallThicknessM: (diameterM - boreM) / 2 } : { shape: 'rod', diameterM };
+  return boreM > 0 ? tubeSection(diameterM, (diameterM - boreM) / 2) : rodSection(diameterM);
 }
 
 export function buildStemModel(raw: StemInput): MemberBuild {

@@ -3,8 +3,10 @@
  * growth) and the surroundings that confine the liquid around it, moving in sway (x) as the member bends.
  */
 import type { MemberModel } from '../../physics/beam/model';
-import { sectionAt } from '../../physics/beam/section-props';
-import type { BoundarySpec } from '../../physics/section/types';
+import { sectionBody } from '../../physics/beam/section-bridge';
+import { interpolateSection } from '../../physics/beam/section-props';
+import type { BodySpec, BoundarySpec } from '../../physics/section/types';
+import type { BodyForm } from './form';
 import { newBody, openWater, type SectionForm, type SurroundForm } from './form';
 
 /** Metres to the editor's millimetre text, to 5 significant figures. */
@@ -35,10 +37,27 @@ function surroundOf(boundaries: readonly BoundarySpec[]): { surround: SurroundFo
   return { surround: s, leftOut };
 }
 
+/** A section-solver body as the editor's body form (millimetre text; angles in degrees). */
+function bodyForm(b: BodySpec): BodyForm {
+  const place = { x: mm(b.centerM?.[0] ?? 0), y: mm(b.centerM?.[1] ?? 0) };
+  const angle = 'angleDeg' in b && b.angleDeg !== undefined ? { angle: String(b.angleDeg) } : {};
+  switch (b.shape) {
+    case 'circle':
+      return newBody(b.shape, { diameter: mm(b.diameterM), ...(b.centerM ? place : {}) });
+    case 'plate':
+      return newBody(b.shape, { width: mm(b.widthM), thickness: mm(b.thicknessM), ...angle, ...(b.centerM ? place : {}) });
+    case 'rectangle':
+      return newBody(b.shape, { width: mm(b.widthM), height: mm(b.heightM), ...(b.cornerRadiusM ? { cornerRadius: mm(b.cornerRadiusM) } : {}), ...angle, ...(b.centerM ? place : {}) });
+    case 'ellipse':
+      return newBody(b.shape, { width: mm(b.widthM), height: mm(b.heightM), ...angle, ...(b.centerM ? place : {}) });
+    case 'polygon':
+      return newBody(b.shape, { points: b.pointsM.map(([x, y]) => `${mm(x)} ${mm(y)}`).join(', '), ...angle, ...(b.centerM ? place : {}) });
+  }
+}
+
 /**
- * The member's submerged section at mid-depth of its liquid range, or null when nothing is submerged.
- * A tube or rod is a circle of its outer diameter; a plate strip is a plate with its width across the
- * motion (along y) and its thickness along the motion (x).
+ * The member's submerged section at mid-depth of its liquid range, or null when nothing is submerged:
+ * the body its shape gives the section solver (src/physics/shapes), coating included.
  */
 export function sectionFormFromMember(model: MemberModel): { form: SectionForm; about: string } | null {
   const liquid = model.liquid;
@@ -49,11 +68,7 @@ export function sectionFormFromMember(model: MemberModel): { form: SectionForm; 
   const z = 0.5 * (from + to);
   const seg = model.segments.find((s) => z >= s.fromM && z <= s.toM);
   if (!seg) return null;
-  const p = sectionAt(seg, (z - seg.fromM) / (seg.toM - seg.fromM));
-  const body =
-    seg.section.shape === 'plate-strip'
-      ? newBody('plate', { width: mm(p.outerWidthM), thickness: mm(p.depthM), angle: '90' })
-      : newBody('circle', { diameter: mm(p.outerWidthM) });
+  const body = bodyForm(sectionBody(interpolateSection(seg, (z - seg.fromM) / (seg.toM - seg.fromM)), seg.coating?.thicknessM ?? 0));
   const { surround, leftOut } = surroundOf(liquid.boundaries ?? []);
   const about =
     `This member's section at z = ${Number(z.toPrecision(4))} m, in its surroundings, moving sideways (sway x) as it bends.` +
