@@ -2,13 +2,14 @@
  * The section-shape registry: one line per shape. `MemberSection` (the beam model's section) is the union
  * of the shapes' section objects; everything that depends on the shape asks `shapeOf(section)`.
  */
+import { H_SECTION, type HSection } from './h-section';
 import { PLATE_STRIP, type PlateStripSection } from './plate-strip';
 import { ROD, type RodSection } from './rod';
 import { TUBE, type TubeSection } from './tube';
 import type { ShapeDescription } from './types';
 
 /** The cross-section of a beam member segment. */
-export type MemberSection = TubeSection | RodSection | PlateStripSection;
+export type MemberSection = TubeSection | RodSection | PlateStripSection | HSection;
 export type ShapeId = MemberSection['shape'];
 
 /** Every shape's description, by id. */
@@ -16,6 +17,7 @@ export const SHAPES: { readonly [K in ShapeId]: ShapeDescription<Extract<MemberS
   tube: TUBE,
   rod: ROD,
   [PLATE_STRIP.id]: PLATE_STRIP,
+  [H_SECTION.id]: H_SECTION,
 };
 
 /** The shape ids, in registry order (for messages: 'one of "tube", "rod", …'). */
