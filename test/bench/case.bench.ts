@@ -6,8 +6,8 @@
  */
 
 import { excitationDefaults } from '../../src/forms/excitation';
-import { readCase } from '../../src/forms/read-case';
-import { solveCase } from '../../src/worker/solve-case';
+import { readCase } from '../../src/app/read-case';
+import { solveCase } from '../../src/app/solve-case';
 import { report, time } from './timing';
 import { DEMO_CASES, FORMS, kindOf } from '../../src/kinds/registry';
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { AppModel, type Solver } from '../../src/ui/state/app-model';
-import { caseFromDemo } from '../../src/ui/state/services';
+import { caseFromDemo } from '../../src/app/create-case';
 
 import { inlineSolver } from './cases/solve';
 import { DEMO_CASES } from '../../src/kinds/registry';

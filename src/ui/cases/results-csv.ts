@@ -8,7 +8,7 @@ import { VERDICT_WORDS } from '../../physics/excitation/verdict';
 import type { FieldDef } from '../../forms';
 import type { CsvCell } from '../../share/csv';
 import { caseFileName } from '../../share/file';
-import type { CaseAnswer } from '../../worker/solve-case';
+import type { CaseAnswer } from '../../app/solve-case';
 import { displayName, kindTitle } from './format';
 import { kindOf } from '../../kinds/registry';
 

@@ -9,7 +9,7 @@ import { kindOf } from '../../kinds/registry';
 import type { CheckResult, ScreeningResult } from '../../physics/excitation/results';
 import { VERDICT_WORDS, type Verdict } from '../../physics/excitation/verdict';
 import type { UnitSystem } from '../../units';
-import type { CaseAnswer } from '../../worker/solve-case';
+import type { CaseAnswer } from '../../app/solve-case';
 import { formatHz, formatSig } from '../format/numbers';
 import { displayUnits, marginText, pct, qty, zText } from './display-units';
 

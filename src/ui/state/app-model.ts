@@ -11,8 +11,8 @@ import type { Case, KeyResult } from '../../case';
 import { sameCaseContent } from '../../case';
 import type { MemberBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
-import { readCase } from '../../forms/read-case';
-import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
+import { readCase } from '../../app/read-case';
+import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
 
 export type CaseMode = 'editing' | 'received';

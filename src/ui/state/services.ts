@@ -3,13 +3,12 @@
  * store (opened asynchronously). Also the first-start choice of what to open.
  */
 import { SolverClient, type WorkerLike } from '../../worker/solver-client';
-import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
-import { openStore, newCase, type CaseStore } from '../../store';
-import { excitationDefaults } from '../../forms/excitation';
+import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
+import { openStore, type CaseStore } from '../../store';
+import { caseFromDemo } from '../../app/create-case';
 import { sameCaseContent, type Case } from '../../case';
-import type { DemoCase } from '../../forms';
 import { AppModel } from './app-model';
-import { DEMO_CASES, kindOf } from '../../kinds/registry';
+import { DEMO_CASES } from '../../kinds/registry';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
@@ -18,15 +17,6 @@ export function createModel(): AppModel {
   return new AppModel(client);
 }
 
-/** A fresh, unsaved case from a demo, with its own id. */
-export function caseFromDemo(demo: DemoCase): Case {
-  const c = newCase({ kind: demo.kind, unitSystem: demo.system, name: demo.name, tag: demo.tag, note: demo.note });
-  return {
-    ...c,
-    inputs: { ...kindOf(demo.kind).form.defaults(demo.system), ...demo.values },
-    excitation: { ...excitationDefaults(kindOf(demo.kind).resonance, demo.system), ...(demo.excitation ?? {}) },
-  };
-}
 
 export type StoreOpening = { store: CaseStore; message: null; retryable: false } | { store: null; message: string; retryable: boolean };
 

@@ -2,10 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { MEMBER_KINDS, parseCase } from '../../../src/case';
 
 import { excitationDefaults } from '../../../src/forms/excitation';
-import { readCase } from '../../../src/forms/read-case';
-import { blankCase, isUntouchedStart } from '../../../src/ui/cases/new-case';
+import { readCase } from '../../../src/app/read-case';
+import { isUntouchedStart } from '../../../src/ui/cases/new-case';
 
-import { caseFromDemo } from '../../../src/ui/state/services';
+import { blankCase, caseFromDemo } from '../../../src/app/create-case';
 import { DEMO_CASES, FORMS, kindOf } from '../../../src/kinds/registry';
 
 describe('a new case from the big buttons', () => {

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 
 import { AppModel } from '../../../src/ui/state/app-model';
-import { caseFromDemo } from '../../../src/ui/state/services';
+import { caseFromDemo } from '../../../src/app/create-case';
 import { afterDeleted, afterRenamed, afterRestored, docForSaving, saveOpenCase } from '../../../src/ui/cases/open-case';
 import { askPersistenceOnce, persistenceAnswer, resetPersistenceForTests } from '../../../src/ui/cases/persistence';
 import { harness, unwrap } from '../../store/helpers';

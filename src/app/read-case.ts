@@ -6,8 +6,8 @@ import type { Case } from '../case';
 import type { CaseExcitation } from '../physics/excitation/from-member';
 import type { MemberBuild } from '../kinds/common/types';
 import { kindOf } from '../kinds/registry';
-import { readExcitation } from './excitation';
-import type { FieldErrors } from './types';
+import { readExcitation } from '../forms/excitation';
+import type { FieldErrors } from '../forms/types';
 
 export type CaseReading =
   | { ok: true; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors }

@@ -1,6 +1,6 @@
 /**
- * What the solver worker does, as plain functions (tested in Node without a worker):
- * a whole case (member modes dry and wet, then the resonance screening), or one section.
+ * Solving a case, for the worker (src/worker keeps only the message adapter), the UI's tests and the command
+ * line: the member's modes dry and wet by the engine its kind names, then the resonance screening.
  * Input errors come back as messages, never as exceptions across the worker boundary.
  */
 import { solveMember } from '../physics/beam';
@@ -9,9 +9,15 @@ import type { MemberFailureReason, MemberResult } from '../physics/beam/result';
 import { screenResonance } from '../physics/excitation';
 import { screeningInputFor, type CaseExcitation } from '../physics/excitation/from-member';
 import type { ScreeningResult } from '../physics/excitation/results';
+import type { KindEngine } from '../kinds/kind-module';
 
 export interface CaseRequest {
   op: 'case';
+  /**
+   * The engine that solves the model (`KindModule.engine`, src/kinds/kind-module.ts); absent = 'beam'. A kind
+   * that is not a beam adds its engine and model type here as another branch of this request.
+   */
+  engine?: KindEngine;
   model: MemberModel;
   /** Null: no screening inputs yet (frequencies only). */
   excitation: CaseExcitation | null;
@@ -33,6 +39,14 @@ function message(e: unknown): string {
 }
 
 export function solveCase(req: CaseRequest, now: () => number = () => performance.now()): CaseAnswer {
+  const engine: KindEngine = req.engine ?? 'beam';
+  switch (engine) {
+    case 'beam':
+      return solveBeamCase(req, now);
+  }
+}
+
+function solveBeamCase(req: CaseRequest, now: () => number): CaseAnswer {
   const t0 = now();
   let outcome;
   try {
