@@ -4,8 +4,8 @@
  * name and tag, the member model used, frequencies, the verdict with every check, and the cautions.
  */
 import { caseFromFileText } from '../share';
-import { readCase } from '../forms/read-case';
-import { solveCase } from '../worker/solve-case';
+import { readCase } from '../app/read-case';
+import { solveCase } from '../app/solve-case';
 import { cautionLines } from '../text/cautions';
 import { toJson } from './json-out';
 

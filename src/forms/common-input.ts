@@ -1,5 +1,5 @@
 /** Readings shared by several forms: material, model options and the tube-wall check. */
-import type { BeamTheoryChoice } from '../physics/members';
+import type { BeamTheoryChoice } from '../kinds/common/theory';
 import type { Reader } from './read';
 
 /** Material and model options common to every kind's SI input. */

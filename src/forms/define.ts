@@ -2,13 +2,14 @@
  * Turns a kind's field list and its mapping into a MemberForm: defaults per system, reading with per-field
  * and cross-field messages, building, and converting values between unit systems.
  */
-import type { MemberBuild, MemberInputs, MemberKind } from '../physics/members';
+import type { MemberBuild } from '../kinds/common/types';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
-import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm } from './types';
+import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
 
-export interface FormSpec<K extends MemberKind> {
-  kind: K;
+/** The parts of a kind's form; `I` is the kind's SI input. */
+export interface FormSpec<I> {
+  kind: MemberKind;
   title: string;
   summary: string;
   fields: readonly FieldDef[];
@@ -16,10 +17,10 @@ export interface FormSpec<K extends MemberKind> {
    * Checks fields against each other (report with `err(fieldKey, message)`, in the user's units through
    * `r.fmt`) and assembles the SI input. Return null when something was reported.
    */
-  toInput(r: Reader, err: (key: string, message: string) => void): MemberInputs[K] | null;
+  toInput(r: Reader, err: (key: string, message: string) => void): I | null;
   /** The physics-side validator, run last as a safety net (its messages use SI field names). */
-  validate(input: MemberInputs[K]): unknown;
-  buildModel(input: MemberInputs[K]): MemberBuild;
+  validate(input: I): unknown;
+  buildModel(input: I): MemberBuild;
 }
 
 /**
@@ -47,14 +48,14 @@ export function convertFieldValues(fields: readonly FieldDef[], values: FieldVal
   return out;
 }
 
-export function defineForm<K extends MemberKind>(spec: FormSpec<K>): MemberForm<K> {
+export function defineForm<I>(spec: FormSpec<I>): MemberForm<I> {
   const { fields } = spec;
   const keys = new Set<string>();
   for (const f of fields) {
     if (keys.has(f.key)) throw new RangeError(`${spec.kind} form: field keys must be unique, got "${f.key}" twice`);
     keys.add(f.key);
   }
-  const form: MemberForm<K> = {
+  const form: MemberForm<I> = {
     kind: spec.kind,
     title: spec.title,
     summary: spec.summary,

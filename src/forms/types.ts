@@ -1,14 +1,17 @@
 /**
  * Guided forms: the fields of each member kind as the surveyor sees them, and the reading of what was typed
- * into the SI input of the member builders (src/physics/members). Shared by the app and the command line.
+ * into the SI input of the member builders (src/kinds/<kind>/build.ts). Shared by the app and the command line.
  *
  * Values are kept as typed, one string per field key (`{ outerDiameter: '610', wallThickness: '0.5 in' }`).
  * A bare number takes the field's unit for the chosen unit system; a number with a unit is read as typed.
  */
-import type { MemberBuild, MemberInputs, MemberKind } from '../physics/members';
+import type { MemberBuild } from '../kinds/common/types';
+import type { KindId } from '../kinds/registry-pure';
 import type { Dimension, UnitSystem } from '../units';
 
-export type { MemberKind, UnitSystem };
+/** The member kind (the ids are listed once, in src/kinds/registry-pure.ts). */
+export type MemberKind = KindId;
+export type { UnitSystem };
 
 /** Text as typed, by field key. */
 export type FieldValues = Record<string, string>;
@@ -80,8 +83,9 @@ export type FieldDef = QuantityField | QuantityListField | ChoiceField;
 export type ToInputResult<I> = { ok: true; input: I } | { ok: false; errors: FieldErrors };
 export type BuildResult<I> = { ok: true; input: I; build: MemberBuild } | { ok: false; errors: FieldErrors };
 
-export interface MemberForm<K extends MemberKind = MemberKind> {
-  kind: K;
+/** The form of one member kind; `I` is the kind's SI input (src/kinds/<kind>/build.ts). */
+export interface MemberForm<I = unknown> {
+  kind: MemberKind;
   /** "Pile", "Riser or conductor", … */
   title: string;
   /** One sentence saying what the member is and how it is held. */
@@ -95,11 +99,11 @@ export interface MemberForm<K extends MemberKind = MemberKind> {
    * are in the user's units: "wall thickness must be less than half the outer diameter (305 mm)". Keys missing
    * from `values` take their defaults; fields hidden by `showWhen` are not read.
    */
-  toInput(values: FieldValues, system: UnitSystem): ToInputResult<MemberInputs[K]>;
-  /** The member model and schematic data (src/physics/members). Throws RangeError only for input that toInput would refuse. */
-  buildModel(input: MemberInputs[K]): MemberBuild;
+  toInput(values: FieldValues, system: UnitSystem): ToInputResult<I>;
+  /** The member model and schematic data (src/kinds/<kind>/build.ts). Throws RangeError only for input that toInput would refuse. */
+  buildModel(input: I): MemberBuild;
   /** toInput then buildModel. */
-  build(values: FieldValues, system: UnitSystem): BuildResult<MemberInputs[K]>;
+  build(values: FieldValues, system: UnitSystem): BuildResult<I>;
   /** Re-expresses values typed for one system in the other's units (see convertFieldValues). */
   convertValues(values: FieldValues, from: UnitSystem, to: UnitSystem): FieldValues;
 }

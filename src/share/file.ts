@@ -2,7 +2,7 @@
  * Case files for export and import: `<name>.wetmode.json`, the full case (key result included) as
  * indented JSON in our own schema, readable by the app, the command line and a person.
  */
-import { NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../physics/case';
+import { NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../case';
 
 export const CASE_FILE_EXTENSION = '.wetmode.json';
 export const CASE_FILE_MIME = 'application/json';

@@ -10,7 +10,7 @@
  *   'j'  body = the UTF-8 JSON wire form itself — the fallback, and used whenever it comes out shorter
  * Any other first character is a format this build does not know (a newer Wetmode may add one).
  */
-import { NEWER_VERSION_MESSAGE, parseCase, type Case } from '../physics/case';
+import { NEWER_VERSION_MESSAGE, parseCase, type Case } from '../case';
 import { fromBase64url, toBase64url } from './base64url';
 import { compressionAvailable, deflateRaw, inflateRaw } from './compression';
 import { crc32 } from './crc32';

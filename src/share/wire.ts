@@ -8,7 +8,7 @@
  * its own physics). The id travels so a received case can be recognised as one already saved.
  * A future case schema gets its own layout, told apart by the first element.
  */
-import { CASE_FORMAT, NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../physics/case';
+import { CASE_FORMAT, NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../case';
 
 export const WIRE_LENGTH_V1 = 12;
 

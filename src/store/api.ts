@@ -3,7 +3,7 @@
  * `StoreResult`: `{ ok: true, value }`, or `{ ok: false, kind, message }` with a message to show as it is.
  * Every case read back goes through `parseCase`; cases handed in are checked by it before they are written.
  */
-import type { Case } from '../physics/case';
+import type { Case } from '../case';
 import type { StoreResult } from './errors';
 import type { PersistenceAnswer, QuotaEstimate, StorageLike } from './persistence';
 

@@ -1,5 +1,5 @@
 /** Saved-case operations: list, get, save, duplicate, rename, delete with undo. */
-import { cutText, parseCase, type Case } from '../physics/case';
+import { cutText, parseCase, type Case } from '../case';
 import type { CaseList, UndoToken, UnreadableRecord } from './api';
 import { caseKey, checkIncoming, failWith, inTx, notFound, readStored, type StoreContext, type Tx } from './context';
 import { CASES, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';

@@ -2,7 +2,7 @@
  * `openStore(factory?, options?)`: the device store of cases, drafts and undo, on IndexedDB through idb.
  * See `api.ts` for what each method does and `db-schema.ts` for the layout and its migration ladder.
  */
-import { CASE_LIMITS } from '../physics/case';
+import { CASE_LIMITS } from '../case';
 import type { CaseStore, StoreOptions } from './api';
 import * as cases from './case-ops';
 import type { StoreContext } from './context';

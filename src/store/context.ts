@@ -1,6 +1,6 @@
 /** What every store operation needs, and the one transaction helper they all go through. */
 import type { IDBPDatabase, IDBPTransaction } from 'idb';
-import { parseCase, type Case } from '../physics/case';
+import { parseCase, type Case } from '../case';
 import { MESSAGES, ok, storeError, StoreFailure, toStoreError, type StoreResult } from './errors';
 
 export interface StoreContext {

@@ -14,7 +14,7 @@
  *   `trash`  keyPath "token" `TrashRecord`: deleted cases kept for undo (purged after TRASH_DAYS)
  */
 import type { IDBPDatabase, IDBPTransaction } from 'idb';
-import { parseCase } from '../physics/case';
+import { parseCase } from '../case';
 
 export const DB_NAME = 'wetmode';
 export const CASES = 'cases';

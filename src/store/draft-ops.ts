@@ -3,7 +3,7 @@ import type { Draft } from './api';
 import { checkIncoming, failWith, inTx, type StoreContext } from './context';
 import { DRAFT, DRAFT_KEY, type DraftRecord } from './db-schema';
 import type { StoreResult } from './errors';
-import { isPlainObject, parseCase, type Case } from '../physics/case';
+import { isPlainObject, parseCase, type Case } from '../case';
 
 export function saveDraft(ctx: StoreContext, draft: Case): Promise<StoreResult<Draft>> {
   const action = 'keep the draft';

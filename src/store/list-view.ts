@@ -1,9 +1,8 @@
 /** Pure helpers for the Cases screen: text search and sorting of a loaded list. */
-import type { Case } from '../physics/case';
+import type { Case } from '../case';
+import { kindOf } from '../kinds/registry';
 
 export type CaseSort = 'updated' | 'name' | 'tag' | 'kind';
-
-const KIND_WORDS: Record<Case['kind'], string> = { pile: 'pile', riser: 'riser conductor', baffle: 'baffle tank', stem: 'sensor stem' };
 
 function fold(s: string): string {
   // Case- and accent-insensitive: "Übergang" is found by "uber".
@@ -18,7 +17,7 @@ export function searchCases(cases: readonly Case[], query: string): Case[] {
   const words = fold(query).split(/\s+/).filter((w) => w.length > 0);
   if (words.length === 0) return cases.slice();
   return cases.filter((c) => {
-    const hay = fold(`${c.name}\n${c.tag}\n${c.note}\n${KIND_WORDS[c.kind]}`);
+    const hay = fold(`${c.name}\n${c.tag}\n${c.note}\n${kindOf(c.kind).searchWords}`);
     return words.every((w) => hay.includes(w));
   });
 }

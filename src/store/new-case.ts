@@ -1,5 +1,5 @@
-/** New cases and ids for the app (the pure part is `createCase` in src/physics/case). */
-import { createCase, type Case, type MemberKind, type UnitSystem } from '../physics/case';
+/** New cases and ids for the app (the pure part is `createCase` in src/case). */
+import { createCase, type Case, type MemberKind, type UnitSystem } from '../case';
 
 /** This build's version, from package.json through Vite's `define`. */
 export const APP_VERSION: string = typeof __APP_VERSION__ === 'string' ? __APP_VERSION__ : '0.0.0';

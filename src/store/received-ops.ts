@@ -2,7 +2,7 @@
  * Received cases (from a link or a file). The rule: never overwrite. Same id and same entered content ->
  * nothing to do; same id but changed -> a copy with a new id and a name that says where it came from.
  */
-import { CASE_LIMITS, cutText, isRenamedCopy, parseCase, sameCaseContent, type Case } from '../physics/case';
+import { CASE_LIMITS, cutText, isRenamedCopy, parseCase, sameCaseContent, type Case } from '../case';
 import type { ReceivedOutcome, SameCaseAnswer } from './api';
 import { checkIncoming, inTx, type StoreContext, type Tx } from './context';
 import { CASES } from './db-schema';

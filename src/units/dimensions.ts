@@ -4,7 +4,8 @@
  * [mass, length, time, current, temperature, luminous intensity, amount of substance, angle, bit].
  */
 
-export type UnitSystem = 'si' | 'us';
+export type { UnitSystem } from './systems';
+import type { UnitSystem } from './systems';
 
 export type Dimension =
   | 'length'

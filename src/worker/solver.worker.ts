@@ -3,7 +3,7 @@
  * The solver worker: a thin adapter so the page never blocks while solving. Each message is
  * `{ id, request }`; each reply is `{ id, value }` (see SolverClient).
  */
-import { solveCase, type CaseRequest } from './solve-case';
+import { solveCase, type CaseRequest } from '../app/solve-case';
 
 declare const self: DedicatedWorkerGlobalScope;
 

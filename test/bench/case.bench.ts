@@ -4,11 +4,12 @@
  * Target: the answer within 100 ms of the last keystroke (issue: guided forms), so both together should be
  * a small part of that on this machine.
  */
-import { DEMO_CASES, FORMS } from '../../src/forms';
+
 import { excitationDefaults } from '../../src/forms/excitation';
-import { readCase } from '../../src/forms/read-case';
-import { solveCase } from '../../src/worker/solve-case';
+import { readCase } from '../../src/app/read-case';
+import { solveCase } from '../../src/app/solve-case';
 import { report, time } from './timing';
+import { DEMO_CASES, FORMS, kindOf } from '../../src/kinds/registry';
 
 export function run(): void {
   for (const demo of DEMO_CASES) {
@@ -16,7 +17,7 @@ export function run(): void {
       kind: demo.kind,
       unitSystem: demo.system,
       inputs: { ...FORMS[demo.kind].defaults(demo.system), ...demo.values },
-      excitation: { ...excitationDefaults(demo.kind, demo.system), ...(demo.excitation ?? {}) },
+      excitation: { ...excitationDefaults(kindOf(demo.kind).resonance, demo.system), ...(demo.excitation ?? {}) },
     };
     const reading = readCase(c);
     if (!reading.ok) throw new Error(`${demo.kind}: ${JSON.stringify(reading.errors)}`);

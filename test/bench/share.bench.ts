@@ -3,7 +3,7 @@
  * a short note) and the time to encode and decode it. Target: short enough for a text message (< 600 characters).
  */
 import { performance } from 'node:perf_hooks';
-import { CASE_LIMITS, type Case } from '../../src/physics/case';
+import { CASE_LIMITS, type Case } from '../../src/case';
 import { caseToFileText, decodeCasePayload, encodeCaseLink, encodeCasePayload } from '../../src/share';
 import { caseToWire } from '../../src/share/wire';
 import { demoCase } from '../case/fixtures';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createCase, parseCase, sameCaseContent } from '../../src/physics/case';
+import { createCase, parseCase, sameCaseContent } from '../../src/case';
 import { demoCase } from './fixtures';
 
 describe('sameCaseContent', () => {

@@ -3,7 +3,7 @@
  * `demoCase()` is the "typical case" the link length is measured on: a pile with 12 inputs, 3 screening inputs,
  * a name, a tag and a short note.
  */
-import type { Case } from '../../src/physics/case';
+import type { Case } from '../../src/case';
 
 export function demoCase(): Case {
   return {
@@ -56,7 +56,7 @@ export function baffleCase(): Case {
   };
 }
 
-/** A version-0 case (pre-release shape, see src/physics/case/migrations.ts) with every field used. */
+/** A version-0 case (pre-release shape, see src/case/migrations.ts) with every field used. */
 export function v0Case(): Record<string, unknown> {
   return {
     format: 'wetmode-case',

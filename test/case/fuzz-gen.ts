@@ -3,7 +3,7 @@
  * hostile values of every kind — wrong types, huge and odd numbers, deep nesting, markup and script text,
  * control characters, broken Unicode, prototype-polluting keys.
  */
-import { parseCase, type Case } from '../../src/physics/case';
+import { parseCase, type Case } from '../../src/case';
 import { seeded } from '../bench/timing';
 
 export type Rng = () => number;

@@ -3,7 +3,7 @@
  * acceptance is a whole case, markup text comes back as the same plain string, and no prototype is polluted.
  */
 import { describe, expect, it } from 'vitest';
-import { parseCase } from '../../src/physics/case';
+import { parseCase } from '../../src/case';
 import { baffleCase, copy, demoCase, v0Case } from './fixtures';
 import { checkResult, FIELDS, hostile, int, MARKUP, pick, seeded, setPath, type Rng } from './fuzz-gen';
 

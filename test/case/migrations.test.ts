@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CASE_SCHEMA_VERSION, CASE_STEPS, parseCase } from '../../src/physics/case';
+import { CASE_SCHEMA_VERSION, CASE_STEPS, parseCase } from '../../src/case';
 import { v0Case } from './fixtures';
 
 describe('case migration ladder', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CASE_LIMITS, NEWER_VERSION_MESSAGE, parseCase, type Case } from '../../src/physics/case';
+import { CASE_LIMITS, NEWER_VERSION_MESSAGE, parseCase, type Case } from '../../src/case';
 import { copy, demoCase } from './fixtures';
 
 /** demoCase with `change` applied (a field set, or deleted when the value is the DELETE marker). */

@@ -2,9 +2,10 @@ import { describe, it, expect } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { runCaseCommand } from '../../src/cli/case-command';
 import { runMemberCommand } from '../../src/cli/member-command';
-import { FORMS } from '../../src/forms';
+
 import { main } from '../../src/cli/main';
 import { expectClose } from '../helpers/expect-close';
+import { FORMS } from '../../src/kinds/registry';
 
 const EXAMPLE = 'examples/case-port-halloran-pile.wetmode.json';
 

@@ -1,7 +1,8 @@
 import { test, expect, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { FORMS, type MemberKind } from '../../src/forms';
+import { type MemberKind } from '../../src/forms';
 import { wetmodeJson, formatHz } from './support/cli';
+import { FORMS } from '../../src/kinds/registry';
 
 const KIND_BUTTON: Record<MemberKind, RegExp> = {
   pile: /^Pile/,

@@ -1,7 +1,8 @@
 import { test, expect, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { FORMS, DEMO_CASES } from '../../src/forms';
+
 import { wetmodeJson, formatHz } from './support/cli';
+import { DEMO_CASES, FORMS } from '../../src/kinds/registry';
 
 const field = (page: Page, key: string) => page.locator(`[data-field="${key}"] input, [data-field="${key}"] select`).first();
 

@@ -1,12 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { parseMemberModel } from '../../src/physics/beam';
 import {
-  DEMO_CASES,
   FORM_ERROR_KEY,
-  FORMS,
   type FieldValues,
   isShown,
-  MEMBER_KINDS,
   type MemberForm,
   type MemberKind,
   placeholderOf,
@@ -14,6 +11,7 @@ import {
 } from '../../src/forms';
 import { parseQuantity, parseQuantityList } from '../../src/units';
 import { expectClose } from '../helpers/expect-close';
+import { DEMO_CASES, FORMS, KIND_IDS as MEMBER_KINDS } from '../../src/kinds/registry';
 
 const SYSTEMS: UnitSystem[] = ['si', 'us'];
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { NEWER_VERSION_MESSAGE, type Case } from '../../src/physics/case';
+import { NEWER_VERSION_MESSAGE, type Case } from '../../src/case';
 import { CASE_FILE_EXTENSION, caseFileName, caseFromFileText, caseToFileText, resultsToCsv } from '../../src/share';
 import { baffleCase, demoCase, v0Case } from '../case/fixtures';
 

@@ -4,7 +4,7 @@
  * re-framed after tampering) is either refused or yields a whole, valid case; markup in names survives as text.
  */
 import { describe, expect, it } from 'vitest';
-import { NEWER_VERSION_MESSAGE, type Case } from '../../src/physics/case';
+import { NEWER_VERSION_MESSAGE, type Case } from '../../src/case';
 import { decodeCasePayload, encodeCasePayload, LINK_MESSAGES } from '../../src/share';
 import { fromBase64url, toBase64url } from '../../src/share/base64url';
 import { deflateRaw } from '../../src/share/compression';

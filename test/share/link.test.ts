@@ -1,11 +1,11 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { NEWER_VERSION_MESSAGE, type Case } from '../../src/physics/case';
+import { NEWER_VERSION_MESSAGE, type Case } from '../../src/case';
 import { decodeCaseLink, decodeCasePayload, encodeCaseLink, encodeCasePayload, LINK_MESSAGES, linkView } from '../../src/share';
 import { framed } from './frame';
 import { deflateRaw } from '../../src/share/compression';
 import { caseToWire } from '../../src/share/wire';
 import { baffleCase, demoCase } from '../case/fixtures';
-import { CASE_LIMITS } from '../../src/physics/case';
+import { CASE_LIMITS } from '../../src/case';
 import { seeded } from '../bench/timing';
 
 const utf8 = (s: string) => new TextEncoder().encode(s);

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { parseCase, type Case } from '../../src/physics/case';
+import { parseCase, type Case } from '../../src/case';
 import { estimateQuota, newCase, newCaseId, requestPersistence, searchCases, sortCases } from '../../src/store';
 import { baffleCase, demoCase } from '../case/fixtures';
 import { harness } from './helpers';

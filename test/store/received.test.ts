@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CASE_LIMITS, type Case } from '../../src/physics/case';
+import { CASE_LIMITS, type Case } from '../../src/case';
 import { decodeCasePayload, encodeCasePayload } from '../../src/share';
 import { receivedName } from '../../src/store/received-ops';
 import { demoCase } from '../case/fixtures';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseCase, type Case } from '../../src/physics/case';
+import { parseCase, type Case } from '../../src/case';
 import { TRASH_DAYS } from '../../src/store';
 import { baffleCase, demoCase } from '../case/fixtures';
 import { harness, idNumber, openRaw, rawRecords, req, unwrap } from './helpers';

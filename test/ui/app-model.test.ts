@@ -1,8 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { AppModel, type Solver } from '../../src/ui/state/app-model';
-import { caseFromDemo } from '../../src/ui/state/services';
-import { DEMO_CASES } from '../../src/forms';
+import { caseFromDemo } from '../../src/app/create-case';
+
 import { inlineSolver } from './cases/solve';
+import { DEMO_CASES } from '../../src/kinds/registry';
 
 const settle = () => new Promise((r) => setTimeout(r, 0));
 

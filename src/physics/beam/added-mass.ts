@@ -2,15 +2,17 @@
  * Added mass per metre on the submerged part of the member (strip theory).
  * Unbounded liquid uses closed forms: a circle (tube or rod, diameter including coating) m_a = ρ π D²/4,
  * Ca = 1; a flat plate of width w moving normal to itself m_a = ρ π (w/2)², Ca = 1 (H. Lamb, Hydrodynamics,
- * classical; plate thickness neglected). Confined sections (liquid.boundaries given) go to the 2D section
- * solver, once per distinct section within one solve. Contents move with the member and take none.
+ * classical; plate thickness neglected). Confined sections (liquid.boundaries given), and shapes without a
+ * closed form (src/physics/shapes), go to the 2D section solver, once per distinct section within one solve. Contents move with the member and take none.
  */
 import type { MemberModel, MemberSegment } from './model';
 import { cylinderEndEffectFactor, END_EFFECT_SOURCE, PERFORATION_SOURCE, perforationFactor, plateEndEffectFactor } from './reductions';
 import { type SectionSolver, sectionInput } from './section-bridge';
 import { sectionAt } from './section-props';
+import { shapeOf } from '../shapes/registry';
+import type { AddedMassMethod } from '../shapes/types';
 
-export type AddedMassMethod = 'circle closed form (Lamb)' | 'flat plate closed form (Lamb)' | 'section solver';
+export type { AddedMassMethod };
 
 /** Added mass of one segment: m_a(t) = Ca(t) · ρ · π (w_outer(t)/2)² · endEffect, t = fraction along it. */
 export interface SegmentAddedMass {
@@ -73,15 +75,16 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
       segments.push(null);
       continue;
     }
-    const plate = seg.section.shape === 'plate-strip';
-    anyPlate ||= plate;
-    const perf = plate ? perforationFactor(p) : 1;
-    if (!confined) {
-      segments.push({ method: plate ? 'flat plate closed form (Lamb)' : 'circle closed form (Lamb)', caStart: perf, caEnd: perf, perforationFactor: perf });
+    const shape = shapeOf(seg.section);
+    anyPlate ||= shape.perforable;
+    const perf = shape.perforable ? perforationFactor(p) : 1;
+    if (!confined && shape.closedForm) {
+      segments.push({ method: shape.closedForm, caStart: perf, caEnd: perf, perforationFactor: perf });
       continue;
     }
     if (!solver) {
-      return { ok: false, reason: 'section-solver-failed', message: 'liquid.boundaries needs the section solver, which is not available' };
+      const needs = confined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
+      return { ok: false, reason: 'section-solver-failed', message: `${needs} the section solver, which is not available` };
     }
     const coat = seg.coating?.thicknessM ?? 0;
     const cas: number[] = [];
@@ -124,22 +127,26 @@ function endEffect(model: MemberModel, warnings: string[]): EndEffectUsed | null
   const to = Math.min(model.lengthM, liq.toM);
   const length = to - from;
   let widthIntegral = 0;
-  const kinds = new Set<string>();
+  const kinds = new Set<EndEffectUsed['basis'] | null>();
   for (const seg of model.segments) {
     const a = Math.max(from, seg.fromM);
     const b = Math.min(to, seg.toM);
     if (b <= a) continue;
-    kinds.add(seg.section.shape === 'plate-strip' ? 'plate' : 'circle');
+    kinds.add(shapeOf(seg.section).endEffectBasis);
     // Width is linear in z within a segment: the midpoint value is its mean.
     const tMid = (0.5 * (a + b) - seg.fromM) / (seg.toM - seg.fromM);
     widthIntegral += sectionAt(seg, tMid).outerWidthM * (b - a);
+  }
+  if (kinds.has(null)) {
+    warnings.push('3D end-effect reduction not applied: no tabulated factor for a section of this shape.');
+    return null;
   }
   if (kinds.size !== 1) {
     warnings.push('3D end-effect reduction not applied: the submerged length mixes plate strips and round sections.');
     return null;
   }
   const width = widthIntegral / length;
-  const plate = kinds.has('plate');
+  const plate = kinds.has('rectangular plate');
   if (!plate && length / width < 1.2) {
     warnings.push('Submerged length/diameter is below 1.2, the end of the end-effect table: its first value (0.62) was used.');
   }

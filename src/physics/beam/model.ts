@@ -5,11 +5,9 @@
  */
 import type { BoundarySpec } from '../section/types';
 
-export type MemberSection =
-  | { shape: 'tube'; outerDiameterM: number; wallThicknessM: number }
-  | { shape: 'rod'; diameterM: number }
-  /** Plate strip bending about its thin axis (motion normal to the plate). */
-  | { shape: 'plate-strip'; widthM: number; thicknessM: number };
+/** The section of a segment: one of the registered shapes (src/physics/shapes). */
+export type { MemberSection } from '../shapes/registry';
+import type { MemberSection } from '../shapes/registry';
 
 export interface MemberSegment {
   fromM: number;

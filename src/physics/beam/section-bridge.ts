@@ -6,6 +6,7 @@
 import { solveSection } from '../section/index';
 import type { BodySpec, BoundarySpec, SectionInput } from '../section/types';
 import type { MemberSection } from './model';
+import { shapeOf } from '../shapes/registry';
 
 export type SectionSolverOutcome =
   /** `swayRelativeError`: estimated relative discretisation error of addedMass[0][0], when the solver gives one. */
@@ -17,14 +18,10 @@ export type SectionSolver = (input: SectionInput) => SectionSolverOutcome;
 
 /**
  * The member's section as a section-solver body, centred at the origin and moving along x
- * (the convention of `MemberLiquid.boundaries`): a plate strip stands with its width along y.
+ * (the convention of `MemberLiquid.boundaries`), as its shape describes it (src/physics/shapes).
  */
 export function sectionBody(section: MemberSection, coatingM: number): BodySpec {
-  if (section.shape === 'plate-strip') {
-    return { shape: 'plate', widthM: section.widthM + 2 * coatingM, thicknessM: section.thicknessM + 2 * coatingM, angleDeg: 90 };
-  }
-  const d = section.shape === 'tube' ? section.outerDiameterM : section.diameterM;
-  return { shape: 'circle', diameterM: d + 2 * coatingM };
+  return shapeOf(section).solverBody(section, coatingM);
 }
 
 export function sectionInput(section: MemberSection, coatingM: number, rho: number, boundaries: BoundarySpec[]): SectionInput {

@@ -15,6 +15,7 @@ import type {
   SupportKind,
 } from './model';
 import type { BoundarySpec } from '../section/types';
+import { findShape, SHAPE_IDS, shapeOf } from '../shapes/registry';
 
 const SUPPORT_KINDS: readonly SupportKind[] = ['clamped', 'pinned', 'guided', 'free', 'spring'];
 export const MAX_MODES = 50;
@@ -80,28 +81,24 @@ const positive = (x: number) => x > 0;
 const nonNegative = (x: number) => x >= 0;
 
 function section(v: unknown, path: string): MemberSection {
-  const shape = (v as Obj | null)?.shape;
-  if (shape === 'tube') {
-    const o = object(v, path, ['shape', 'outerDiameterM', 'wallThicknessM']);
-    const d = num(o, 'outerDiameterM', path, 'a finite number > 0', positive);
-    const t = num(o, 'wallThicknessM', path, 'a finite number > 0', positive);
-    if (!(t < d / 2)) fail(at(path, 'wallThicknessM'), `less than the outer radius ${d / 2} m (use shape "rod" for a solid bar)`, t);
-    return { shape, outerDiameterM: d, wallThicknessM: t };
-  }
-  if (shape === 'rod') {
-    const o = object(v, path, ['shape', 'diameterM']);
-    return { shape, diameterM: num(o, 'diameterM', path, 'a finite number > 0', positive) };
-  }
-  if (shape === 'plate-strip') {
-    const o = object(v, path, ['shape', 'widthM', 'thicknessM']);
-    return {
-      shape,
-      widthM: num(o, 'widthM', path, 'a finite number > 0', positive),
-      thicknessM: num(o, 'thicknessM', path, 'a finite number > 0', positive),
-    };
+  const shape = findShape((v as Obj | null)?.shape);
+  if (shape) {
+    const choiceKeys = Object.keys(shape.choices);
+    const o = object(v, path, ['shape', ...shape.dimensions, ...choiceKeys]);
+    const out: Obj = { shape: shape.id };
+    for (const key of shape.dimensions) out[key] = num(o, key, path, 'a finite number > 0', positive);
+    for (const key of choiceKeys) {
+      const words = shape.choices[key];
+      if (typeof o[key] !== 'string' || !words.includes(o[key] as string)) fail(at(path, key), `one of ${words.map((w) => JSON.stringify(w)).join(', ')}`, o[key]);
+      out[key] = o[key];
+    }
+    const sec = out as unknown as MemberSection;
+    const bad = shape.check(sec);
+    if (bad) fail(at(path, bad.field), bad.expected, bad.got);
+    return sec;
   }
   if (typeof v !== 'object' || v === null || Array.isArray(v)) fail(path, 'an object', v);
-  return fail(at(path, 'shape'), 'one of "tube", "rod", "plate-strip"', shape);
+  return fail(at(path, 'shape'), `one of ${SHAPE_IDS.map((id) => JSON.stringify(id)).join(', ')}`, (v as Obj).shape);
 }
 
 function segment(v: unknown, i: number, lengthM: number): MemberSegment {
@@ -120,12 +117,17 @@ function segment(v: unknown, i: number, lengthM: number): MemberSegment {
   if (o.endSection !== undefined) {
     seg.endSection = section(o.endSection, at(path, 'endSection'));
     if (seg.endSection.shape !== seg.section.shape) fail(at(path, 'endSection.shape'), `the same as section.shape ("${seg.section.shape}")`, seg.endSection.shape);
+    const start = seg.section as unknown as Obj;
+    const end = seg.endSection as unknown as Obj;
+    for (const key of Object.keys(shapeOf(seg.section).choices)) {
+      if (end[key] !== start[key]) fail(at(path, `endSection.${key}`), `the same as section.${key} (${JSON.stringify(start[key])})`, end[key]);
+    }
   }
   const nu = optNum(o, 'poissonRatio', path, 'a finite number from 0 to below 0.5', (x) => x >= 0 && x < 0.5);
   if (nu !== undefined) seg.poissonRatio = nu;
   const rc = optNum(o, 'contentsDensityKgPerM3', path, 'a finite number ≥ 0', nonNegative);
   if (rc !== undefined) {
-    if (rc > 0 && seg.section.shape !== 'tube') fail(at(path, 'contentsDensityKgPerM3'), `0 or absent for a "${seg.section.shape}" (contents apply to tubes only)`, rc);
+    if (rc > 0 && !shapeOf(seg.section).holdsContents) fail(at(path, 'contentsDensityKgPerM3'), `0 or absent for a "${seg.section.shape}" (contents apply to tubes only)`, rc);
     seg.contentsDensityKgPerM3 = rc;
   }
   if (o.coating !== undefined) {

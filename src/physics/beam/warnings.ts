@@ -2,6 +2,7 @@
 import type { AddedMassPlan } from './added-mass';
 import type { MemberModel } from './model';
 import { sectionAt } from './section-props';
+import { shapeOf } from '../shapes/registry';
 
 /** Largest section depth in the direction of motion (tube/rod: diameter; plate strip: thickness), m. */
 export function maxDepthM(model: MemberModel): number {
@@ -24,12 +25,9 @@ export function memberWarnings(model: MemberModel, plan: AddedMassPlan | null, c
     out.push(`Mesh refinement stopped at ${elements} elements before every mode changed by less than ${(100 * tol).toPrecision(2)} %.`);
   }
   for (const seg of model.segments) {
-    const s = seg.section;
-    if (plan && s.shape === 'plate-strip' && s.widthM / s.thicknessM < 20) {
-      out.push(
-        `Plate width / thickness is ${(s.widthM / s.thicknessM).toPrecision(3)}: the thin-plate added mass ρπ(w/2)² ` +
-          'neglects thickness (a rectangle of aspect 10 has Ca ≈ 1.14 in DNV-RP-H103, Modelling and Analysis of Marine Operations, Table A-1).',
-      );
+    const w = plan ? shapeOf(seg.section).wetWarning(seg.section) : null;
+    if (w) {
+      out.push(w);
       break;
     }
   }

@@ -8,6 +8,7 @@ import { GAUSS_N, GAUSS_W, GAUSS_XI } from './element';
 import type { MemberModel } from './model';
 import type { ZoneResult } from './result';
 import { sectionAt } from './section-props';
+import { shapeOf } from '../shapes/registry';
 
 export function massZones(model: MemberModel, plan: AddedMassPlan | null): ZoneResult[] {
   const len = model.lengthM;
@@ -47,7 +48,6 @@ export function massZones(model: MemberModel, plan: AddedMassPlan | null): ZoneR
         displaced += w * liq.densityKgPerM3 * p.displacedAreaM2;
       }
     }
-    const plate = seg.section.shape === 'plate-strip';
     zones.push({
       fromM: a,
       toM: b,
@@ -58,7 +58,7 @@ export function massZones(model: MemberModel, plan: AddedMassPlan | null): ZoneR
       coatingKgPerM: coating,
       addedKgPerM: added,
       addedMassCoefficientCa: wet ? added / reference : null,
-      caReferenceArea: plate ? 'π (w/2)², w = plate width including coating' : 'π D²/4, D = outer diameter including coating',
+      caReferenceArea: shapeOf(seg.section).caReferenceArea,
       addedToDisplacedLiquidMass: wet ? added / displaced : null,
       addedToStructuralMass: wet ? added / structure : null,
       addedMassMethod: wet ? (plan.segments[si]?.method ?? null) : null,

@@ -6,16 +6,15 @@
 import type { MemberModel } from '../beam/model';
 import type { MemberResult, ZoneResult } from '../beam/result';
 import { sectionAt } from '../beam/section-props';
+import { shapeOf } from '../shapes/registry';
 import type { ScreeningInput, ScreeningMode, SubmergedZone } from './types';
 
 /** What the case adds to the member for screening: everything in ScreeningInput except what comes from the modes. */
 export type CaseExcitation = Omit<ScreeningInput, 'modes' | 'zones' | 'effectiveMassKgPerM'>;
 
 /**
- * Submerged zones with the section the flow sees: a tube or rod is a circle of its outer diameter including
- * coating and growth (DNV-RP-C205 §9 uses the outer diameter; NORSOK N-003 §6.2.4.2 counts growth in it);
- * a plate strip is a rectangle facing the flow, width across, thickness along (our choice for baffles:
- * the flow in a stirred tank meets a baffle face-on, which sheds from its edges).
+ * Submerged zones with the section the flow sees, as its shape describes it (src/physics/shapes: a tube or
+ * rod is a circle of its outer diameter including coating, a plate strip a rectangle facing the flow).
  * A tapered zone uses its mid-length size.
  */
 export function submergedZones(model: MemberModel, zones: readonly ZoneResult[]): SubmergedZone[] {
@@ -29,10 +28,7 @@ export function submergedZones(model: MemberModel, zones: readonly ZoneResult[])
     out.push({
       fromM: z.fromM,
       toM: z.toM,
-      section:
-        seg.section.shape === 'plate-strip'
-          ? { kind: 'rectangle', widthAcrossFlowM: p.outerWidthM, depthAlongFlowM: p.depthM }
-          : { kind: 'circle', outerDiameterM: p.outerWidthM },
+      section: shapeOf(seg.section).flowSection(p),
     });
   }
   return out;

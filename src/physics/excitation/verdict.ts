@@ -23,7 +23,10 @@
  * published limit (V_R = 1.0, f = 1.2 × forcing) is not pushed across it by floating-point rounding.
  */
 
-export type Verdict = 'clear' | 'close' | 'inside-band';
+/** The verdict words, mildest first; saved cases keep them (src/case checks against this list). */
+export const VERDICTS = ['clear', 'close', 'inside-band'] as const;
+/** Resonance verdict, shown with an icon shape and never by colour alone. */
+export type Verdict = (typeof VERDICTS)[number];
 
 /** Words for the UI and report (verdicts are always shown as words, never colour alone). */
 export const VERDICT_WORDS: Record<Verdict, string> = {

@@ -1,4 +1,4 @@
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { caseRowView } from './format';
 import { copyName } from './names';

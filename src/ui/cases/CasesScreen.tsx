@@ -1,10 +1,9 @@
 import { useRef, useState } from 'preact/hooks';
-import type { Case, MemberKind, UnitSystem } from '../../physics/case';
+import type { Case, MemberKind, UnitSystem } from '../../case';
 import type { DemoCase } from '../../forms';
 import { useModel, useServices } from '../state/context';
-import { caseFromDemo } from '../state/services';
+import { blankCase, caseFromDemo } from '../../app/create-case';
 import { FilePanel } from './FilePanel';
-import { blankCase } from './new-case';
 import { NewCasePanel } from './NewCasePanel';
 import { OpenCaseBar } from './OpenCaseBar';
 import { useReplaceGuard } from './ReplaceGuard';

@@ -1,5 +1,5 @@
 import { useId } from 'preact/hooks';
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { caseFromFileText } from '../../share/file';
 import { importOutcome, importReadProblem, importSizeProblem } from './import-file';
 import type { Status } from './StatusLine';

@@ -1,5 +1,5 @@
 import { useEffect, useId, useRef, useState } from 'preact/hooks';
-import { CASE_LIMITS } from '../../physics/case';
+import { CASE_LIMITS } from '../../case';
 import { checkCaseName } from './names';
 
 interface Props {

@@ -1,8 +1,9 @@
 import { useId, useState } from 'preact/hooks';
-import { MEMBER_KINDS, type MemberKind, type UnitSystem } from '../../physics/case';
-import { DEMO_CASES, FORMS, type DemoCase } from '../../forms';
+import { MEMBER_KINDS, type MemberKind, type UnitSystem } from '../../case';
+import type { DemoCase } from '../../forms';
 import { kindTitle } from './format';
 import { loadNewCaseUnits, storeNewCaseUnits } from './new-case';
+import { DEMO_CASES, kindOf } from '../../kinds/registry';
 
 interface Props {
   onNew: (kind: MemberKind, system: UnitSystem) => void;
@@ -40,8 +41,8 @@ export function NewCasePanel({ onNew, onDemo }: Props) {
       <div class="kind-buttons">
         {MEMBER_KINDS.map((kind) => (
           <button key={kind} type="button" class="btn kind-button" onClick={() => onNew(kind, system)}>
-            <span class="kind-title">{FORMS[kind].title}</span>
-            <span class="kind-summary">{FORMS[kind].summary}</span>
+            <span class="kind-title">{kindOf(kind).title}</span>
+            <span class="kind-summary">{kindOf(kind).summary}</span>
           </button>
         ))}
       </div>

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'preact/hooks';
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import type { SameCaseAnswer } from '../../store';
 import { useModel, useServices } from '../state/context';
 import { contentKey } from '../state/app-model';

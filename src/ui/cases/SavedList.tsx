@@ -1,5 +1,5 @@
 import { useId, useState } from 'preact/hooks';
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { searchCases, sortCases, type CaseSort, type CaseStore, type UndoToken } from '../../store';
 import type { AppModel } from '../state/app-model';
 import { CaseRow, type RowEdit } from './CaseRow';

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { copyText, encodeCaseLink, resultsToCsv, shareLink, type CsvCell } from '../../share';
 import { useServices } from '../state/context';
 import { displayName } from './format';

@@ -2,9 +2,9 @@
  * Pure formatting for the Cases screen: dates, byte counts, the storage line and one list row.
  * No DOM, no store: tested on their own (test/ui/cases).
  */
-import type { Case, MemberKind, Verdict } from '../../physics/case';
-import { FORMS } from '../../forms';
+import type { Case, MemberKind, Verdict } from '../../case';
 import { formatHz } from '../format/numbers';
+import { kindOf } from '../../kinds/registry';
 
 /** What a case without a name is called on screen (the stored name stays empty). */
 export const UNTITLED = 'Untitled';
@@ -53,7 +53,7 @@ export function quotaWords(q: { supported: true; usageBytes: number; quotaBytes:
 
 /** "Pile", "Riser or conductor", … (the forms' titles). */
 export function kindTitle(kind: MemberKind): string {
-  return FORMS[kind].title;
+  return kindOf(kind).title;
 }
 
 /** The name to show: the case's own, or "Untitled" when it has none (blank names too). */

@@ -2,7 +2,7 @@
  * Words for importing a case file. Reading happens in the component (File.text()); the checks and messages
  * are here so they can be tested. The parse itself is `caseFromFileText` (src/share/file.ts).
  */
-import type { Case, ParseCaseResult } from '../../physics/case';
+import type { Case, ParseCaseResult } from '../../case';
 import { MAX_CASE_FILE_CHARS } from '../../share/file';
 import { formatBytes } from './format';
 import { quoted, withStop } from './words';

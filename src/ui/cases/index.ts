@@ -17,5 +17,5 @@ export { PersistenceNote, QuotaLine, StorageBanner } from './StorageStatus';
 export { StatusLine, type Status } from './StatusLine';
 export { docForSaving, exportCaseFile, saveOpenCase, type SaveOutcome } from './open-case';
 export { askPersistenceOnce } from './persistence';
-export { blankCase } from './new-case';
+export { blankCase } from '../../app/create-case';
 export { resultCsvRows, csvFileName } from './results-csv';

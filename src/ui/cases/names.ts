@@ -1,5 +1,5 @@
 /** Names typed for Rename and Duplicate: the default for a copy, and the check before the store is asked. */
-import { CASE_LIMITS, cutText } from '../../physics/case';
+import { CASE_LIMITS, cutText } from '../../case';
 import { displayName } from './format';
 
 const COPY_SUFFIX = ' (copy)';
@@ -18,7 +18,7 @@ export type NameCheck = { ok: true; name: string } | { ok: false; message: strin
 export function checkCaseName(typed: string): NameCheck {
   const name = typed.trim();
   if (/[\r\n]/.test(name)) return { ok: false, message: 'A name must be one line; this one has a line break in it.' };
-  // The schema's rule for one-line text (src/physics/case/fields.ts): no control characters but tabs.
+  // The schema's rule for one-line text (src/case/fields.ts): no control characters but tabs.
   if (/[\u0000-\u0008\u000B-\u001F\u007F]/.test(name)) {
     return { ok: false, message: 'A name must be plain text; this one has an invisible control character in it (pasted from another program?).' };
   }

@@ -1,17 +1,7 @@
-/** A fresh case of a member kind with the form's defaults, for the four "new case" buttons. */
-import { sameCaseContent, type Case, type MemberKind, type UnitSystem } from '../../physics/case';
-import { DEMO_CASES, FORMS } from '../../forms';
-import { excitationDefaults } from '../../forms/excitation';
-import { newCase } from '../../store/new-case';
-import { caseFromDemo } from '../state/services';
-
-export function blankCase(kind: MemberKind, system: UnitSystem): Case {
-  return {
-    ...newCase({ kind, unitSystem: system }),
-    inputs: { ...FORMS[kind].defaults(system) },
-    excitation: { ...excitationDefaults(kind, system) },
-  };
-}
+/** The new-case choices of this device (units last chosen) and the "untouched start" test; cases come from src/app. */
+import { blankCase, caseFromDemo } from '../../app/create-case';
+import { sameCaseContent, type Case, type UnitSystem } from '../../case';
+import { DEMO_CASES } from '../../kinds/registry';
 
 const UNITS_KEY = 'wetmode.newCaseUnits';
 

@@ -2,7 +2,7 @@
  * Saving and exporting the open case (the one in the model). Used by the Cases screen (before another case
  * replaces an unsaved one), by the received banner, and available to the Member screen's Save button.
  */
-import { sameCaseContent, type Case } from '../../physics/case';
+import { sameCaseContent, type Case } from '../../case';
 import type { CaseStore, StoreErrorKind } from '../../store';
 import { CASE_FILE_MIME, caseFileName, caseToFileText } from '../../share/file';
 import { keyResultOf, type AppModel } from '../state/app-model';

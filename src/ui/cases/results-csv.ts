@@ -3,14 +3,14 @@
  * checks, one table after another, for a spreadsheet. Numbers stay numbers (rounded to 6 significant figures,
  * more than any input justifies); `resultsToCsv` (src/share/csv.ts) writes them and defuses formula-like text.
  */
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import { VERDICT_WORDS } from '../../physics/excitation/verdict';
-import { FORMS, type FieldDef } from '../../forms';
-import { excitationFields } from '../../forms/excitation';
+import type { FieldDef } from '../../forms';
 import type { CsvCell } from '../../share/csv';
 import { caseFileName } from '../../share/file';
-import type { CaseAnswer } from '../../worker/solve-case';
+import type { CaseAnswer } from '../../app/solve-case';
 import { displayName, kindTitle } from './format';
+import { kindOf } from '../../kinds/registry';
 
 export type CsvRow = CsvCell[];
 
@@ -47,8 +47,8 @@ export function resultCsvRows(doc: Case, answer: CaseAnswer | null, exportedAt: 
     ['Exported', exportedAt],
     [],
     ['Input', 'Value as entered', 'Unit of a bare number'],
-    ...inputRows(FORMS[doc.kind].fields, doc.inputs, doc.unitSystem),
-    ...inputRows(excitationFields(doc.kind), doc.excitation, doc.unitSystem),
+    ...inputRows(kindOf(doc.kind).form.fields, doc.inputs, doc.unitSystem),
+    ...inputRows(kindOf(doc.kind).resonance.fields, doc.excitation, doc.unitSystem),
     [],
   ];
   if (!answer) {

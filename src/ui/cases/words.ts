@@ -2,7 +2,7 @@
  * Messages of the Cases screen, the received-case banner and the share buttons, in plain words.
  * Pure: each is tested in test/ui/cases. Names quoted here are data; the components render them as text.
  */
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import type { ReceivedOutcome, SameCaseAnswer } from '../../store/api';
 import type { PersistenceAnswer } from '../../store/persistence';
 import type { CopyAnswer, ShareAnswer } from '../../share/share-sheet';

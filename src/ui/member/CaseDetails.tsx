@@ -1,4 +1,4 @@
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import type { AppModel } from '../state/app-model';
 
 /** Name, tag and note of the open case (data, shown as text). */

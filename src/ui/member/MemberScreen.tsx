@@ -1,5 +1,4 @@
-import { FORMS, placeholderOf } from '../../forms';
-import { excitationFields } from '../../forms/excitation';
+import { placeholderOf } from '../../forms';
 import { formatQuantity } from '../../units';
 import { useModel } from '../state/context';
 import { MemberPlot } from '../plots/MemberPlot';
@@ -9,6 +8,7 @@ import { FieldList } from './FieldList';
 import { MemberToolbar } from './MemberToolbar';
 import { QuickResults } from './QuickResults';
 import { AnswerBar } from './AnswerBar';
+import { kindOf } from '../../kinds/registry';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -24,7 +24,7 @@ export function MemberScreen() {
       </section>
     );
   }
-  const form = FORMS[doc.kind];
+  const form = kindOf(doc.kind).form;
   const stale = !model.resultsCurrent();
   const build = state.results?.build;
   const lengthUnit = doc.unitSystem === 'si' ? 'm' : 'ft';
@@ -53,11 +53,11 @@ export function MemberScreen() {
           <fieldset disabled={received}>
             <legend>What can drive it</legend>
             <FieldList
-              fields={excitationFields(doc.kind)}
+              fields={kindOf(doc.kind).resonance.fields}
               values={doc.excitation}
               system={doc.unitSystem}
               errors={state.excitationErrors}
-              placeholderOf={(k) => excitationFields(doc.kind).find((f) => f.key === k)?.emptyMeans ?? ''}
+              placeholderOf={(k) => kindOf(doc.kind).resonance.fields.find((f) => f.key === k)?.emptyMeans ?? ''}
               onInput={(k, t) => model.setExcitation(k, t)}
               idPrefix="x"
               moreLabel="More resonance settings"

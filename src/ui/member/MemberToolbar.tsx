@@ -1,9 +1,10 @@
 import { useState } from 'preact/hooks';
-import { FORMS, type UnitSystem } from '../../forms';
+import type { UnitSystem } from '../../forms';
 import { convertExcitationValues } from '../../forms/excitation';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
 import { saveOpenCase } from '../cases';
+import { kindOf } from '../../kinds/registry';
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
@@ -15,8 +16,8 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
     model.edit((d) => ({
       ...d,
       unitSystem: to,
-      inputs: FORMS[d.kind].convertValues(d.inputs, d.unitSystem, to),
-      excitation: convertExcitationValues(d.kind, d.excitation, d.unitSystem, to),
+      inputs: kindOf(d.kind).form.convertValues(d.inputs, d.unitSystem, to),
+      excitation: convertExcitationValues(kindOf(d.kind).resonance, d.excitation, d.unitSystem, to),
     }));
   };
   const save = async () => {

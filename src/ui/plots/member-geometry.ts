@@ -4,6 +4,7 @@
  * scale but never thinner than a few pixels, so a slender member stays visible.
  */
 import type { MemberModel, MemberSection } from '../../physics/beam/model';
+import { shapeOf } from '../../physics/shapes/registry';
 
 export interface PlotBox {
   widthPx: number;
@@ -12,16 +13,9 @@ export interface PlotBox {
   padPx: number;
 }
 
-/** Outer width of a section across the bending direction, m (tube/rod diameter, plate thickness). */
+/** Drawn width of a section in the plane of bending: its depth along the motion, m (tube/rod diameter, plate thickness). */
 export function outerWidthM(s: MemberSection): number {
-  switch (s.shape) {
-    case 'tube':
-      return s.outerDiameterM;
-    case 'rod':
-      return s.diameterM;
-    case 'plate-strip':
-      return s.thicknessM;
-  }
+  return shapeOf(s).depthM(s);
 }
 
 /** Metres along the member to the SVG y coordinate (z = 0 at the bottom). */

@@ -1,6 +1,6 @@
-import type { Case } from '../../physics/case';
-import { FORMS } from '../../forms';
+import type { Case } from '../../case';
 import { formatDateTime } from './report-meta';
+import { kindOf } from '../../kinds/registry';
 
 /** Title block: what, which case, when, which app version. Names and notes are shown as text, never markup. */
 export function ReportHeader({ doc, appVersion, printedAt }: { doc: Case; appVersion: string; printedAt: string }) {
@@ -13,7 +13,7 @@ export function ReportHeader({ doc, appVersion, printedAt }: { doc: Case; appVer
         <dt>Tag</dt>
         <dd>{doc.tag.trim() === '' ? '(none)' : doc.tag}</dd>
         <dt>Member</dt>
-        <dd>{FORMS[doc.kind].title}</dd>
+        <dd>{kindOf(doc.kind).title}</dd>
         <dt>Units</dt>
         <dd>{doc.unitSystem === 'si' ? 'SI (metric)' : 'US customary'}</dd>
         <dt>Last changed</dt>

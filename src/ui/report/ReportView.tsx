@@ -1,7 +1,5 @@
 import { useEffect } from 'preact/hooks';
-import type { Case } from '../../physics/case';
-import { FORMS } from '../../forms';
-import { excitationFields } from '../../forms/excitation';
+import type { Case } from '../../case';
 import { contentKey, type Results } from '../state/app-model';
 import { CautionsPanel } from '../results/NotesPanels';
 import { InputsTable } from './InputsTable';
@@ -14,6 +12,7 @@ import { adoptPageRule, pageRule } from './print-header';
 import { formatDateTime } from './report-meta';
 import '../results/results.css';
 import './report.css';
+import { kindOf } from '../../kinds/registry';
 
 export interface ReportViewProps {
   doc: Case;
@@ -31,9 +30,9 @@ export interface ReportViewProps {
  */
 export function ReportView({ doc, results, link, appVersion }: ReportViewProps) {
   const printedAt = new Date().toISOString();
-  const form = FORMS[doc.kind];
-  const memberRows = inputRows(form.fields, doc.inputs, doc.unitSystem, form.defaults(doc.unitSystem));
-  const excitationRows = inputRows(excitationFields(doc.kind), doc.excitation, doc.unitSystem);
+  const kind = kindOf(doc.kind);
+  const memberRows = inputRows(kind.form.fields, doc.inputs, doc.unitSystem, kind.form.defaults(doc.unitSystem));
+  const excitationRows = inputRows(kind.resonance.fields, doc.excitation, doc.unitSystem);
   const current = results !== null && results.forKey === contentKey(doc);
   const header = [doc.name.trim() || '(no name)', doc.tag.trim(), formatDateTime(printedAt)].filter((s) => s !== '').join(' · ');
   useEffect(() => adoptPageRule(pageRule(header, appVersion)), [header, appVersion]);

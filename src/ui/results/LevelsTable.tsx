@@ -1,4 +1,4 @@
-import type { MemberBuild } from '../../physics/members/types';
+import type { MemberBuild } from '../../kinds/common/types';
 import type { DisplayUnits } from './display-units';
 import { levelRows, stretchRows } from './landmark-rows';
 import { ScrollTable } from './ScrollTable';

@@ -1,6 +1,6 @@
 import { useState } from 'preact/hooks';
 import type { MemberResult } from '../../physics/beam/result';
-import type { MemberBuild } from '../../physics/members/types';
+import type { MemberBuild } from '../../kinds/common/types';
 import { formatHz } from '../format/numbers';
 import { MemberPlot, type PlotShape } from '../plots/MemberPlot';
 import type { DisplayUnits } from './display-units';

@@ -1,5 +1,5 @@
 import type { MemberResult } from '../../physics/beam/result';
-import type { MemberBuild } from '../../physics/members/types';
+import type { MemberBuild } from '../../kinds/common/types';
 import { CAUTIONS } from '../../text/cautions';
 import { assumptionLines, meshText, tensionText } from './assumptions';
 import type { DisplayUnits } from './display-units';

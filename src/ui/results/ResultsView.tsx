@@ -1,5 +1,5 @@
 import type { ComponentChildren } from 'preact';
-import type { Case } from '../../physics/case';
+import type { Case } from '../../case';
 import type { Results } from '../state/app-model';
 import { displayUnits } from './display-units';
 import { MassTable } from './MassTable';

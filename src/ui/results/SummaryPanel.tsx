@@ -1,6 +1,6 @@
-import type { MemberKind } from '../../physics/members';
+import type { MemberKind } from '../../case';
 import type { UnitSystem } from '../../units';
-import type { CaseAnswer } from '../../worker/solve-case';
+import type { CaseAnswer } from '../../app/solve-case';
 import { summarise } from './summary';
 import { VerdictBadge } from './VerdictBadge';
 

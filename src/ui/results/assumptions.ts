@@ -4,7 +4,7 @@
  * model (the builder's notes), the mesh and the axial load.
  */
 import type { MemberResult } from '../../physics/beam/result';
-import type { MemberBuild } from '../../physics/members/types';
+import type { MemberBuild } from '../../kinds/common/types';
 import { type DisplayUnits, pct, plain, qty } from './display-units';
 
 export function beamTheoryText(theory: MemberResult['beamTheory']): string {

@@ -3,7 +3,7 @@
  * units, not only inside the SVG), and the landmarks handed to the plot: coincident levels merged into one
  * label, levels outside the drawn length left to the table.
  */
-import type { Landmark, MemberBuild } from '../../physics/members/types';
+import type { Landmark, MemberBuild } from '../../kinds/common/types';
 import { type DisplayUnits, rangeText, zText } from './display-units';
 
 /** Levels closer than this fraction of the member length share one line on the plot. */

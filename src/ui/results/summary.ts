@@ -4,11 +4,12 @@
  * frequencies, and the flow speed at which lock-in would begin. Nothing here is computed anew except
  * picking and wording; every number comes from the member result or the screening result.
  */
-import type { MemberKind } from '../../physics/members';
+import type { MemberKind } from '../../case';
+import { kindOf } from '../../kinds/registry';
 import type { CheckResult, ScreeningResult } from '../../physics/excitation/results';
 import { VERDICT_WORDS, type Verdict } from '../../physics/excitation/verdict';
 import type { UnitSystem } from '../../units';
-import type { CaseAnswer } from '../../worker/solve-case';
+import type { CaseAnswer } from '../../app/solve-case';
 import { formatHz, formatSig } from '../format/numbers';
 import { displayUnits, marginText, pct, qty, zText } from './display-units';
 
@@ -17,7 +18,7 @@ type Solved = Extract<CaseAnswer, { ok: true }>;
 
 /** What the flow past the member is called for each kind, in the surveyor's words. */
 export function flowWord(kind: MemberKind): string {
-  return kind === 'stem' ? 'flow speed' : kind === 'baffle' ? 'liquid speed' : 'current';
+  return kindOf(kind).flowWord;
 }
 
 /** A failed solve in plain words: a short title and what to do. The solver's own message is kept at the end. */

@@ -1,9 +1,9 @@
 import { useModel } from '../state/context';
 import { ResultsView } from '../results/ResultsView';
 import { hashFor } from '../shell/router';
-import { FORMS } from '../../forms';
 import type { ComponentChildren } from 'preact';
 import { MemberSectionPanel } from '../section/MemberSectionPanel';
+import { kindOf } from '../../kinds/registry';
 
 /** The Results screen: the open case's results; `banner` is shown above them (a received case). */
 export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren; actions?: ComponentChildren }) {
@@ -11,7 +11,7 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
   const doc = state.doc;
   return (
     <section class="screen" aria-labelledby="screen-title">
-      <h1 id="screen-title" tabIndex={-1}>Results{doc ? `: ${doc.name || FORMS[doc.kind].title}` : ''}</h1>
+      <h1 id="screen-title" tabIndex={-1}>Results{doc ? `: ${doc.name || kindOf(doc.kind).title}` : ''}</h1>
       {banner}
       {!doc ? (
         <div class="panel notice">

@@ -3,7 +3,8 @@
  * growth) and the surroundings that confine the liquid around it, moving in sway (x) as the member bends.
  */
 import type { MemberModel } from '../../physics/beam/model';
-import { sectionAt } from '../../physics/beam/section-props';
+import { sectionBody } from '../../physics/beam/section-bridge';
+import { interpolateSection } from '../../physics/beam/section-props';
 import type { BodySpec, SectionInput } from '../../physics/section/types';
 import type { SectionForm } from './form';
 import { formFromInput, leftOutNote } from './form-from-input';
@@ -20,9 +21,8 @@ export interface MemberSection {
 }
 
 /**
- * The member's submerged section at mid-depth of its liquid range, or null when nothing is submerged.
- * A tube or rod is a circle of its outer diameter; a plate strip is a plate with its width across the
- * motion (along y) and its thickness along the motion (x).
+ * The member's submerged section at mid-depth of its liquid range, or null when nothing is submerged:
+ * the body its shape gives the section solver (src/physics/shapes), coating included.
  */
 export function sectionFromMember(model: MemberModel): MemberSection | null {
   const liquid = model.liquid;
@@ -33,11 +33,8 @@ export function sectionFromMember(model: MemberModel): MemberSection | null {
   const z = 0.5 * (from + to);
   const seg = model.segments.find((s) => z >= s.fromM && z <= s.toM);
   if (!seg) return null;
-  const p = sectionAt(seg, (z - seg.fromM) / (seg.toM - seg.fromM));
-  const body: BodySpec =
-    seg.section.shape === 'plate-strip'
-      ? { shape: 'plate', widthM: p.outerWidthM, thicknessM: p.depthM, angleDeg: 90 }
-      : { shape: 'circle', diameterM: p.outerWidthM };
+  // The body the member's shape gives the section solver (src/physics/shapes), coating included.
+  const body: BodySpec = sectionBody(interpolateSection(seg, (z - seg.fromM) / (seg.toM - seg.fromM)), seg.coating?.thicknessM ?? 0);
   // The member's own boundaries, as the member engine solves them (none dropped, no rounding).
   const input: SectionInput = { liquidDensityKgPerM3: liquid.densityKgPerM3, bodies: [body] };
   if (liquid.boundaries && liquid.boundaries.length > 0) input.boundaries = [...liquid.boundaries];

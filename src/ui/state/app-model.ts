@@ -7,12 +7,12 @@
  * does not read keeps the last good results on screen, marked out of date. Every edit of an editable case is
  * saved as a draft shortly after, so closing the tab, an update or a crash loses nothing.
  */
-import type { Case, KeyResult } from '../../physics/case';
-import { sameCaseContent } from '../../physics/case';
-import type { MemberBuild } from '../../physics/members';
+import type { Case, KeyResult } from '../../case';
+import { sameCaseContent } from '../../case';
+import type { MemberBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
-import { readCase } from '../../forms/read-case';
-import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
+import { readCase } from '../../app/read-case';
+import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
 import { CASE_ADVICE, solverFailureWords } from './solver-words';
 

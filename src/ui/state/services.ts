@@ -3,16 +3,15 @@
  * store (opened asynchronously). Also the first-start choice of what to open.
  */
 import { SolverClient, type WorkerLike } from '../../worker/solver-client';
-import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
-import { openStore, newCase, type CaseStore } from '../../store';
-import { DEMO_CASES, FORMS } from '../../forms';
-import { excitationDefaults } from '../../forms/excitation';
-import { sameCaseContent, type Case } from '../../physics/case';
-import type { DemoCase } from '../../forms';
+import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
+import { openStore, type CaseStore } from '../../store';
+import { caseFromDemo } from '../../app/create-case';
+import { sameCaseContent, type Case } from '../../case';
 import { AppModel } from './app-model';
 import type { SectionAnswer, SectionRequest } from '../../worker/solve-section';
 import { SectionModel } from '../section/section-model';
 import type { SectionSolver } from '../section/section-solves';
+import { DEMO_CASES } from '../../kinds/registry';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
@@ -37,15 +36,6 @@ export function createSectionModel(solver: SectionSolver): SectionModel {
   return new SectionModel(solver);
 }
 
-/** A fresh, unsaved case from a demo, with its own id. */
-export function caseFromDemo(demo: DemoCase): Case {
-  const c = newCase({ kind: demo.kind, unitSystem: demo.system, name: demo.name, tag: demo.tag, note: demo.note });
-  return {
-    ...c,
-    inputs: { ...FORMS[demo.kind].defaults(demo.system), ...demo.values },
-    excitation: { ...excitationDefaults(demo.kind, demo.system), ...(demo.excitation ?? {}) },
-  };
-}
 
 export type StoreOpening = { store: CaseStore; message: null; retryable: false } | { store: null; message: string; retryable: boolean };
 

@@ -43,7 +43,7 @@ describe('member input validation names the field, what was expected and what wa
     ['segment ending before it starts', (m) => (m.segments[0].toM = -1), 'segments[0].toM must be a finite number > fromM (0), got -1'],
     ['zero diameter', (m) => (m.segments[0].section.outerDiameterM = 0), 'segments[0].section.outerDiameterM must be a finite number > 0, got 0'],
     ['wall as thick as the radius', (m) => (m.segments[0].section.wallThicknessM = 0.381), 'segments[0].section.wallThicknessM must be less than the outer radius 0.381 m (use shape "rod" for a solid bar), got 0.381'],
-    ['unknown shape', (m) => (m.segments[0].section = { shape: 'square', sideM: 1 }), 'segments[0].section.shape must be one of "tube", "rod", "plate-strip", got "square"'],
+    ['unknown shape', (m) => (m.segments[0].section = { shape: 'square', sideM: 1 }), 'segments[0].section.shape must be one of "tube", "rod", "plate-strip", "h-section", got "square"'],
     ['negative plate thickness', (m) => (m.segments[0].section = { shape: 'plate-strip', widthM: 0.3, thicknessM: -0.01 }), 'segments[0].section.thicknessM must be a finite number > 0, got -0.01'],
     ['taper to another shape', (m) => (m.segments[1].endSection = { shape: 'rod', diameterM: 0.5 }), 'segments[1].endSection.shape must be the same as section.shape ("tube"), got "rod"'],
     ['zero Young’s modulus', (m) => (m.segments[0].youngsModulusPa = 0), 'segments[0].youngsModulusPa must be a finite number > 0, got 0'],

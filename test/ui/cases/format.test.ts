@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Case } from '../../../src/physics/case';
+import type { Case } from '../../../src/case';
 import { caseRowView, displayName, formatBytes, formatCaseDate, kindTitle, quotaWords } from '../../../src/ui/cases/format';
 import { demoCase } from '../../case/fixtures';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { NEWER_VERSION_MESSAGE } from '../../../src/physics/case';
+import { NEWER_VERSION_MESSAGE } from '../../../src/case';
 import { caseFromFileText, caseToFileText } from '../../../src/share/file';
 import { MAX_IMPORT_BYTES, importOutcome, importReadProblem, importSizeProblem } from '../../../src/ui/cases/import-file';
 import { demoCase, v0Case } from '../../case/fixtures';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { CASE_LIMITS, parseCase } from '../../../src/physics/case';
+import { CASE_LIMITS, parseCase } from '../../../src/case';
 import { checkCaseName, copyName } from '../../../src/ui/cases/names';
-import { cutText } from '../../../src/physics/case';
+import { cutText } from '../../../src/case';
 import { demoCase } from '../../case/fixtures';
 
 describe('the name offered for a copy', () => {

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { MEMBER_KINDS, parseCase } from '../../../src/physics/case';
-import { FORMS } from '../../../src/forms';
+import { MEMBER_KINDS, parseCase } from '../../../src/case';
+
 import { excitationDefaults } from '../../../src/forms/excitation';
-import { readCase } from '../../../src/forms/read-case';
-import { blankCase, isUntouchedStart } from '../../../src/ui/cases/new-case';
-import { DEMO_CASES } from '../../../src/forms';
-import { caseFromDemo } from '../../../src/ui/state/services';
+import { readCase } from '../../../src/app/read-case';
+import { isUntouchedStart } from '../../../src/ui/cases/new-case';
+
+import { blankCase, caseFromDemo } from '../../../src/app/create-case';
+import { DEMO_CASES, FORMS, kindOf } from '../../../src/kinds/registry';
 
 describe('a new case from the big buttons', () => {
   it('of each kind and in each unit system is a valid case with the form\u2019s defaults that reads without errors', () => {
@@ -13,7 +14,7 @@ describe('a new case from the big buttons', () => {
       for (const system of ['si', 'us'] as const) {
         const c = blankCase(kind, system);
         expect(parseCase(c)).toEqual({ ok: true, value: c });
-        expect(c).toMatchObject({ kind, unitSystem: system, name: '', inputs: FORMS[kind].defaults(system), excitation: excitationDefaults(kind, system) });
+        expect(c).toMatchObject({ kind, unitSystem: system, name: '', inputs: FORMS[kind].defaults(system), excitation: excitationDefaults(kindOf(kind).resonance, system) });
         const reading = readCase(c);
         expect(reading.ok, `${kind}/${system}: ${JSON.stringify(reading.ok ? null : reading.errors)}`).toBe(true);
       }

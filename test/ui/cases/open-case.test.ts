@@ -1,11 +1,12 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { DEMO_CASES } from '../../../src/forms';
+
 import { AppModel } from '../../../src/ui/state/app-model';
-import { caseFromDemo } from '../../../src/ui/state/services';
+import { caseFromDemo } from '../../../src/app/create-case';
 import { afterDeleted, afterRenamed, afterRestored, docForSaving, saveOpenCase } from '../../../src/ui/cases/open-case';
 import { askPersistenceOnce, persistenceAnswer, resetPersistenceForTests } from '../../../src/ui/cases/persistence';
 import { harness, unwrap } from '../../store/helpers';
 import { inlineSolver } from './solve';
+import { DEMO_CASES } from '../../../src/kinds/registry';
 
 const pileDemo = DEMO_CASES.find((d) => d.kind === 'pile')!;
 

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_CASES } from '../../../src/forms';
+
 import { resultsToCsv } from '../../../src/share/csv';
-import { caseFromDemo } from '../../../src/ui/state/services';
+import { caseFromDemo } from '../../../src/app/create-case';
 import { csvFileName, csvNumber, resultCsvRows } from '../../../src/ui/cases/results-csv';
 import { solveDoc } from './solve';
+import { DEMO_CASES } from '../../../src/kinds/registry';
 
 const pile = caseFromDemo(DEMO_CASES.find((d) => d.kind === 'pile')!);
 const answer = solveDoc(pile);

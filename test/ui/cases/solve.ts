@@ -1,7 +1,7 @@
 /** Test helpers: a demo case solved the way the app does it (readCase, then the worker's solveCase, in-process). */
-import type { Case } from '../../../src/physics/case';
-import { readCase } from '../../../src/forms/read-case';
-import { solveCase, type CaseAnswer, type CaseRequest } from '../../../src/worker/solve-case';
+import type { Case } from '../../../src/case';
+import { readCase } from '../../../src/app/read-case';
+import { solveCase, type CaseAnswer, type CaseRequest } from '../../../src/app/solve-case';
 import type { Solver } from '../../../src/ui/state/app-model';
 
 export function solveDoc(doc: Case): CaseAnswer {

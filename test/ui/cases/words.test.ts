@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Case } from '../../../src/physics/case';
+import type { Case } from '../../../src/case';
 import {
   LONG_LINK_CHARS,
   copyWords,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { cssString, pageRule } from '../../../src/ui/report/print-header';
 import { inputRows } from '../../../src/ui/report/report-inputs';
-import { FORMS } from '../../../src/forms';
+import { FORMS } from '../../../src/kinds/registry';
 
 describe('running header of the printed record', () => {
   it('a case name with quotes, backslashes or line breaks cannot break out of the CSS string', () => {

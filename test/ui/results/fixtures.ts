@@ -5,7 +5,7 @@
 import type { MemberResult, ModeResult, ZoneResult } from '../../../src/physics/beam/result';
 import { screenResonance } from '../../../src/physics/excitation';
 import type { ScreeningResult } from '../../../src/physics/excitation/results';
-import type { CaseAnswer } from '../../../src/worker/solve-case';
+import type { CaseAnswer } from '../../../src/app/solve-case';
 import { pileCase } from '../../physics/excitation/fixtures';
 
 export type Solved = Extract<CaseAnswer, { ok: true }>;

@@ -9,16 +9,17 @@ vi.mock('preact/hooks', () => ({
   useRef: <T,>(init: T) => ({ current: init }),
 }));
 
-import { DEMO_CASES } from '../../../src/forms';
-import { readCase } from '../../../src/forms/read-case';
-import { createCase } from '../../../src/physics/case';
-import type { Case } from '../../../src/physics/case';
+
+import { readCase } from '../../../src/app/read-case';
+import { createCase } from '../../../src/case';
+import type { Case } from '../../../src/case';
 import { CAUTIONS } from '../../../src/text/cautions';
 import { contentKey, type Results } from '../../../src/ui/state/app-model';
 import { ResultsView } from '../../../src/ui/results/ResultsView';
 import { ReportView } from '../../../src/ui/report/ReportView';
-import { solveCase } from '../../../src/worker/solve-case';
+import { solveCase } from '../../../src/app/solve-case';
 import { renderToText, textOf } from './render-text';
+import { DEMO_CASES } from '../../../src/kinds/registry';
 
 function demo(kind: Case['kind']): { doc: Case; results: Results } {
   const d = DEMO_CASES.find((c) => c.kind === kind)!;

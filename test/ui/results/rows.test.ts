@@ -3,7 +3,7 @@ import { modeCells, modeRows } from '../../../src/ui/results/mode-rows';
 import { addedMassLines, referenceAreas, zoneCells } from '../../../src/ui/results/zone-rows';
 import { displayUnits } from '../../../src/ui/results/display-units';
 import { levelRows, plotLandmarks, stretchRows } from '../../../src/ui/results/landmark-rows';
-import type { MemberBuild } from '../../../src/physics/members/types';
+import type { MemberBuild } from '../../../src/kinds/common/types';
 import { dryMember, wetMember, zone } from './fixtures';
 
 describe('modes table rows', () => {

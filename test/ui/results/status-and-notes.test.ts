@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { statusLine } from '../../../src/ui/results/status';
 import { assumptionLines, beamTheoryText, meshText, tensionText } from '../../../src/ui/results/assumptions';
 import { displayUnits } from '../../../src/ui/results/display-units';
-import type { MemberBuild } from '../../../src/physics/members/types';
+import type { MemberBuild } from '../../../src/kinds/common/types';
 import { dryMember, wetMember } from './fixtures';
 
 describe('status line above the results', () => {

@@ -1,9 +1,10 @@
 import { describe, it, expect } from 'vitest';
-import { FORMS, DEMO_CASES } from '../../../src/forms';
+
 import { sectionFormFromMember } from '../../../src/ui/section/from-member';
 import { readSectionForm } from '../../../src/ui/section/read-form';
 import { solveSection } from '../../../src/physics/section';
 import { expectClose } from '../../helpers/expect-close';
+import { DEMO_CASES, FORMS } from '../../../src/kinds/registry';
 
 function demoModel(kind: 'pile' | 'riser' | 'baffle' | 'stem') {
   const d = DEMO_CASES.find((c) => c.kind === kind)!;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_CASES, FORMS } from '../../../src/forms';
+import { DEMO_CASES, FORMS } from '../../../src/kinds/registry';
 import { solveSection, type SectionInput } from '../../../src/physics/section';
 import { sectionFromMember } from '../../../src/ui/section/from-member';
 import { SECTION_PRESETS } from '../../../src/ui/section/presets';

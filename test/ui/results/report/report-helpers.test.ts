@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { FORMS } from '../../../../src/forms';
-import { excitationFields } from '../../../../src/forms/excitation';
+
 import { inputRows, withUnit } from '../../../../src/ui/report/report-inputs';
 import { formatDateTime } from '../../../../src/ui/report/report-meta';
 import { methodNotes, strouhalSources } from '../../../../src/ui/report/method-notes';
 import { displayUnits } from '../../../../src/ui/results/display-units';
 import { dryMember, pileScreening, wetMember } from '../fixtures';
+import { FORMS, kindOf } from '../../../../src/kinds/registry';
 
 describe('inputs as typed, for the report', () => {
   it('adds the field unit to a bare number and keeps a typed unit', () => {
@@ -40,7 +40,7 @@ describe('inputs as typed, for the report', () => {
   });
 
   it('lists resonance inputs with what an empty field stands for', () => {
-    const rows = inputRows(excitationFields('pile'), { currentSurface: '1.2 m/s', currentMid: '' }, 'si');
+    const rows = inputRows(kindOf('pile').resonance.fields, { currentSurface: '1.2 m/s', currentMid: '' }, 'si');
     const by = new Map(rows.map((r) => [r.key, r.value]));
     expect(by.get('currentSurface')).toBe('1.2 m/s');
     expect(by.get('currentMid')).toBe('empty: same as at the surface');

@@ -1,0 +1,142 @@
+/** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
+import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
+import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
+import { commonInput, tubeInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
+import {
+  BEAM_THEORY_FIELD,
+  CONTENTS_CHOICES,
+  densityField,
+  END_EFFECT_FIELD,
+  heightField,
+  liquidDensityField,
+  materialFields,
+  NON_NEGATIVE,
+  POSITIVE,
+  SEAWATER_HELP,
+  sizeField,
+  yesNoField,
+} from '../../forms/presets';
+import type { Choice, FieldDef } from '../../forms/types';
+
+const END_CHOICES: readonly Choice[] = [
+  { value: 'clamped', label: 'Clamped', help: 'Held in position and rotation.' },
+  { value: 'pinned', label: 'Pinned', help: 'Held in position, free to rotate.' },
+  { value: 'sliding', label: 'Sliding', help: 'Rotation held, free to move sideways.' },
+  { value: 'free', label: 'Free' },
+];
+
+const FIELDS: readonly FieldDef[] = [
+  sizeField('outerDiameter', 'Outer diameter', '273'),
+  sizeField('wallThickness', 'Wall thickness', '12.7'),
+  heightField('length', 'Length, bottom to top', '40', { min: POSITIVE, help: 'All heights on this form are measured up from the bottom end.' }),
+  {
+    key: 'guides',
+    label: 'Guide heights',
+    type: 'quantity-list',
+    dimension: 'length',
+    units: { si: 'm', us: 'ft' },
+    default: '10, 20, 30',
+    min: POSITIVE,
+    optional: true,
+    help: 'Heights of the guides above the bottom end, separated by commas (or semicolons if you use decimal commas). Guides hold the riser sideways and let it rotate.',
+  },
+  { key: 'bottomEnd', label: 'Bottom end', type: 'choice', choices: END_CHOICES, default: 'pinned' },
+  { key: 'topEnd', label: 'Top end', type: 'choice', choices: END_CHOICES, default: 'free' },
+  { key: 'contents', label: 'Contents', type: 'choice', choices: CONTENTS_CHOICES, default: 'oil' },
+  heightField('waterSurface', 'Water surface above the bottom', '30', { help: 'Height of the still water surface above the bottom end.' }),
+  liquidDensityField(1025, SEAWATER_HELP),
+  {
+    key: 'topTension',
+    label: 'Top tension',
+    type: 'quantity',
+    dimension: 'force',
+    units: { si: 'kN', us: 'kip' },
+    default: '0',
+    min: NON_NEGATIVE,
+    help: 'Tension applied at the top, 0 if none.',
+  },
+  sizeField('caissonDiameter', 'Caisson inner diameter', '', {
+    optional: true,
+    emptyMeans: 'no caisson',
+    help: 'If the riser runs inside a caisson or conductor over its submerged length, the water between them is confined.',
+  }),
+  ...materialFields('carbon-steel', { advanced: true }),
+  densityField('contentsDensity', 'Contents density', '', { optional: true, emptyMeans: 'from the contents', presetFrom: 'contents', advanced: true }),
+  sizeField('coatingThickness', 'Coating thickness', '0', { min: NON_NEGATIVE, advanced: true }),
+  densityField('coatingDensity', 'Coating density', '1300', {
+    advanced: true,
+    help: 'Polymer coatings about 900 to 1400 kg/m³, concrete weight coat 2200 to 3000 kg/m³ (common practice).',
+  }),
+  heightField('waterBottom', 'Water from (above the bottom)', '0', { advanced: true, help: 'Lower end of the water around the riser, if it does not start at the bottom end.' }),
+  sizeField('caissonOffset', 'Caisson offset', '0', { min: NON_NEGATIVE, advanced: true, help: 'Distance between the riser and caisson centres.' }),
+  {
+    key: 'caissonOffsetAngle',
+    label: 'Caisson offset direction',
+    type: 'quantity',
+    dimension: 'angle',
+    units: { si: 'deg', us: 'deg' },
+    default: '0',
+    advanced: true,
+    help: 'Angle between the offset and the direction of vibration: 0 = towards the near caisson wall.',
+  },
+  yesNoField('weightInTension', 'Weight changes the tension', 'yes', {
+    advanced: true,
+    help: 'Yes: tension falls from the top by the submerged weight below (compression near the bottom if the top tension is small).',
+  }),
+  END_EFFECT_FIELD,
+  BEAM_THEORY_FIELD,
+];
+
+export const RISER_FORM = defineForm({
+  kind: 'riser',
+  title: 'Riser or conductor',
+  summary: 'A vertical tube held sideways at guides, with chosen conditions at its bottom and top, optionally tensioned or inside a caisson.',
+  fields: FIELDS,
+  toInput(r, err): RiserInput | null {
+    const tube = tubeInput(r, err);
+    const length = r.num('length');
+    const guides = [...r.list('guides')].sort((a, b) => a - b);
+    const high = guides.find((z) => !(z < length));
+    if (high !== undefined) err('guides', `guide heights must be below the top end (${r.fmt('length', length)}); ${r.fmt('guides', high)} is not`);
+    const twice = guides.find((z, i) => i > 0 && z - guides[i - 1] <= 1e-6 * length);
+    if (twice !== undefined) err('guides', `guide heights must differ: ${r.fmt('guides', twice)} appears twice`);
+    const waterBottom = r.num('waterBottom');
+    const waterSurface = r.num('waterSurface');
+    if (!(waterSurface > waterBottom)) err('waterSurface', `the water surface must be above where the water starts (${r.fmt('waterSurface', waterBottom)})`);
+    const coating = r.num('coatingThickness');
+    const dc = r.opt('caissonDiameter');
+    const offset = r.num('caissonOffset');
+    if (dc !== undefined && !(dc > tube.outerDiameterM + 2 * coating + 2 * offset)) {
+      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (${r.fmt('caissonDiameter', tube.outerDiameterM + 2 * coating + 2 * offset)})`);
+    }
+    const bottom = r.choice('bottomEnd') as EndCondition;
+    const top = r.choice('topEnd') as EndCondition;
+    const tension = r.num('topTension');
+    const varies = r.choice('weightInTension') === 'yes';
+    const supports = [...endSupports(bottom, 0), ...guides.map((atM) => ({ atM, kind: 'pinned' as const })), ...endSupports(top, length)];
+    if (leavesRigidBodyMotion(supports, length, tension > 0 && !varies)) {
+      err('bottomEnd', 'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned');
+    }
+    const input: RiserInput = {
+      ...tube,
+      ...commonInput(r),
+      lengthM: length,
+      contentsDensityKgPerM3: r.num('contentsDensity'),
+      guideElevationsM: guides,
+      bottom,
+      top,
+      topTensionN: tension,
+      tensionVariesWithWeight: varies,
+      liquidDensityKgPerM3: r.num('liquidDensity'),
+      liquidFromM: waterBottom,
+      liquidToM: waterSurface,
+    };
+    if (coating > 0) input.coating = { thicknessM: coating, densityKgPerM3: r.num('coatingDensity') };
+    // The angle field reads in radians (SI); the input takes degrees.
+    if (dc !== undefined) input.caisson = { innerDiameterM: dc, offsetM: offset, offsetAngleDeg: (r.num('caissonOffsetAngle') * 180) / Math.PI };
+    return input;
+  },
+  validate: validateRiserInput,
+  buildModel: buildRiserModel,
+});

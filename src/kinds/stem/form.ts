@@ -1,0 +1,84 @@
+/** The sensor stem form: fields, cross-field checks and the mapping to StemInput. */
+import { buildStemModel, type StemInput, validateStemInput } from './build';
+import { commonInput } from '../../forms/common-input';
+import { defineForm } from '../../forms/define';
+import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import type { FieldDef } from '../../forms/types';
+
+const FIELDS: readonly FieldDef[] = [
+  sizeField('insertionLength', 'Insertion length', '250', { help: 'From the support face (pipe or vessel wall, or nozzle weld) to the tip.' }),
+  sizeField('rootDiameter', 'Root diameter', '28'),
+  sizeField('tipDiameter', 'Tip diameter', '22', { help: 'Same as the root diameter for a straight stem.' }),
+  sizeField('boreDiameter', 'Bore diameter', '7', { min: NON_NEGATIVE, help: '0 for a solid bar.' }),
+  ...materialFields('stainless-316'),
+  {
+    key: 'tipMass',
+    label: 'Sensor or tip mass',
+    type: 'quantity',
+    dimension: 'mass',
+    units: { si: 'kg', us: 'lb' },
+    default: '0',
+    min: NON_NEGATIVE,
+  },
+  liquidDensityField(1000, 'Process liquid: water 1000 kg/m³, light oils and fuels about 800 to 850 kg/m³ (common inputs).'),
+  sizeField('surroundingDiameter', 'Surrounding tube inner diameter', '', {
+    optional: true,
+    emptyMeans: 'open liquid',
+    help: 'Only for a tube around the stem and along it (sleeve, stilling well). A pipe the stem crosses does not count: leave empty.',
+  }),
+  {
+    key: 'rootSupport',
+    label: 'Support at the root',
+    type: 'choice',
+    choices: [
+      { value: 'rigid', label: 'Rigid', help: 'Clamped at the support face.' },
+      { value: 'rotational-spring', label: 'Flexible', help: 'Held in position, rotating against a spring (a flexible nozzle or flange).' },
+    ],
+    default: 'rigid',
+  },
+  {
+    key: 'rootStiffness',
+    label: 'Root rotational stiffness',
+    type: 'quantity',
+    dimension: 'rotational-stiffness',
+    units: { si: 'kN m/rad', us: 'lbf ft/rad' },
+    default: '50',
+    min: POSITIVE,
+    showWhen: { key: 'rootSupport', values: ['rotational-spring'] },
+  },
+  END_EFFECT_FIELD,
+  BEAM_THEORY_FIELD,
+];
+
+export const STEM_FORM = defineForm({
+  kind: 'stem',
+  title: 'Sensor stem',
+  summary: 'A cantilever such as a thermowell or probe reaching into a pipe or vessel full of liquid.',
+  fields: FIELDS,
+  toInput(r, err): StemInput | null {
+    const root = r.num('rootDiameter');
+    const tip = r.num('tipDiameter');
+    const bore = r.num('boreDiameter');
+    if (!(bore < Math.min(root, tip))) {
+      err('boreDiameter', `bore must be less than the ${tip <= root ? 'tip' : 'root'} diameter (${r.fmt('boreDiameter', Math.min(root, tip))})`);
+    }
+    const around = r.opt('surroundingDiameter');
+    if (around !== undefined && !(around > Math.max(root, tip))) {
+      err('surroundingDiameter', `surrounding tube inner diameter must be more than the stem's largest diameter (${r.fmt('surroundingDiameter', Math.max(root, tip))})`);
+    }
+    const input: StemInput = {
+      insertionLengthM: r.num('insertionLength'),
+      rootDiameterM: root,
+      tipDiameterM: tip,
+      boreDiameterM: bore,
+      ...commonInput(r),
+      tipMassKg: r.num('tipMass'),
+      liquidDensityKgPerM3: r.num('liquidDensity'),
+      rootSupport: r.choice('rootSupport') === 'rigid' ? { kind: 'rigid' } : { kind: 'rotational-spring', stiffnessNmPerRad: r.num('rootStiffness') },
+    };
+    if (around !== undefined) input.surroundingInnerDiameterM = around;
+    return input;
+  },
+  validate: validateStemInput,
+  buildModel: buildStemModel,
+});
