@@ -7,6 +7,7 @@ import { cautionLines } from '../text/cautions';
 import { runCaseCommand } from './case-command';
 import { runMemberCommand } from './member-command';
 import { runSectionCommand } from './section-command';
+import { runPlateCommand } from './plate-command';
 
 interface Subcommand {
   summary: string;
@@ -17,6 +18,7 @@ interface Subcommand {
 const SUBCOMMANDS: Record<string, Subcommand> = {
   member: { usage: 'member FILE', summary: 'dry and wet modes of a member model (SI JSON)', run: runMemberCommand },
   section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
+  plate: { usage: 'plate FILE', summary: 'dry and wet modes of a plate panel in liquid (SI JSON)', run: runPlateCommand },
   case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
 };
 

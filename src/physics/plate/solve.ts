@@ -13,9 +13,9 @@ import { combineVectors, dominantDryMode, wetModes } from './wet';
 import type { PlateInput, PlateOutcome, PlateResolution, PlateResult, SloshingMode } from './types';
 
 const DEFAULTS: Required<PlateResolution> = {
-  ritzTerms: 12,
-  coupledModes: 24,
-  cellsLongSide: 32,
+  ritzTerms: 10,
+  coupledModes: 16,
+  cellsLongSide: 24,
   tankWidthTerms: 16,
   tankDepthTerms: 144,
   gapTerms: 6,
@@ -146,6 +146,10 @@ export function solvePlate(p: PlateInput, resolution: PlateResolution = {}): Pla
       );
       result.validity.push('Tank width equals the plate width (side edges on the side walls), bottom edge on the floor, walls rigid.');
       result.sloshing = tankSloshing(p);
+      const highest = Math.max(...result.sloshing.map((m) => m.frequencyHz));
+      if (fine.wetHz[0] < 3 * highest) {
+        result.notes.push(`The lowest wet frequency is less than three times the sloshing frequencies listed (up to ${highest.toPrecision(3)} Hz): the free surface is no longer a pressure-release surface there; treat the wet frequencies as rough.`);
+      }
     }
   }
   return { ok: true, result };

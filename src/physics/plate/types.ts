@@ -47,11 +47,11 @@ export interface PlateInput {
 
 /** Numerical resolution; defaults are what the app and command line use. */
 export interface PlateResolution {
-  /** Ritz polynomial terms per direction (default 12): (terms)² unknowns. */
+  /** Ritz polynomial terms per direction (default 10): (terms)² unknowns. */
   ritzTerms?: number;
-  /** Dry modes kept as coordinates of the wet problem (default 24, at most terms²). */
+  /** Dry modes kept as coordinates of the wet problem (default 16, at least modes + 6, at most terms²). */
   coupledModes?: number;
-  /** Wall panel: quadrature cells along the plate's longer side (default 32). */
+  /** Wall panel: quadrature cells along the plate's longer side (default 24). */
   cellsLongSide?: number;
   /** Across tank: Fourier terms across the width and down the depth (default 16 and 144), gap functions (default 6; keep depth terms ≈ 24 × gap terms, a mode-matching convergence rule). */
   tankWidthTerms?: number;
