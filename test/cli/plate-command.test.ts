@@ -40,7 +40,7 @@ describe('wetmode plate', () => {
   it('a wrong edge condition names the field and exits 1', () => {
     const bad = JSON.parse(readFileSync(EXAMPLE, 'utf8'));
     bad.edges.top = 'welded';
-    expect(() => runPlateCommand(JSON.stringify(bad))).toThrow('edges.top must be one of "clamped", "simply-supported", "free", got "welded"');
+    expect(() => runPlateCommand(JSON.stringify(bad))).toThrow('edges.top must be one of "clamped", "simply-supported", "free" or { "rotationalSpringNmPerRadPerM": k }, got "welded"');
     expect(() => runPlateCommand('{ nope')).toThrow(/plate file is not valid JSON/);
   });
 

@@ -8,6 +8,7 @@
  * Cholesky factor of their Gram matrix, which keeps the plate mass matrix the identity and the
  * conditioning of high orders in hand.
  */
+import { choleskyInPlace } from './cholesky';
 import { gaussLegendre, legendreInto } from './gauss';
 import type { EdgeCondition } from './types';
 
@@ -95,18 +96,7 @@ export function makeBasis(count: number, lengthM: number, start: EdgeCondition, 
     }
   }
   // Cholesky G = L Lᵀ in place (lower triangle), then T = L⁻¹ by forward substitution.
-  for (let j = 0; j < count; j++) {
-    let d = l[j * count + j];
-    for (let k = 0; k < j; k++) d -= l[j * count + k] ** 2;
-    if (!(d > 1e-13 * l[j * count + j])) return null;
-    const ljj = Math.sqrt(d);
-    l[j * count + j] = ljj;
-    for (let i = j + 1; i < count; i++) {
-      let s = l[i * count + j];
-      for (let k = 0; k < j; k++) s -= l[i * count + k] * l[j * count + k];
-      l[i * count + j] = s / ljj;
-    }
-  }
+  if (!choleskyInPlace(l, count, 1e-13)) return null;
   const t = new Float64Array(count * count);
   for (let c = 0; c < count; c++) {
     for (let i = c; i < count; i++) {
@@ -137,15 +127,18 @@ export function sampleBasis(b: Basis1D, x: Float64Array): BasisSamples {
   return out;
 }
 
-/** ∫_0^L f_k g_l dx over the quadrature, row-major count×count, for sampled f and g (e.g. d2 and v). */
-export function integralMatrix(f: Float64Array, g: Float64Array, w: Float64Array, count: number): Float64Array {
+/**
+ * ∫ f_k g_m dx over a quadrature (weights w), row-major rows × cols, for sampled f (rows × points) and
+ * g (cols × points), e.g. second derivatives against values, or basis functions against a Fourier series.
+ */
+export function integralMatrix(f: Float64Array, rows: number, g: Float64Array, cols: number, w: Float64Array): Float64Array {
   const n = w.length;
-  const out = new Float64Array(count * count);
-  for (let k = 0; k < count; k++) {
-    for (let l = 0; l < count; l++) {
+  const out = new Float64Array(rows * cols);
+  for (let k = 0; k < rows; k++) {
+    for (let m = 0; m < cols; m++) {
       let s = 0;
-      for (let q = 0; q < n; q++) s += w[q] * f[k * n + q] * g[l * n + q];
-      out[k * count + l] = s;
+      for (let q = 0; q < n; q++) s += w[q] * f[k * n + q] * g[m * n + q];
+      out[k * cols + m] = s;
     }
   }
   return out;

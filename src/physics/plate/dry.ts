@@ -5,10 +5,13 @@
  *   U = D/2 ∫∫ [w_xx² + w_yy² + 2ν w_xx w_yy + 2(1 − ν) w_xy²] dA,  D = E h³ / (12 (1 − ν²)),
  * kinetic energy T = ρh/2 ∫∫ ẇ² dA. The energy separates into one-direction integrals, so K is a sum of
  * Kronecker products; the orthonormal bases make M = ρh·I and the problem a standard symmetric one.
+ * A rotational edge spring k_r adds k_r/2 ∫ (∂w/∂n)² ds along its edge (Leissa, NASA SP-160, §4.4 on elastically
+ * restrained edges).
  */
 import { denseSymmetricEigen } from '../linalg/eigen-dense';
 import { basisQuadrature, integralMatrix, makeBasis, sampleBasis } from './basis';
 import type { Basis1D } from './basis';
+import { edgeSpring, geometricCondition } from './types';
 import type { PlateInput } from './types';
 
 export interface DryModes {
@@ -32,16 +35,17 @@ function directionMatrices(b: Basis1D) {
   const { x, w } = basisQuadrature(b.count, b.lengthM);
   const s = sampleBasis(b, x);
   return {
-    e22: integralMatrix(s.d2, s.d2, w, b.count),
-    e20: integralMatrix(s.d2, s.v, w, b.count),
-    e11: integralMatrix(s.d1, s.d1, w, b.count),
+    e22: integralMatrix(s.d2, b.count, s.d2, b.count, w),
+    e20: integralMatrix(s.d2, b.count, s.v, b.count, w),
+    e11: integralMatrix(s.d1, b.count, s.d1, b.count, w),
   };
 }
 
 /** All Ritz modes with `terms` functions per direction. */
 export function dryModes(p: PlateInput, terms: number): DryOutcome {
-  const bx = makeBasis(terms, p.widthM, p.edges.left, p.edges.right);
-  const by = makeBasis(terms, p.heightM, p.edges.bottom, p.edges.top);
+  const e = p.edges;
+  const bx = makeBasis(terms, p.widthM, geometricCondition(e.left), geometricCondition(e.right));
+  const by = makeBasis(terms, p.heightM, geometricCondition(e.bottom), geometricCondition(e.top));
   if (!bx || !by) return { ok: false, reason: 'basis-ill-conditioned', message: `the plate basis of ${terms} terms per direction is numerically singular; use fewer terms` };
   const X = directionMatrices(bx);
   const Y = directionMatrices(by);
@@ -74,9 +78,36 @@ export function dryModes(p: PlateInput, terms: number): DryOutcome {
       }
     }
   }
+  addEdgeSprings(k, bx, by, [edgeSpring(e.left), edgeSpring(e.right)], [edgeSpring(e.bottom), edgeSpring(e.top)], 1 / (p.densityKgPerM3 * p.thicknessM));
   const eig = denseSymmetricEigen(k, n);
   if (!eig.ok) return { ok: false, reason: 'not-converged', message: 'the dense eigen-solver did not converge on the plate stiffness' };
   return { ok: true, modes: { bx, by, n, omega2: eig.values, vectors: eig.vectors } };
+}
+
+/**
+ * Edge springs: k_r X_i′(edge) X_a′(edge) δ_jb for the left and right edges (k_r Y_j′ Y_b′ δ_ia for bottom and
+ * top), the δ from the orthonormal basis along the edge; scaled by 1/(ρh) like the rest of K.
+ */
+function addEdgeSprings(k: Float64Array, bx: Basis1D, by: Basis1D, kx: number[], ky: number[], scale: number): void {
+  const nx = bx.count;
+  const ny = by.count;
+  const n = nx * ny;
+  const sx = sampleBasis(bx, Float64Array.of(0, bx.lengthM));
+  const sy = sampleBasis(by, Float64Array.of(0, by.lengthM));
+  for (let end = 0; end < 2; end++) {
+    if (kx[end] > 0) {
+      for (let i = 0; i < nx; i++) for (let a = 0; a < nx; a++) {
+        const v = scale * kx[end] * sx.d1[i * 2 + end] * sx.d1[a * 2 + end];
+        for (let j = 0; j < ny; j++) k[(i * ny + j) * n + a * ny + j] += v;
+      }
+    }
+    if (ky[end] > 0) {
+      for (let j = 0; j < ny; j++) for (let b = 0; b < ny; b++) {
+        const v = scale * ky[end] * sy.d1[j * 2 + end] * sy.d1[b * 2 + end];
+        for (let i = 0; i < nx; i++) k[(i * ny + j) * n + i * ny + b] += v;
+      }
+    }
+  }
 }
 
 /**

@@ -2,9 +2,11 @@
 export { parsePlateInput, MAX_PLATE_MODES } from './validate';
 export { solvePlate } from './solve';
 export { sloshingFrequencyHz, STANDARD_GRAVITY } from './sloshing';
-export { EDGE_CONDITIONS } from './types';
+export { EDGE_CONDITIONS, edgeSpring, geometricCondition } from './types';
 export type {
   EdgeCondition,
+  EdgeSpring,
+  EdgeSupport,
   LiquidSetting,
   PlateEdges,
   PlateErrorEstimate,

@@ -17,7 +17,8 @@
  * u ~ (z − b)^(−1/2) of flow round a sharp edge, and eliminated by a Galerkin Schur complement:
  *   M_a = ρ [Z_ww − Z_wu Z_uu⁻¹ Z_uw].
  */
-import { sampleBasis } from './basis';
+import { integralMatrix, sampleBasis } from './basis';
+import { choleskyInPlace, choleskySolveInPlace } from './cholesky';
 import type { Basis1D } from './basis';
 import { gaussLegendre, legendreInto } from './gauss';
 
@@ -51,49 +52,6 @@ function composite(lo: number, hi: number, panels: number): { x: Float64Array; w
   return { x, w };
 }
 
-/** ∫ f_k(x) g_m(x) dx for sampled basis functions f (count × pts) and trigonometric g (terms × pts). */
-function project(f: Float64Array, count: number, g: Float64Array, terms: number, w: Float64Array): Float64Array {
-  const n = w.length;
-  const out = new Float64Array(count * terms);
-  for (let k = 0; k < count; k++) {
-    for (let m = 0; m < terms; m++) {
-      let s = 0;
-      for (let q = 0; q < n; q++) s += w[q] * f[k * n + q] * g[m * n + q];
-      out[k * terms + m] = s;
-    }
-  }
-  return out;
-}
-
-/** Solves S x = r in place for symmetric positive definite S (row-major q × q); false if not SPD. */
-function choleskySolveMany(s: Float64Array, q: number, rhs: Float64Array, cols: number): boolean {
-  for (let j = 0; j < q; j++) {
-    let d = s[j * q + j];
-    for (let k = 0; k < j; k++) d -= s[j * q + k] ** 2;
-    if (!(d > 0)) return false;
-    const l = Math.sqrt(d);
-    s[j * q + j] = l;
-    for (let i = j + 1; i < q; i++) {
-      let t = s[i * q + j];
-      for (let k = 0; k < j; k++) t -= s[i * q + k] * s[j * q + k];
-      s[i * q + j] = t / l;
-    }
-  }
-  for (let c = 0; c < cols; c++) {
-    for (let i = 0; i < q; i++) {
-      let t = rhs[i * cols + c];
-      for (let k = 0; k < i; k++) t -= s[i * q + k] * rhs[k * cols + c];
-      rhs[i * cols + c] = t / s[i * q + i];
-    }
-    for (let i = q - 1; i >= 0; i--) {
-      let t = rhs[i * cols + c];
-      for (let k = i + 1; k < q; k++) t -= s[k * q + i] * rhs[k * cols + c];
-      rhs[i * cols + c] = t / s[i * q + i];
-    }
-  }
-  return true;
-}
-
 /**
  * Added-mass matrix (kg) on `count` plate shapes given as Ritz coefficients (`vectors`, mode k at
  * [k·bx.count·by.count …)), bases bx along the width and by up the height. null if the gap system is singular.
@@ -109,13 +67,13 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   const qx = composite(0, a, Math.max(2, Math.ceil((nx + M) / 6)));
   const cosG = new Float64Array(M * qx.x.length);
   for (let m = 0; m < M; m++) for (let q = 0; q < qx.x.length; q++) cosG[m * qx.x.length + q] = Math.cos((m * Math.PI * qx.x[q]) / a);
-  const px = project(sampleBasis(bx, qx.x).v, nx, cosG, M, qx.w);
+  const px = integralMatrix(sampleBasis(bx, qx.x).v, nx, cosG, M, qx.w);
   const gamma = new Float64Array(N);
   for (let n = 0; n < N; n++) gamma[n] = ((2 * n + 1) * Math.PI) / (2 * d);
   const qy = composite(0, wet, Math.max(2, Math.ceil((ny + N) / 6)));
-  const sinG = new Float64Array(N * qy.x.length);
-  for (let n = 0; n < N; n++) for (let q = 0; q < qy.x.length; q++) sinG[n * qy.x.length + q] = Math.cos(gamma[n] * qy.x[q]);
-  const py = project(sampleBasis(by, qy.x).v, ny, sinG, N, qy.w);
+  const cosZ = new Float64Array(N * qy.x.length);
+  for (let n = 0; n < N; n++) for (let q = 0; q < qy.x.length; q++) cosZ[n * qy.x.length + q] = Math.cos(gamma[n] * qy.x[q]);
+  const py = integralMatrix(sampleBasis(by, qy.x).v, ny, cosZ, N, qy.w);
   // Modal projections P[i][m·N + n] = Σ_kl c_kl Px[k, m] Py[l, n].
   const P = new Float64Array(count * M * N);
   const tmp = new Float64Array(nx * N);
@@ -183,7 +141,8 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
         }
       }
       const X = Float64Array.from(R);
-      if (!choleskySolveMany(S, Q, X, count)) return null;
+      if (!choleskyInPlace(S, Q)) return null;
+      choleskySolveInPlace(S, Q, X, count);
       for (let i = 0; i < count; i++) for (let j = 0; j <= i; j++) {
         let s = 0;
         for (let p = 0; p < Q; p++) s += R[p * count + i] * X[p * count + j];

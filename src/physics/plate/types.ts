@@ -7,11 +7,29 @@
 export type EdgeCondition = 'clamped' | 'simply-supported' | 'free';
 export const EDGE_CONDITIONS: readonly EdgeCondition[] = ['clamped', 'simply-supported', 'free'];
 
+/** An edge held against deflection and restrained in rotation by a spring, N·m per radian per metre of edge. */
+export interface EdgeSpring {
+  rotationalSpringNmPerRadPerM: number;
+}
+
+/** Ideal edge, or a simply supported edge with a rotational spring (0: simply supported; very stiff: clamped). */
+export type EdgeSupport = EdgeCondition | EdgeSpring;
+
 export interface PlateEdges {
-  left: EdgeCondition;
-  right: EdgeCondition;
-  bottom: EdgeCondition;
-  top: EdgeCondition;
+  left: EdgeSupport;
+  right: EdgeSupport;
+  bottom: EdgeSupport;
+  top: EdgeSupport;
+}
+
+/** The ideal condition the trial functions enforce on an edge (a spring edge is held against deflection only). */
+export function geometricCondition(e: EdgeSupport): EdgeCondition {
+  return typeof e === 'string' ? e : 'simply-supported';
+}
+
+/** Rotational spring stiffness of an edge (N·m/rad per m), 0 for the ideal conditions. */
+export function edgeSpring(e: EdgeSupport): number {
+  return typeof e === 'string' ? 0 : e.rotationalSpringNmPerRadPerM;
 }
 
 export type LiquidSetting = 'wall-panel' | 'across-tank';

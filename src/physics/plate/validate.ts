@@ -3,8 +3,8 @@
  * clean copy of known fields. Every message names the field, what was expected and what was got; a bad
  * input throws a RangeError (numerical failure later is a typed result instead).
  */
-import { EDGE_CONDITIONS } from './types';
-import type { EdgeCondition, PlateEdges, PlateInput, PlateLiquid } from './types';
+import { EDGE_CONDITIONS, geometricCondition } from './types';
+import type { EdgeSupport, PlateEdges, PlateInput, PlateLiquid } from './types';
 
 export const MAX_PLATE_MODES = 20;
 
@@ -39,12 +39,17 @@ function num(o: Obj, key: string, path: string, expected: string, ok: (x: number
 
 const POSITIVE = 'a finite number > 0';
 
-function edge(o: Obj, key: keyof PlateEdges): EdgeCondition {
+function edge(o: Obj, key: keyof PlateEdges): EdgeSupport {
   const v = o[key];
-  if (typeof v !== 'string' || !(EDGE_CONDITIONS as readonly string[]).includes(v)) {
-    fail(`edges.${key}`, `one of ${EDGE_CONDITIONS.map((c) => `"${c}"`).join(', ')}`, v);
+  const path = `edges.${key}`;
+  if (typeof v === 'object' && v !== null && !Array.isArray(v)) {
+    const s = object(v, path, ['rotationalSpringNmPerRadPerM']);
+    return { rotationalSpringNmPerRadPerM: num(s, 'rotationalSpringNmPerRadPerM', path, 'a finite number ≥ 0 (N·m per radian per metre of edge)', (x) => x >= 0) };
   }
-  return v as EdgeCondition;
+  if (typeof v !== 'string' || !(EDGE_CONDITIONS as readonly string[]).includes(v)) {
+    fail(path, `one of ${EDGE_CONDITIONS.map((c) => `"${c}"`).join(', ')} or { "rotationalSpringNmPerRadPerM": k }`, v);
+  }
+  return v as EdgeSupport;
 }
 
 function liquid(v: unknown, heightM: number): PlateLiquid {
@@ -76,12 +81,12 @@ export function parsePlateInput(raw: unknown): PlateInput {
   if (thicknessM > shortSide / 5) fail('thicknessM', `at most a fifth of the shorter side (${shortSide / 5} m) for thin-plate theory`, thicknessM);
   const e = object(o.edges, 'edges', ['left', 'right', 'bottom', 'top']);
   const edges: PlateEdges = { left: edge(e, 'left'), right: edge(e, 'right'), bottom: edge(e, 'bottom'), top: edge(e, 'top') };
-  const all = [edges.left, edges.right, edges.bottom, edges.top];
+  const all = [edges.left, edges.right, edges.bottom, edges.top].map(geometricCondition);
   const clamped = all.filter((c) => c === 'clamped').length;
   const supported = all.filter((c) => c === 'simply-supported').length;
   if (clamped === 0 && supported < 2) {
     throw new RangeError(
-      `edges must hold the plate: at least one edge "clamped" or two "simply-supported", got ${all.map((c) => `"${c}"`).join(', ')} (left, right, bottom, top) — the plate could move as a rigid body`,
+      `edges must hold the plate: at least one edge "clamped" or two "simply-supported" (or spring-restrained), got ${all.map((c) => `"${c}"`).join(', ')} (left, right, bottom, top) — the plate could move as a rigid body`,
     );
   }
   const input: PlateInput = {

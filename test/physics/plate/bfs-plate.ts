@@ -57,23 +57,31 @@ export interface BfsPlate {
   heightM: number;
   poissonRatio: number;
   edges: { left: EdgeCondition; right: EdgeCondition; bottom: EdgeCondition; top: EdgeCondition };
+  /** Rotational edge springs in units of the plate rigidity D per metre (k_r / D, 1/m), on edges given as simply supported. */
+  springs?: { left?: number; right?: number; bottom?: number; top?: number };
 }
 
 /** Lowest `count` non-dimensional λ = ω a² √(ρh/D) (a = width) on an elements × elements mesh. */
 export function bfsLambdas(p: BfsPlate, elements: number, count: number): number[] {
   const n1 = 2 * (elements + 1);
-  const dir = (L: number, s: EdgeCondition, e: EdgeCondition) => {
+  const dir = (L: number, s: EdgeCondition, e: EdgeCondition, k0 = 0, k1 = 0) => {
     const keep = kept(elements, s, e);
+    // A rotational spring acts on the end slope w′ (the second degree of freedom of an end node).
+    const spring = new Float64Array(n1 * n1);
+    spring[1 * n1 + 1] = k0;
+    spring[(n1 - 1) * n1 + n1 - 1] = k1;
     return {
       k: keep.length,
+      spring: restrict(spring, n1, keep),
       m00: restrict(assemble1d(L, elements, 0, 0), n1, keep),
       m22: restrict(assemble1d(L, elements, 2, 2), n1, keep),
       m20: restrict(assemble1d(L, elements, 2, 0), n1, keep),
       m11: restrict(assemble1d(L, elements, 1, 1), n1, keep),
     };
   };
-  const X = dir(p.widthM, p.edges.left, p.edges.right);
-  const Y = dir(p.heightM, p.edges.bottom, p.edges.top);
+  const sp = p.springs ?? {};
+  const X = dir(p.widthM, p.edges.left, p.edges.right, sp.left, sp.right);
+  const Y = dir(p.heightM, p.edges.bottom, p.edges.top, sp.bottom, sp.top);
   const n = X.k * Y.k;
   const K = new Float64Array(n * n);
   const M = new Float64Array(n * n);
@@ -85,7 +93,7 @@ export function bfsLambdas(p: BfsPlate, elements: number, count: number): number
     const bj = b * Y.k + j;
     // Unit D and ρh: λ² = ω² a⁴ (ρh/D).
     K[(i * Y.k + j) * n + a * Y.k + b] =
-      X.m22[ia] * Y.m00[jb] + X.m00[ia] * Y.m22[jb] + nu * (X.m20[ia] * Y.m20[bj] + X.m20[ai] * Y.m20[jb]) + 2 * (1 - nu) * X.m11[ia] * Y.m11[jb];
+      X.m22[ia] * Y.m00[jb] + X.m00[ia] * Y.m22[jb] + X.spring[ia] * Y.m00[jb] + X.m00[ia] * Y.spring[jb] + nu * (X.m20[ia] * Y.m20[bj] + X.m20[ai] * Y.m20[jb]) + 2 * (1 - nu) * X.m11[ia] * Y.m11[jb];
     M[(i * Y.k + j) * n + a * Y.k + b] = X.m00[ia] * Y.m00[jb];
   }
   const eig = denseGeneralizedEigen(K, M, n);

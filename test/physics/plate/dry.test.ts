@@ -100,6 +100,25 @@ describe('dry modes of rectangular plates by Rayleigh–Ritz', () => {
     }
   }, 60_000);
 
+  it('a rotational edge spring runs from simply supported (no spring) to clamped (very stiff) and matches the finite-element cross-check between', () => {
+    const base = plate(1, C, S, C, S);
+    const D = flexuralRigidity(base);
+    const withSpring = (kOverD: number) => ({ ...base, edges: { ...base.edges, bottom: { rotationalSpringNmPerRadPerM: kOverD * D }, top: { rotationalSpringNmPerRadPerM: kOverD * D } } });
+    // Limits (classical: the spring term k_r/2 ∫ w_n² ds vanishes, or forces w_n → 0): SCSC rotated (28.951, Leissa
+    // 1973, from memory) and CCCC (35.992, Leissa 1973, from memory).
+    expectClose(lambdas(withSpring(0), 1)[0], lambdas(base, 1)[0], { rtol: 1e-12, label: 'no spring = simply supported' });
+    expectClose(lambdas(withSpring(0), 1)[0], 28.951, { rtol: 0.005, label: 'no spring vs Leissa SCSC' });
+    // k_r a / D = 1e5 leaves an edge slope ~1e-5 of the clamped moment (≪ 0.1 %); Leissa's value sits ~0.02 % above
+    // the converged one: 0.15 %.
+    expectClose(lambdas(withSpring(1e5), 1)[0], 35.992, { rtol: 0.0015, label: 'stiff spring vs Leissa CCCC' });
+    const mid = lambdas(withSpring(10), 2);
+    const bfs = bfsExtrapolated({ ...base, springs: { bottom: 10, top: 10 } }, 4, 2);
+    // Cross-check (BFS elements with the same spring on the edge slope degrees of freedom): 0.2 %.
+    mid.forEach((g, i) => expectClose(g, bfs[i], { rtol: 0.002, label: `k_r a/D = 10, mode ${i + 1}` }));
+    expect(mid[0]).toBeGreaterThan(28.951);
+    expect(mid[0]).toBeLessThan(35.992);
+  }, 30_000);
+
   it('turning a plate a quarter turn leaves its frequencies unchanged', () => {
     const a = dryModes(plate(2, C, S, F, C), 12);
     const b = dryModes({ ...plate(0.5, C, S, F, C), widthM: 1, heightM: 2, edges: { left: S, right: C, bottom: F, top: C } }, 12);

@@ -15,7 +15,8 @@ describe('plate input validation names the field, what was expected and what was
   });
   it('each bad field is named in the message', () => {
     const bad = (patch: object) => () => parsePlateInput({ ...good, ...patch });
-    expect(bad({ edges: { ...good.edges, top: 'hinged' } })).toThrow('edges.top must be one of "clamped", "simply-supported", "free", got "hinged"');
+    expect(bad({ edges: { ...good.edges, top: 'hinged' } })).toThrow('edges.top must be one of "clamped", "simply-supported", "free" or { "rotationalSpringNmPerRadPerM": k }, got "hinged"');
+    expect(bad({ edges: { ...good.edges, top: { rotationalSpringNmPerRadPerM: -1 } } })).toThrow('edges.top.rotationalSpringNmPerRadPerM must be a finite number ≥ 0');
     expect(bad({ widthM: -1 })).toThrow('widthM must be a finite number > 0, got -1');
     expect(bad({ poissonRatio: 0.5 })).toThrow('poissonRatio must be a finite number from 0 to below 0.5, got 0.5');
     expect(bad({ thicknessM: 0.5 })).toThrow(/thicknessM must be at most a fifth of the shorter side \(0\.2 m\)/);
