@@ -7,7 +7,7 @@
  * 1D degrees of freedom: clamped w and w′, simply supported w, free none. Eigenvalue error O(h⁴).
  */
 import { denseGeneralizedEigen } from '../../../src/physics/linalg/eigen-dense';
-import type { EdgeCondition } from '../../../src/physics/plate/types';
+import type { EdgeCondition, PlateEdges } from '../../../src/physics/plate/types';
 
 /** Hermite cubics on [0, h] and derivatives at s ∈ [0, 1]: [N1 (w0), N2 (w0′), N3 (w1), N4 (w1′)]. */
 function hermite(s: number, h: number, d: number): number[] {
@@ -56,7 +56,8 @@ export interface BfsPlate {
   widthM: number;
   heightM: number;
   poissonRatio: number;
-  edges: { left: EdgeCondition; right: EdgeCondition; bottom: EdgeCondition; top: EdgeCondition };
+  /** Ideal edges only; give rotational springs through `springs` on edges marked simply supported. */
+  edges: PlateEdges;
   /** Rotational edge springs in units of the plate rigidity D per metre (k_r / D, 1/m), on edges given as simply supported. */
   springs?: { left?: number; right?: number; bottom?: number; top?: number };
 }
@@ -80,8 +81,13 @@ export function bfsLambdas(p: BfsPlate, elements: number, count: number): number
     };
   };
   const sp = p.springs ?? {};
-  const X = dir(p.widthM, p.edges.left, p.edges.right, sp.left, sp.right);
-  const Y = dir(p.heightM, p.edges.bottom, p.edges.top, sp.bottom, sp.top);
+  const ideal = (e: PlateEdges[keyof PlateEdges]): EdgeCondition => {
+    if (typeof e !== 'string') throw new Error('bfsLambdas: give edge springs through `springs`, in units of D');
+    return e;
+  };
+  const edges = { left: ideal(p.edges.left), right: ideal(p.edges.right), bottom: ideal(p.edges.bottom), top: ideal(p.edges.top) };
+  const X = dir(p.widthM, edges.left, edges.right, sp.left, sp.right);
+  const Y = dir(p.heightM, edges.bottom, edges.top, sp.bottom, sp.top);
   const n = X.k * Y.k;
   const K = new Float64Array(n * n);
   const M = new Float64Array(n * n);
