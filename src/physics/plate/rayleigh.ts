@@ -9,13 +9,19 @@
  * midpoint rule for far ones; the outer integral by the midpoint rule.
  * A parallel rigid wall at distance L closes the liquid: Neumann images at heights 2nL (n = ±1, ±2, …), each
  * pair regularised by subtracting its far-field value 2/(2nL) so the series converges (terms ~ r²/n³). The
- * subtraction fixes the layer potential's free constant; see `IMAGE_NOTE`.
+ * layer's Neumann Green's function is defined only up to a constant, which prices the motion that displaces
+ * volume along the gap: far from the source the regularised sum behaves as (1/2πL) ln(4e^(−γ)L / r) (γ Euler's
+ * constant; Euler–Maclaurin on Σ 1/√(n² + x²) − 1/n), i.e. as if the layer drained at r = 2.25 L. The constant
+ * (1/2πL) ln(R / 2.25 L) moves that drain to R = max(2.25 L, panel diagonal); see `IMAGE_NOTE`.
  */
 
 export const IMAGE_NOTE =
   'Closing wall by the method of images (Neumann images at 2nL), each image pair less its far-field constant so the series converges; ' +
-  'this treats the layer as draining at a lateral distance of the order of the reach. A volume-displacing motion in a narrow gap of a ' +
-  'closed tank would meet more added mass than this.';
+  'liquid pushed along the gap is taken to escape (to open liquid or a free surface) at one panel diagonal or 2.25 reaches from the panel, ' +
+  'whichever is larger. Where the gap is closed further out, a motion that displaces volume meets more added mass than this.';
+
+/** 4 e^(−γ): the regularised image sum vanishes at r = this × L (γ = Euler's constant 0.5772…). */
+const DRAIN_FACTOR = 4 * Math.exp(-0.5772156649015329);
 
 /** ∫_0^X ∫_0^Y dx dy / √(x² + y² + z²) for X, Y, z ≥ 0 (vanishes when X or Y is 0). */
 function quadrantIntegral(X: number, Y: number, z: number): number {
@@ -53,6 +59,7 @@ export function influenceTable(gx: number, gy: number, dx: number, dy: number, r
   const t = new Float64Array(gx * gy);
   const diag = Math.hypot(gx * dx, gy * dy);
   const images = reachM === undefined ? 0 : Math.min(4000, Math.ceil((30 * diag) / (2 * reachM)));
+  const drain = reachM === undefined ? 0 : ((dx * dy) / (2 * Math.PI * reachM)) * Math.log(Math.max(1, diag / (DRAIN_FACTOR * reachM)));
   for (let di = 0; di < gx; di++) {
     for (let dj = 0; dj < gy; dj++) {
       let s = cellInfluence(di, dj, dx, dy, 0);
@@ -65,7 +72,7 @@ export function influenceTable(gx: number, gy: number, dx: number, dy: number, r
         // Tail n > N: 2[1/√(r² + z²) − 1/z] ≈ −r²/z³, summed ≈ −r² / (8 L³ · 2N²), times dA/2π.
         s -= ((dx * dy) / (2 * Math.PI)) * (r2 / (8 * reachM ** 3 * 2 * images * images));
       }
-      t[di * gy + dj] = s;
+      t[di * gy + dj] = s + drain;
     }
   }
   return t;
