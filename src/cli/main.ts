@@ -9,6 +9,7 @@ import { runCaseCommand } from './case-command';
 import { runMemberCommand } from './member-command';
 import { runSectionCommand } from './section-command';
 import { runSpectrumCommand } from './spectrum-command';
+import { runPlateCommand } from './plate-command';
 
 interface Subcommand {
   summary: string;
@@ -19,6 +20,7 @@ interface Subcommand {
 const SUBCOMMANDS: Record<string, Subcommand> = {
   member: { usage: 'member FILE', summary: 'dry and wet modes of a member model (SI JSON)', run: runMemberCommand },
   section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
+  plate: { usage: 'plate FILE', summary: 'dry and wet modes of a plate panel in liquid (SI JSON)', run: runPlateCommand },
   case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
   spectrum: { usage: 'spectrum FILE', summary: 'peaks of a motion record (CSV or text: time s, 1 to 3 accelerations)', run: runSpectrumCommand },
   calibrate: { usage: 'calibrate FILE', summary: 'back-calculate one unknown input from a measured frequency', run: runCalibrateCommand },
