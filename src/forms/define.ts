@@ -5,6 +5,7 @@
 import type { MemberBuild, MemberInputs, MemberKind } from '../physics/members';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
+import { guardedBuild } from './total-build';
 import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm } from './types';
 
 export interface FormSpec<K extends MemberKind> {
@@ -81,7 +82,11 @@ export function defineForm<K extends MemberKind>(spec: FormSpec<K>): MemberForm<
     buildModel: spec.buildModel,
     build(values, system) {
       const r = form.toInput(values, system);
-      return r.ok ? { ok: true, input: r.input, build: spec.buildModel(r.input) } : r;
+      if (!r.ok) return r;
+      const input = r.input;
+      // Never throws, and never passes on a non-finite number: see total-build.ts.
+      const b = guardedBuild(fields, () => readFields(fields, values, system).read, () => spec.buildModel(input));
+      return b.ok ? { ok: true, input, build: b.build } : b;
     },
     convertValues(values, from, to) {
       return convertFieldValues(fields, values, from, to);
