@@ -1,35 +1,121 @@
-/** The draft: the one case being edited, kept on every change so a closed tab, an update or a crash loses nothing. */
-import type { Draft } from './api';
-import { checkIncoming, failWith, inTx, type StoreContext } from './context';
-import { DRAFT, DRAFT_KEY, type DraftRecord } from './db-schema';
+/**
+ * Drafts: the case each tab is editing, kept on every change so a closed tab, a reload, an update or a crash
+ * loses nothing. One draft per tab and case (`TabDraftRecord`), so two tabs never overwrite each other's work;
+ * a tab keeps one draft at a time (opening another case replaces it). Drafts of tabs that were closed stay until
+ * they are opened again or discarded. A draft that cannot be read is listed (so it can be discarded) and is
+ * never handed out as "the tab's draft": it can never stop the app from starting.
+ */
+import type { Draft, DraftList } from './api';
+import { checkIncoming, failWith, inTx, type StoreContext, type Tx } from './context';
+import { DRAFTS, draftKey, type TabDraftRecord } from './db-schema';
 import type { StoreResult } from './errors';
 import { isPlainObject, parseCase, type Case } from '../physics/case';
 
-export function saveDraft(ctx: StoreContext, draft: Case): Promise<StoreResult<Draft>> {
+/** Reads a raw draft record: the draft, or why it cannot be read. */
+function readDraft(raw: unknown): { ok: true; draft: Draft } | { ok: false; key: string; tab: string; message: string } {
+  const rec = isPlainObject(raw) ? (raw as Partial<TabDraftRecord>) : {};
+  const key = typeof rec.key === 'string' ? rec.key : '?';
+  const tab = typeof rec.tab === 'string' ? rec.tab : '?';
+  if (typeof rec.savedAt !== 'string') return { ok: false, key, tab, message: 'this kept draft is not in a form this Wetmode can read' };
+  const r = parseCase(rec.case);
+  if (!r.ok) return { ok: false, key, tab, message: `this kept draft cannot be read (${r.message})` };
+  const base = typeof rec.baseRevision === 'number' && Number.isSafeInteger(rec.baseRevision) ? rec.baseRevision : null;
+  return { ok: true, draft: { key, tab, case: r.value, savedAt: rec.savedAt, baseRevision: base } };
+}
+
+async function allRecords(tx: Tx): Promise<unknown[]> {
+  return (await tx.objectStore(DRAFTS).getAll()) as unknown[];
+}
+
+/** Deletes the drafts of `tab` other than `keep`. */
+async function clearTab(tx: Tx, tab: string, keep: string | null): Promise<void> {
+  for (const raw of await allRecords(tx)) {
+    const rec = raw as Partial<TabDraftRecord>;
+    if (rec.tab === tab && typeof rec.key === 'string' && rec.key !== keep) await tx.objectStore(DRAFTS).delete(rec.key);
+  }
+}
+
+function record(tab: string, c: Case, savedAt: string, baseRevision: number | null): TabDraftRecord {
+  return { key: draftKey(tab, c.id), tab, caseId: c.id, savedAt, baseRevision, case: c };
+}
+
+export function saveDraft(ctx: StoreContext, draft: Case, baseRevision: number | null): Promise<StoreResult<Draft>> {
   const action = 'keep the draft';
-  return inTx(ctx, action, [DRAFT], 'readwrite', async (tx) => {
-    const record = { savedAt: ctx.now().toISOString(), case: checkIncoming(draft, action) };
-    await tx.objectStore(DRAFT).put(record satisfies DraftRecord, DRAFT_KEY);
-    return record;
+  return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
+    const rec = record(ctx.tabId, checkIncoming(draft, action), ctx.now().toISOString(), baseRevision);
+    await tx.objectStore(DRAFTS).put(rec);
+    await clearTab(tx, ctx.tabId, rec.key);
+    return { key: rec.key, tab: rec.tab, case: rec.case as Case, savedAt: rec.savedAt, baseRevision };
   });
 }
 
+/**
+ * Writes a draft kept elsewhere (the synchronous copy a tab leaves in localStorage as it closes) unless the
+ * database already holds a newer one for the same tab and case. Resolves to true when it was written.
+ */
+export function mergeDraft(ctx: StoreContext, tab: string, draft: Case, savedAt: string, baseRevision: number | null): Promise<StoreResult<boolean>> {
+  const action = 'keep the draft';
+  return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
+    const rec = record(tab, checkIncoming(draft, action), savedAt, baseRevision);
+    const old = readDraft(await tx.objectStore(DRAFTS).get(rec.key));
+    if (old.ok && Date.parse(old.draft.savedAt) >= Date.parse(savedAt)) return false;
+    await tx.objectStore(DRAFTS).put(rec);
+    await clearTab(tx, tab, rec.key);
+    return true;
+  });
+}
+
+/** This tab's draft (readable ones only; the newest if several), or null. */
 export function loadDraft(ctx: StoreContext): Promise<StoreResult<Draft | null>> {
-  const action = 'load the draft';
-  return inTx(ctx, action, [DRAFT], 'readonly', async (tx) => {
-    const raw: unknown = await tx.objectStore(DRAFT).get(DRAFT_KEY);
-    if (raw === undefined) return null;
-    if (!isPlainObject(raw) || typeof raw.savedAt !== 'string') {
-      failWith('unreadable', `Could not ${action}: the kept draft is not in a form this Wetmode can read.`);
+  return inTx(ctx, 'load the draft', [DRAFTS], 'readonly', async (tx) => {
+    let best: Draft | null = null;
+    for (const raw of await allRecords(tx)) {
+      const d = readDraft(raw);
+      if (d.ok && d.draft.tab === ctx.tabId && (!best || Date.parse(d.draft.savedAt) > Date.parse(best.savedAt))) best = d.draft;
     }
-    const r = parseCase(raw.case);
-    if (!r.ok) failWith('unreadable', `Could not ${action}: the kept draft cannot be read (${r.message}).`);
-    return { case: r.value, savedAt: raw.savedAt };
+    return best;
   });
 }
 
-export function clearDraft(ctx: StoreContext): Promise<StoreResult<void>> {
-  return inTx(ctx, 'clear the draft', [DRAFT], 'readwrite', async (tx) => {
-    await tx.objectStore(DRAFT).delete(DRAFT_KEY);
+/** Every draft, newest first, and those that cannot be read (listed so they can be discarded). */
+export function listDrafts(ctx: StoreContext): Promise<StoreResult<DraftList>> {
+  return inTx(ctx, 'list the drafts', [DRAFTS], 'readonly', async (tx) => {
+    const out: DraftList = { drafts: [], unreadable: [] };
+    for (const raw of await allRecords(tx)) {
+      const d = readDraft(raw);
+      if (d.ok) out.drafts.push(d.draft);
+      else out.unreadable.push({ key: d.key, tab: d.tab, message: d.message });
+    }
+    out.drafts.sort((a, b) => Date.parse(b.savedAt) - Date.parse(a.savedAt));
+    return out;
   });
+}
+
+/** Makes another (closed) tab's draft this tab's own, in one transaction: 'not-found' if another tab took it first. */
+export function adoptDraft(ctx: StoreContext, key: string): Promise<StoreResult<Draft>> {
+  const action = 'open the draft';
+  return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
+    const store = tx.objectStore(DRAFTS);
+    const raw: unknown = typeof key === 'string' ? await store.get(key) : undefined;
+    if (raw === undefined) failWith('not-found', `Could not ${action}: it is no longer kept (opened in another tab, or discarded).`);
+    const d = readDraft(raw);
+    if (!d.ok) failWith('unreadable', `Could not ${action}: ${d.message}.`);
+    await store.delete(key);
+    const rec = record(ctx.tabId, d.draft.case, d.draft.savedAt, d.draft.baseRevision);
+    await store.put(rec);
+    await clearTab(tx, ctx.tabId, rec.key);
+    return { ...d.draft, key: rec.key, tab: ctx.tabId };
+  });
+}
+
+/** Removes one draft (any tab's, readable or not). */
+export function discardDraft(ctx: StoreContext, key: string): Promise<StoreResult<void>> {
+  return inTx(ctx, 'discard the draft', [DRAFTS], 'readwrite', async (tx) => {
+    if (typeof key === 'string') await tx.objectStore(DRAFTS).delete(key);
+  });
+}
+
+/** Removes this tab's draft (after its case was saved, or when it was given up). */
+export function clearDraft(ctx: StoreContext): Promise<StoreResult<void>> {
+  return inTx(ctx, 'clear the draft', [DRAFTS], 'readwrite', (tx) => clearTab(tx, ctx.tabId, null));
 }
