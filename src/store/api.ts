@@ -53,6 +53,8 @@ export interface Draft {
   savedAt: string;
   /** Revision of the saved case the edits started from; null when it had never been saved. */
   baseRevision: number | null;
+  /** A received or imported case kept before an update (it reopens as received). */
+  received?: boolean;
 }
 
 /** Every draft on the device (all tabs), newest first, and the ones that cannot be read. */
@@ -89,7 +91,7 @@ export interface CaseStore {
    * Keeps the case this tab is editing (one draft per tab; keyed by tab and case). Call it on every change,
    * debounced (about 0.5 s). `baseRevision`: the saved revision the edits started from (null: never saved).
    */
-  saveDraft(draft: Case, baseRevision?: number | null): Promise<StoreResult<Draft>>;
+  saveDraft(draft: Case, baseRevision?: number | null, received?: boolean): Promise<StoreResult<Draft>>;
   /** This tab's draft, or null when there is none. A draft that cannot be read is never returned (see listDrafts). */
   loadDraft(): Promise<StoreResult<Draft | null>>;
   /** Every tab's drafts, newest first, and the unreadable ones. */
@@ -97,7 +99,7 @@ export interface CaseStore {
   /** Makes another tab's draft this tab's own ('not-found' if another tab took it first). */
   adoptDraft(key: string): Promise<StoreResult<Draft>>;
   /** Writes a draft kept outside the database (the copy left in localStorage) unless a newer one is there. */
-  mergeDraft(tab: string, draft: Case, savedAt: string, baseRevision: number | null): Promise<StoreResult<boolean>>;
+  mergeDraft(tab: string, draft: Case, savedAt: string, baseRevision: number | null, received?: boolean): Promise<StoreResult<boolean>>;
   /** Removes one draft by key. */
   discardDraft(key: string): Promise<StoreResult<void>>;
   /** Removes this tab's draft. */

@@ -50,6 +50,8 @@ export interface TabDraftRecord {
   savedAt: string;
   /** Revision of the saved case this draft was based on; null when it was never saved (or not known). */
   baseRevision: number | null;
+  /** True for a received (link) or imported (file) case kept before an update: it reopens as received. */
+  received?: boolean;
   /** Read back through parseCase. */
   case: unknown;
 }

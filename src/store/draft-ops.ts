@@ -20,7 +20,9 @@ function readDraft(raw: unknown): { ok: true; draft: Draft } | { ok: false; key:
   const r = parseCase(rec.case);
   if (!r.ok) return { ok: false, key, tab, message: `this kept draft cannot be read (${r.message})` };
   const base = typeof rec.baseRevision === 'number' && Number.isSafeInteger(rec.baseRevision) ? rec.baseRevision : null;
-  return { ok: true, draft: { key, tab, case: r.value, savedAt: rec.savedAt, baseRevision: base } };
+  const draft: Draft = { key, tab, case: r.value, savedAt: rec.savedAt, baseRevision: base };
+  if (rec.received === true) draft.received = true;
+  return { ok: true, draft };
 }
 
 async function allRecords(tx: Tx): Promise<unknown[]> {
@@ -35,17 +37,21 @@ async function clearTab(tx: Tx, tab: string, keep: string | null): Promise<void>
   }
 }
 
-function record(tab: string, c: Case, savedAt: string, baseRevision: number | null): TabDraftRecord {
-  return { key: draftKey(tab, c.id), tab, caseId: c.id, savedAt, baseRevision, case: c };
+function record(tab: string, c: Case, savedAt: string, baseRevision: number | null, received = false): TabDraftRecord {
+  const rec: TabDraftRecord = { key: draftKey(tab, c.id), tab, caseId: c.id, savedAt, baseRevision, case: c };
+  if (received) rec.received = true;
+  return rec;
 }
 
-export function saveDraft(ctx: StoreContext, draft: Case, baseRevision: number | null): Promise<StoreResult<Draft>> {
+export function saveDraft(ctx: StoreContext, draft: Case, baseRevision: number | null, received = false): Promise<StoreResult<Draft>> {
   const action = 'keep the draft';
   return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
-    const rec = record(ctx.tabId, checkIncoming(draft, action), ctx.now().toISOString(), baseRevision);
+    const rec = record(ctx.tabId, checkIncoming(draft, action), ctx.now().toISOString(), baseRevision, received);
     await tx.objectStore(DRAFTS).put(rec);
     await clearTab(tx, ctx.tabId, rec.key);
-    return { key: rec.key, tab: rec.tab, case: rec.case as Case, savedAt: rec.savedAt, baseRevision };
+    const out: Draft = { key: rec.key, tab: rec.tab, case: rec.case as Case, savedAt: rec.savedAt, baseRevision };
+    if (received) out.received = true;
+    return out;
   });
 }
 
@@ -53,10 +59,10 @@ export function saveDraft(ctx: StoreContext, draft: Case, baseRevision: number |
  * Writes a draft kept elsewhere (the synchronous copy a tab leaves in localStorage as it closes) unless the
  * database already holds a newer one for the same tab and case. Resolves to true when it was written.
  */
-export function mergeDraft(ctx: StoreContext, tab: string, draft: Case, savedAt: string, baseRevision: number | null): Promise<StoreResult<boolean>> {
+export function mergeDraft(ctx: StoreContext, tab: string, draft: Case, savedAt: string, baseRevision: number | null, received = false): Promise<StoreResult<boolean>> {
   const action = 'keep the draft';
   return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
-    const rec = record(tab, checkIncoming(draft, action), savedAt, baseRevision);
+    const rec = record(tab, checkIncoming(draft, action), savedAt, baseRevision, received);
     const old = readDraft(await tx.objectStore(DRAFTS).get(rec.key));
     if (old.ok && Date.parse(old.draft.savedAt) >= Date.parse(savedAt)) return false;
     await tx.objectStore(DRAFTS).put(rec);
@@ -101,7 +107,7 @@ export function adoptDraft(ctx: StoreContext, key: string): Promise<StoreResult<
     const d = readDraft(raw);
     if (!d.ok) failWith('unreadable', `Could not ${action}: ${d.message}.`);
     await store.delete(key);
-    const rec = record(ctx.tabId, d.draft.case, d.draft.savedAt, d.draft.baseRevision);
+    const rec = record(ctx.tabId, d.draft.case, d.draft.savedAt, d.draft.baseRevision, d.draft.received === true);
     await store.put(rec);
     await clearTab(tx, ctx.tabId, rec.key);
     return { ...d.draft, key: rec.key, tab: ctx.tabId };
