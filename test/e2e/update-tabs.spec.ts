@@ -2,52 +2,25 @@ import { test, expect, type Page } from '@playwright/test';
 import { serviceWorkerActivated } from './support/service-worker';
 import { encodeCasePayload } from '../../src/share';
 import { demoCase } from '../case/fixtures';
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { cpSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { ServedCopy } from './support/served-copy';
 
 /**
  * A new version arriving while two tabs are open: only the tab whose user accepts reloads; the other keeps its
  * prompt and its open case (here a received one, from a link) until its own user accepts, and both cases come
  * back after the update. Runs on its own server (port 4192) over a copy of the build, like update.spec.ts.
  */
-const PORT = 4192;
-let dir = '';
-let server: ChildProcess | null = null;
+const served = new ServedCopy(4192);
+const PORT = served.port;
 
 test.describe.configure({ mode: 'serial' });
 
-test.beforeAll(async () => {
-  dir = mkdtempSync(join(tmpdir(), 'wetmode-update-'));
-  cpSync('dist', dir, { recursive: true });
-  // Node runs Vite directly (not through npx), so killing this process stops the server.
-  server = spawn(process.execPath, ['node_modules/vite/bin/vite.js', 'preview', '--outDir', dir, '--port', String(PORT), '--strictPort'], { stdio: 'ignore' });
-  for (let i = 0; i < 100; i++) {
-    try {
-      if ((await fetch(`http://localhost:${PORT}/`)).ok) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error('preview server for the update test did not start');
-});
+test.beforeAll(() => served.start());
+test.afterAll(() => served.stop());
 
 /** Publishes a new build over the served one and asks the page's service worker to look for it. */
-async function publishBuild(page: Page, stamp: string): Promise<void> {
-  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
-    env: { ...process.env, WETMODE_BUILD_STAMP: stamp },
-    encoding: 'utf8',
-  });
-  expect(built.status, built.stderr).toBe(0);
-  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+function publishBuild(page: Page, stamp: string): Promise<void> {
+  return served.publishBuild(page, stamp);
 }
-
-test.afterAll(() => {
-  server?.kill();
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
 
 test('an update accepted in one of two tabs reloads only that tab; the other keeps its prompt, and both keep their cases', async ({ page, context }) => {
   test.setTimeout(150_000);
