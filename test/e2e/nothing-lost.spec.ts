@@ -110,3 +110,31 @@ test('a link with spaces, %20 and line breaks opens; one with junk after the def
   await expect(page.getByRole('heading', { name: 'This link could not be opened' })).toBeVisible();
   await expect(page.getByRole('alert')).toContainText(LINK_MESSAGES.damaged.slice(1));
 });
+
+test('a tab opened from another (a copy of its session) gets its own draft: neither replaces the other', async ({ page, context }) => {
+  await startOnDemo(page);
+  await page.locator('#case-name').fill('Draft of tab A');
+  const [tabB] = await Promise.all([context.waitForEvent('page'), page.evaluate(() => void window.open('/#/member'))]);
+  await expect(tabB.getByTestId('quick-wet')).toContainText('Hz');
+  expect(await tabB.evaluate(() => sessionStorage.getItem('wetmode.tabId'))).not.toBe(await page.evaluate(() => sessionStorage.getItem('wetmode.tabId')));
+  await tabB.locator('#case-name').fill('Draft of tab B');
+  await tabB.waitForTimeout(700);
+  await page.waitForTimeout(700);
+  await page.reload();
+  await expect(page.locator('#case-name')).toHaveValue('Draft of tab A');
+  await tabB.reload();
+  await expect(tabB.locator('#case-name')).toHaveValue('Draft of tab B');
+});
+
+test('links with huge and tiny numbers open with a message beside the field, never a stuck page', async ({ page }) => {
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  const huge = { ...demoCase(), inputs: { ...demoCase().inputs, outerDiameter: '1e308 m', wallThickness: '1e-300 m' } };
+  await page.goto(`/#/open/${await encodeCasePayload(huge)}`);
+  await expect(page.getByText('Received case — not saved on this device')).toBeVisible();
+  await page.goto('/#/member');
+  await expect(page.locator('[data-field="outerDiameter"] .field-error').or(page.locator('[data-field="wallThickness"] .field-error')).first()).toBeVisible();
+  await page.goto('/#/cases');
+  await expect(page.getByRole('heading', { name: 'Saved on this device' })).toBeVisible();
+  expect(errors).toEqual([]);
+});

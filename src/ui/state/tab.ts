@@ -40,7 +40,7 @@ export function tabIdentity(): TabIdentity {
 }
 
 interface LocksLike {
-  request(name: string, cb: () => Promise<void>): Promise<unknown>;
+  request(name: string, options: { signal?: AbortSignal }, cb: (lock: unknown) => Promise<void>): Promise<unknown>;
   query(): Promise<{ held?: { name?: string }[] }>;
 }
 
@@ -49,11 +49,35 @@ function locks(): LocksLike | null {
   return l && typeof l.request === 'function' && typeof l.query === 'function' ? l : null;
 }
 
-/** Holds this tab's lock for as long as the page lives (released by the browser when the tab closes). */
-export function holdTabLock(id: string): void {
+/**
+ * Holds this tab's lock for as long as the page lives (released by the browser when the tab closes), and resolves
+ * to the tab's identity. A duplicated tab inherits a copy of sessionStorage, so its id may be one another open tab
+ * holds: if the lock is not granted within `waitMs` (a reload's old page lets go of it at once), this tab takes a
+ * new id, so two tabs never share a draft.
+ */
+export async function claimTab(waitMs = 1500): Promise<TabIdentity> {
+  const tab = tabIdentity();
   const l = locks();
-  if (!l) return;
-  l.request(LOCK_PREFIX + id, () => new Promise<void>(() => undefined)).catch(() => undefined);
+  if (!l) return tab;
+  const got = await new Promise<boolean>((resolve) => {
+    const stop = new AbortController();
+    const timer = setTimeout(() => stop.abort(), waitMs);
+    l.request(LOCK_PREFIX + tab.id, { signal: stop.signal }, () => {
+      clearTimeout(timer);
+      resolve(true);
+      return new Promise<void>(() => undefined);
+    }).catch(() => resolve(false));
+  });
+  if (got) return tab;
+  current = null;
+  try {
+    sessionStorage.removeItem(KEY);
+  } catch {
+    /* storage off */
+  }
+  const fresh = tabIdentity();
+  l.request(LOCK_PREFIX + fresh.id, {}, () => new Promise<void>(() => undefined)).catch(() => undefined);
+  return fresh;
 }
 
 /** The ids of the tabs open now, or null when this browser cannot say (no Web Locks). */

@@ -4,7 +4,7 @@ import type { AppServices } from './context';
 import { clearFallback, readFallbacks, writeFallback } from './draft-fallback';
 import { followStoreChanges } from './remote-changes';
 import { createModel, firstCase, mergeFallbacks, openDeviceStore } from './services';
-import { holdTabLock, openTabs, tabIdentity } from './tab';
+import { claimTab, openTabs, tabIdentity } from './tab';
 
 /**
  * Creates the services once, opens the device store, and opens the first case (this tab's draft, a closed tab's
@@ -18,9 +18,9 @@ export function useBoot(openingLink: boolean): AppServices {
     let cancelled = false;
     let unfollow = () => {};
     const { model } = services;
-    const tab = tabIdentity();
-    holdTabLock(tab.id);
+    let tab = tabIdentity();
     void (async () => {
+      tab = await claimTab();
       const opened = await openDeviceStore(tab.id);
       if (cancelled) return;
       const store = opened.store;
