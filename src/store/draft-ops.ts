@@ -63,8 +63,12 @@ export function mergeDraft(ctx: StoreContext, tab: string, draft: Case, savedAt:
   const action = 'keep the draft';
   return inTx(ctx, action, [DRAFTS], 'readwrite', async (tx) => {
     const rec = record(tab, checkIncoming(draft, action), savedAt, baseRevision, received);
-    const old = readDraft(await tx.objectStore(DRAFTS).get(rec.key));
-    if (old.ok && Date.parse(old.draft.savedAt) >= Date.parse(savedAt)) return false;
+    // Compared with every draft of that tab, not only the same case's: the tab may have moved on to another case
+    // since this copy was written, and its newer draft must not be replaced by the older copy.
+    for (const raw of await allRecords(tx)) {
+      const old = readDraft(raw);
+      if (old.ok && old.draft.tab === tab && Date.parse(old.draft.savedAt) >= Date.parse(savedAt)) return false;
+    }
     await tx.objectStore(DRAFTS).put(rec);
     await clearTab(tx, tab, rec.key);
     return true;

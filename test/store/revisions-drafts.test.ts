@@ -102,6 +102,14 @@ describe('drafts by tab and case', () => {
     expect(unwrap(await store.mergeDraft('A', { ...demoCase(), name: 'stale' }, '2026-11-01T00:00:00.000Z', null))).toBe(false);
     expect(unwrap(await store.loadDraft())?.case.name).toBe('typed before reload');
   });
+
+  it('an older copy of another case does not replace the newer draft the tab moved on to', async () => {
+    const h = harness();
+    const store = await h.open({ tabId: 'A' });
+    unwrap(await store.saveDraft({ ...demoCase(), id: idNumber(5), name: 'the case the tab moved on to' }));
+    expect(unwrap(await store.mergeDraft('A', { ...demoCase(), name: 'left behind earlier' }, '2026-12-01T11:59:00.000Z', null))).toBe(false);
+    expect(unwrap(await store.loadDraft())?.case.name).toBe('the case the tab moved on to');
+  });
 });
 
 describe('other tabs are told of changes', () => {
