@@ -29,6 +29,8 @@ export const DRAFT = 'draft';
 export const DRAFTS = 'drafts';
 /** The tab name given to a draft kept by a version 2 database (one slot, no tab). */
 export const EARLIER_TAB = 'earlier';
+/** The tab name of drafts set aside when their tab moved on to another case (offered on the Cases screen). */
+export const SET_ASIDE_TAB = 'set-aside';
 export const TRASH = 'trash';
 export const DRAFT_KEY = 'current';
 /** Deleted cases stay restorable for this many days. */

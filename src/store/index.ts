@@ -22,4 +22,4 @@ export { estimateQuota, requestPersistence, type PersistenceAnswer, type QuotaEs
 export { revisionOf } from './revision';
 export type { StoreChange } from './broadcast';
 export type { SaveBase } from './case-ops';
-export { EARLIER_TAB } from './db-schema';
+export { EARLIER_TAB, SET_ASIDE_TAB } from './db-schema';

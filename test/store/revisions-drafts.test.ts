@@ -72,11 +72,24 @@ describe('drafts by tab and case', () => {
     expect(unwrap(await reopenedA.loadDraft())).toMatchObject({ tab: 'A', baseRevision: 1, case: { name: 'A edit' } });
   });
 
-  it('a tab keeps one draft: opening another case replaces it', async () => {
-    const store = await harness().open({ tabId: 'A' });
-    unwrap(await store.saveDraft(demoCase()));
+  it('a tab keeps one draft: moving on to another case sets the earlier unsaved draft aside, and drops one already saved', async () => {
+    const h = harness();
+    const store = await h.open({ tabId: 'A' });
+    unwrap(await store.saveDraft({ ...demoCase(), name: 'unsaved work' }));
     unwrap(await store.saveDraft({ ...demoCase(), id: idNumber(9) }));
-    expect(unwrap(await store.listDrafts()).drafts.map((d) => d.case.id)).toEqual([idNumber(9)]);
+    expect(unwrap(await store.loadDraft())?.case.id).toBe(idNumber(9));
+    expect(unwrap(await store.listDrafts()).drafts.map((d) => [d.tab, d.case.name])).toEqual([
+      ['A', demoCase().name],
+      ['set-aside', 'unsaved work'],
+    ]);
+    // A draft holding exactly the saved case is not worth keeping once the tab moves on.
+    unwrap(await store.saveCase({ ...demoCase(), id: idNumber(9) }));
+    h.clock.now = new Date(h.clock.now.getTime() + 1000);
+    unwrap(await store.saveDraft({ ...demoCase(), id: idNumber(10) }));
+    expect(unwrap(await store.listDrafts()).drafts.map((d) => [d.tab, d.case.id])).toEqual([
+      ['A', idNumber(10)],
+      ['set-aside', demoCase().id],
+    ]);
   });
 
   it('the draft of a closed tab can be adopted once: the second tab to try is told it is gone', async () => {

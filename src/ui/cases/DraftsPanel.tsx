@@ -2,6 +2,7 @@ import { useCallback, useEffect, useRef, useState } from 'preact/hooks';
 import type { CaseStore, Draft, DraftList } from '../../store';
 import { openTabs, tabIdentity } from '../state/tab';
 import { displayName, formatCaseDate, kindTitle } from './format';
+import { isUntouchedStart } from './new-case';
 import { sentence } from './words';
 
 interface Props {
@@ -12,9 +13,9 @@ interface Props {
 }
 
 /**
- * Unsaved work left by tabs that were closed (a new tab reopens the newest by itself; the others wait here),
- * and drafts that cannot be read (set aside so they never stop the app; they can be discarded).
- * Drafts of tabs still open are theirs and not shown.
+ * Unsaved work left by tabs that were closed (a new tab reopens the newest by itself; the others wait here) or
+ * set aside when a tab moved on to another case, and drafts that cannot be read (set aside so they never stop
+ * the app; they can be discarded). Drafts of tabs still open are theirs and not shown.
  */
 export function DraftsPanel({ store, onOpen, setError }: Props) {
   const [list, setList] = useState<DraftList | null>(null);
@@ -27,7 +28,8 @@ export function DraftsPanel({ store, onOpen, setError }: Props) {
     const me = tabIdentity().id;
     // Without Web Locks we cannot tell open tabs from closed ones: show every other tab's draft.
     const closed = (tab: string) => tab !== me && !(live?.has(tab) ?? false);
-    setList({ drafts: r.value.drafts.filter((d) => closed(d.tab)), unreadable: r.value.unreadable });
+    // A draft holding only what a "new case" button or a demo put there is no work to recover: not offered.
+    setList({ drafts: r.value.drafts.filter((d) => closed(d.tab) && !isUntouchedStart(d.case)), unreadable: r.value.unreadable });
   }, [store]);
   useEffect(() => {
     void load();
@@ -43,7 +45,8 @@ export function DraftsPanel({ store, onOpen, setError }: Props) {
   if (!list || (list.drafts.length === 0 && list.unreadable.length === 0)) return null;
   return (
     <section class="saved drafts-panel" aria-labelledby="drafts-h">
-      <h2 id="drafts-h">Unsaved drafts from closed tabs</h2>
+      <h2 id="drafts-h">Unsaved drafts</h2>
+      <p class="cases-muted">Work not saved as a case, left in closed tabs or set aside when another case was opened.</p>
       <ul class="case-list">
         {list.drafts.map((d) => (
           <li key={d.key}>

@@ -4,7 +4,7 @@
  */
 import { SolverClient, type WorkerLike } from '../../worker/solver-client';
 import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
-import { openStore, newCase, revisionOf, type CaseStore, type Draft } from '../../store';
+import { openStore, newCase, revisionOf, SET_ASIDE_TAB, type CaseStore, type Draft } from '../../store';
 import type { FallbackDraft } from './draft-fallback';
 import { DEMO_CASES, FORMS } from '../../forms';
 import { excitationDefaults } from '../../forms/excitation';
@@ -78,7 +78,8 @@ export async function firstCase(store: CaseStore | null, fresh = false, liveTabs
     if (fresh && liveTabs) {
       const all = await store.listDrafts();
       for (const d of all.ok ? all.value.drafts : []) {
-        if (liveTabs.has(d.tab)) continue;
+        // Set-aside drafts were left on purpose (or by a link opened over them): offered on the Cases screen only.
+        if (liveTabs.has(d.tab) || d.tab === SET_ASIDE_TAB) continue;
         const taken = await store.adoptDraft(d.key);
         if (taken.ok) return await fromDraft(store, taken.value);
       }
