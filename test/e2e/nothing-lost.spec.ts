@@ -138,3 +138,30 @@ test('links with huge and tiny numbers open with a message beside the field, nev
   await expect(page.getByRole('heading', { name: 'Saved on this device' })).toBeVisible();
   expect(errors).toEqual([]);
 });
+
+test('unsaved work in a closed tab comes back in the next new tab; an older one is offered on the Cases screen', async ({ context }) => {
+  const first = await context.newPage();
+  await startOnDemo(first);
+  await first.locator('#case-name').fill('Port Halloran berth 2, older');
+  await first.waitForTimeout(700);
+  const second = await context.newPage();
+  await second.goto('/#/member');
+  await expect(second.getByTestId('quick-wet')).toContainText('Hz');
+  await second.locator('#case-name').fill('Port Halloran berth 2, newer');
+  await second.waitForTimeout(700);
+  await first.close();
+  await second.close();
+
+  const fresh = await context.newPage();
+  await fresh.goto('/');
+  await expect(fresh.locator('#case-name')).toHaveValue('Port Halloran berth 2, newer');
+  await fresh.goto('/#/cases');
+  const offered = fresh.locator('li', { hasText: 'Port Halloran berth 2, older' });
+  await expect(offered).toBeVisible();
+  await offered.getByRole('button', { name: 'Open draft' }).click();
+  // The open case has unsaved work: the screen asks first; even "without saving" sets it aside, not away.
+  await fresh.getByRole('button', { name: 'Continue without saving' }).click();
+  await expect(fresh.locator('#case-name')).toHaveValue('Port Halloran berth 2, older');
+  await fresh.goto('/#/cases');
+  await expect(fresh.locator('li', { hasText: 'Port Halloran berth 2, newer' })).toBeVisible();
+});
