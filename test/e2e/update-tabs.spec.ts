@@ -2,25 +2,16 @@ import { test, expect, type Page } from '@playwright/test';
 import { serviceWorkerActivated } from './support/service-worker';
 import { encodeCasePayload } from '../../src/share';
 import { demoCase } from '../case/fixtures';
-import { ServedCopy } from './support/served-copy';
+import { servedCopyForFile } from './support/served-copy';
 
 /**
  * A new version arriving while two tabs are open: only the tab whose user accepts reloads; the other keeps its
  * prompt and its open case (here a received one, from a link) until its own user accepts, and both cases come
  * back after the update. Runs on its own server (port 4192) over a copy of the build, like update.spec.ts.
  */
-const served = new ServedCopy(4192);
+const served = servedCopyForFile(4192);
 const PORT = served.port;
-
-test.describe.configure({ mode: 'serial' });
-
-test.beforeAll(() => served.start());
-test.afterAll(() => served.stop());
-
-/** Publishes a new build over the served one and asks the page's service worker to look for it. */
-function publishBuild(page: Page, stamp: string): Promise<void> {
-  return served.publishBuild(page, stamp);
-}
+const publishBuild = (page: Page, stamp: string) => served.publishBuild(page, stamp);
 
 test('an update accepted in one of two tabs reloads only that tab; the other keeps its prompt, and both keep their cases', async ({ page, context }) => {
   test.setTimeout(150_000);

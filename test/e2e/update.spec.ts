@@ -1,23 +1,14 @@
 import { test, expect, type Page } from '@playwright/test';
 import { serviceWorkerActivated } from './support/service-worker';
-import { ServedCopy } from './support/served-copy';
+import { servedCopyForFile } from './support/served-copy';
 
 /**
  * A new version arriving while a case is open: the app waits for the user, and keeps the open work.
  * Runs on its own server (port 4174) over a copy of the build, so rebuilding it disturbs no other test.
  */
-const served = new ServedCopy(4174);
+const served = servedCopyForFile(4174);
 const PORT = served.port;
-
-test.describe.configure({ mode: 'serial' });
-
-test.beforeAll(() => served.start());
-test.afterAll(() => served.stop());
-
-/** Publishes a new build over the served one and asks the page's service worker to look for it. */
-function publishBuild(page: Page, stamp: string): Promise<void> {
-  return served.publishBuild(page, stamp);
-}
+const publishBuild = (page: Page, stamp: string) => served.publishBuild(page, stamp);
 
 test('a new version waits for the user, and updating keeps the case being edited', async ({ page }) => {
   test.setTimeout(120_000);

@@ -1,4 +1,4 @@
-import { expect, type Page } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { cpSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -48,4 +48,13 @@ export class ServedCopy {
     this.server?.kill();
     if (this.dir) rmSync(this.dir, { recursive: true, force: true });
   }
+}
+
+/** A served copy for the tests of one spec file: started before them, stopped after; the file's tests run in order. */
+export function servedCopyForFile(port: number): ServedCopy {
+  const served = new ServedCopy(port);
+  test.describe.configure({ mode: 'serial' });
+  test.beforeAll(() => served.start());
+  test.afterAll(() => served.stop());
+  return served;
 }
