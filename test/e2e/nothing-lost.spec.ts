@@ -85,6 +85,8 @@ test('a draft holding 1e308 m in the outer diameter opens with a message, and th
   await page.reload();
   await expect(page.locator('[data-field="outerDiameter"] input')).toHaveValue('1e308 m');
   await expect(page.locator('[data-field="outerDiameter"] .field-error')).toContainText('too large or too small');
+  await expect(page.getByText('Out of date: fix the field marked ✖')).toBeVisible();
+  await expect(page.getByText('Updating…')).toHaveCount(0);
   await page.goto('/#/cases');
   await expect(page.getByRole('heading', { name: 'Saved on this device' })).toBeVisible();
   await expect(page.getByText('Opening the cases saved on this device…')).toHaveCount(0);
