@@ -135,7 +135,8 @@ async function dbV2toV3(db: UpgradeDb, tx: UpgradeTx, ctx: UpgradeContext): Prom
       tab: EARLIER_TAB,
       caseId,
       savedAt: typeof rec.savedAt === 'string' ? rec.savedAt : ctx.nowIso,
-      baseRevision: null,
+      // Records from before revisions count as revision 0: a draft of a saved case starts from it (no false conflict).
+      baseRevision: parsed.ok && (await tx.objectStore(CASES).getKey(caseId)) !== undefined ? 0 : null,
       // Kept as it was, readable or not: an unreadable draft is listed and can be discarded, never dropped here.
       case: rec.case ?? old,
     };

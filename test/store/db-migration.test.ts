@@ -41,7 +41,7 @@ const v1: PastLayout = {
     expect(unwrap(await store.loadDraft())).toBeNull();
     const drafts = unwrap(await store.listDrafts());
     expect(drafts.drafts).toHaveLength(1);
-    expect(drafts.drafts[0]).toMatchObject({ tab: 'earlier', savedAt: '2025-11-20T08:30:00Z', baseRevision: null, case: { name: 'Draft probe', kind: 'stem' } });
+    expect(drafts.drafts[0]).toMatchObject({ tab: 'earlier', savedAt: '2025-11-20T08:30:00Z', baseRevision: 0, case: { name: 'Draft probe', kind: 'stem' } });
     // Undo works on the upgraded database (the step added its store).
     const token = unwrap(await store.deleteCase(demoCase().id));
     expect(unwrap(await store.undoDelete(token))?.id).toBe(demoCase().id);
@@ -83,11 +83,12 @@ const v2: PastLayout = {
     expect(revisionOf(list.cases[0])).toBe(0);
     expect(list.unreadable.map((u) => u.key)).toEqual(['junk-7']);
     const drafts = unwrap(await store.listDrafts());
-    expect(drafts.drafts.map((d) => [d.tab, d.case.name, d.savedAt, d.baseRevision])).toEqual([['earlier', 'Unsaved rename', '2026-11-30T09:00:00.000Z', null]]);
+    expect(drafts.drafts.map((d) => [d.tab, d.case.name, d.savedAt, d.baseRevision])).toEqual([['earlier', 'Unsaved rename', '2026-11-30T09:00:00.000Z', 0]]);
     // The closed tab's draft can be taken over by a tab, and is then its own.
     const adopted = unwrap(await store.adoptDraft(drafts.drafts[0].key));
     expect(unwrap(await store.loadDraft())).toEqual(adopted);
-    expect(unwrap(await store.saveCase(demoCase(), { baseRevision: 0 })).id).toBe(demoCase().id);
+    // Saved from the revision it started at: no conflict.
+    expect(unwrap(await store.saveCase(adopted.case, { baseRevision: adopted.baseRevision })).name).toBe('Unsaved rename');
     // The trash came through: undo still works.
     expect(unwrap(await store.undoDelete('tok-1'))?.name).toBe('Deleted pile');
     store.close();
