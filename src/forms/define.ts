@@ -5,6 +5,7 @@
 import type { MemberBuild } from '../kinds/common/types';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
+import { guardedBuild } from './total-build';
 import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
 
 /** The parts of a kind's form; `I` is the kind's SI input. */
@@ -82,7 +83,11 @@ export function defineForm<I>(spec: FormSpec<I>): MemberForm<I> {
     buildModel: spec.buildModel,
     build(values, system) {
       const r = form.toInput(values, system);
-      return r.ok ? { ok: true, input: r.input, build: spec.buildModel(r.input) } : r;
+      if (!r.ok) return r;
+      const input = r.input;
+      // Never throws, and never passes on a non-finite number: see total-build.ts.
+      const b = guardedBuild(fields, () => readFields(fields, values, system).read, () => spec.buildModel(input));
+      return b.ok ? { ok: true, input, build: b.build } : b;
     },
     convertValues(values, from, to) {
       return convertFieldValues(fields, values, from, to);

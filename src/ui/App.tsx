@@ -9,7 +9,7 @@ import { SectionScreen } from './section/SectionScreen';
 import { MemberScreen } from './member/MemberScreen';
 import { ResultsScreen } from './screens/ResultsScreen';
 import { OpenLinkScreen } from './screens/OpenLinkScreen';
-import { CasesScreen, ReceivedBanner, ShareActions } from './cases';
+import { CasesScreen, ConflictPrompt, ReceivedBanner, ShareActions } from './cases';
 import { ReportScreen } from './screens/ReportScreen';
 import { AppServicesProvider, useModel, useServices } from './state/context';
 import { useBoot } from './state/use-boot';
@@ -66,6 +66,7 @@ export function App() {
       <UpdatePrompt />
       <main id="main" tabIndex={-1}>
         <AppServicesProvider value={services}>
+          <ConflictPrompt />
           <Screen route={route} />
         </AppServicesProvider>
       </main>
