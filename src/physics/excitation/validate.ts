@@ -140,10 +140,10 @@ function validateMachinery(machinery: unknown): void {
     const f = `machinery[${i}]`;
     const m = list[i];
     if (!isObject(m)) fail(f, 'an object', m);
-    const rpm = positive(`${f}.shaftSpeedRpm`, m.shaftSpeedRpm);
-    if (m.shaftSpeedMaxRpm !== undefined) {
-      const max = finite(`${f}.shaftSpeedMaxRpm`, m.shaftSpeedMaxRpm);
-      if (!(max >= rpm)) fail(`${f}.shaftSpeedMaxRpm`, `≥ ${f}.shaftSpeedRpm = ${rpm}`, max);
+    const hz = positive(`${f}.shaftSpeedHz`, m.shaftSpeedHz);
+    if (m.shaftSpeedMaxHz !== undefined) {
+      const max = finite(`${f}.shaftSpeedMaxHz`, m.shaftSpeedMaxHz);
+      if (!(max >= hz)) fail(`${f}.shaftSpeedMaxHz`, `≥ ${f}.shaftSpeedHz = ${hz}`, max);
     }
     if (m.bladeCount !== undefined) {
       const b = m.bladeCount;
