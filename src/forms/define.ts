@@ -3,6 +3,7 @@
  * and cross-field messages, building, and converting values between unit systems.
  */
 import type { MemberBuild } from '../kinds/common/types';
+import { checkedField } from '../physics/check/kit';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
 import { guardedBuild } from './total-build';
@@ -21,6 +22,11 @@ export interface FormSpec<I> {
   toInput(r: Reader, err: (key: string, message: string) => void): I | null;
   /** The physics-side validator, run last as a safety net (its messages use SI field names). */
   validate(input: I): unknown;
+  /**
+   * Core field paths of the SI input -> this form's field keys, so a message from the safety net lands beside
+   * the field it is about (e.g. `{ outerDiameterM: 'outerDiameter' }`); unmapped paths go to FORM_ERROR_KEY.
+   */
+  coreFields?: Readonly<Record<string, string>>;
   buildModel(input: I): MemberBuild;
 }
 
@@ -76,7 +82,9 @@ export function defineForm<I>(spec: FormSpec<I>): MemberForm<I> {
       try {
         spec.validate(input);
       } catch (e) {
-        return { ok: false, errors: { [FORM_ERROR_KEY]: e instanceof Error ? e.message : String(e) } };
+        const core = checkedField(e);
+        const key = core !== undefined && spec.coreFields && Object.prototype.hasOwnProperty.call(spec.coreFields, core) ? spec.coreFields[core] : FORM_ERROR_KEY;
+        return { ok: false, errors: { [key]: e instanceof Error ? e.message : String(e) } };
       }
       return { ok: true, input };
     },

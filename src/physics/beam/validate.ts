@@ -16,6 +16,7 @@ import type {
 } from './model';
 import type { BoundarySpec } from '../section/types';
 import { findShape, SHAPE_IDS, shapeOf } from '../shapes/registry';
+import { checkingKit } from '../check/kit';
 
 const SUPPORT_KINDS: readonly SupportKind[] = ['clamped', 'pinned', 'guided', 'free', 'spring'];
 export const MAX_MODES = 50;
@@ -30,13 +31,16 @@ function show(v: unknown): string {
   return typeof v === 'object' ? 'an object' : String(v);
 }
 
+// The core's checking kit; a failed check is a RangeError carrying the field path.
+const KIT = checkingKit(show);
+
 function fail(path: string, expected: string, got: unknown): never {
-  throw new RangeError(`${path} must be ${expected}, got ${show(got)}`);
+  return KIT.fail(path, expected, got);
 }
 
 /** Same, with the received value already described in words. */
 function failDescribed(path: string, expected: string, gotText: string): never {
-  throw new RangeError(`${path} must be ${expected}, got ${gotText}`);
+  return KIT.failText(path, expected, gotText);
 }
 
 type Obj = Record<string, unknown>;

@@ -6,6 +6,7 @@
  */
 import type { BodySpec, BoundarySpec, SectionInput, Vec2 } from './types';
 import { validateSectionInput } from './validate';
+import { checkingKit, mustBe } from '../check/kit';
 
 type Obj = Record<string, unknown>;
 
@@ -19,9 +20,11 @@ const show = (v: unknown): string => {
   }
 };
 
+// The core's checking kit; every failure here is a value of the wrong kind (TypeError).
+const KIT = checkingKit(show, (field, expected, gotText) => new TypeError(mustBe(field, expected, gotText)));
+
 function obj(where: string, v: unknown): Obj {
-  if (typeof v !== 'object' || v === null || Array.isArray(v)) throw new TypeError(`${where} must be an object, got ${show(v)}`);
-  return v as Obj;
+  return KIT.record(where, v);
 }
 
 function onlyKeys(where: string, o: Obj, allowed: readonly string[]): void {
@@ -31,8 +34,8 @@ function onlyKeys(where: string, o: Obj, allowed: readonly string[]): void {
 }
 
 function num(where: string, v: unknown): number {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${show(v)}`);
-  return v;
+  if (typeof v !== 'number') KIT.fail(where, 'a number', v);
+  return v as number;
 }
 
 function optNum(where: string, v: unknown): number | undefined {

@@ -10,6 +10,7 @@ import { sampleChain } from './pieces';
 import { inputLines } from './model';
 import { lineDistance, perpendicular, type Line } from './lines';
 import { bbox, pointInPolygon, segmentsTouch, selfIntersection, signedArea, type Polygon } from './polygon';
+import { checkingKit, mustBe } from '../check/kit';
 
 /** Most bodies in one section (the dense solve grows as (K·N)³). */
 export const MAX_BODIES = 24;
@@ -24,14 +25,23 @@ const fmt = (v: unknown): string => {
   }
 };
 
+// The core's checking kit: a value of the wrong kind is a TypeError, a number out of range a RangeError.
+const KIT = checkingKit(fmt, (field, expected, gotText, value) =>
+  typeof value === 'number' ? new RangeError(mustBe(field, expected, gotText)) : new TypeError(mustBe(field, expected, gotText)),
+);
+
+function number(where: string, v: unknown): void {
+  if (typeof v !== 'number') KIT.fail(where, 'a number', v);
+}
+
 function positive(where: string, v: unknown): void {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${fmt(v)}`);
-  if (!(Number.isFinite(v) && v > 0)) throw new RangeError(`${where} must be a finite number > 0, got ${fmt(v)}`);
+  number(where, v);
+  KIT.positive(where, v);
 }
 
 function finite(where: string, v: unknown): void {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${fmt(v)}`);
-  if (!Number.isFinite(v)) throw new RangeError(`${where} must be a finite number, got ${fmt(v)}`);
+  number(where, v);
+  KIT.finite(where, v);
 }
 
 function vec(where: string, v: unknown): void {
