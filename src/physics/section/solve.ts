@@ -22,7 +22,7 @@
  * returned as `{ ok: false, reason, message }`.
  */
 import type { BodyResult, ErrorEstimate, SectionDof, SectionInput, SectionOutcome, SectionResult, SolveOptions } from './types';
-import { validateSectionInput } from './validate';
+import { checkPanelsPerBody, validateSectionInput } from './validate';
 import { buildModel, type SectionModel } from './model';
 import { buildPanels } from './panels';
 import { solveLevel, type LevelSolution } from './solve-level';
@@ -32,6 +32,11 @@ import { energyCheck } from './energy';
 
 /** Default nominal panels per body at the finest resolution (thin bodies get up to 4× more). */
 export const DEFAULT_PANELS_PER_BODY = 128;
+/**
+ * Most panels at the finest level, all bodies and boundaries together: the dense LU grows as P³
+ * (2,048 panels solve in a few seconds; 8,000 would take minutes and half a gigabyte).
+ */
+export const MAX_TOTAL_PANELS = 2048;
 
 const DOFS: SectionDof[] = ['x', 'y', 'rotation'];
 
@@ -61,11 +66,17 @@ function failure(reason: 'singular-system', column: number): SolvedSection {
 export function solveSectionDetailed(input: SectionInput, options: SolveOptions = {}): SolvedSection {
   validateSectionInput(input);
   const N = options.panelsPerBody ?? input.panelsPerBody ?? DEFAULT_PANELS_PER_BODY;
-  if (!(Number.isInteger(N) && N >= 16 && N <= 4096)) {
-    throw new RangeError(`panelsPerBody must be an integer from 16 to 4096, got ${N}`);
-  }
+  checkPanelsPerBody(N);
   const rho = input.liquidDensityKgPerM3;
   const model = buildModel(input, N);
+  let total = 0;
+  for (const s of model.spans) for (const c of s.coarseCounts) total += 4 * c;
+  if (total > MAX_TOTAL_PANELS) {
+    throw new RangeError(
+      `the section needs ${total} panels at its finest level (${input.bodies.length} bodies at panelsPerBody = ${N}, thin bodies and polygon edges take more), ` +
+        `more than the ${MAX_TOTAL_PANELS} the solver allows; lower panelsPerBody or use fewer bodies or polygon points`,
+    );
+  }
   const K = input.bodies.length;
   const m3 = 3 * K;
   const level = (factor: number) => solveLevel(buildPanels(model.spans, factor), model.group, model.refX, model.refY, rho, model.closed);

@@ -13,6 +13,12 @@ import { bbox, pointInPolygon, segmentsTouch, selfIntersection, signedArea, type
 
 /** Most bodies in one section (the dense solve grows as (K·N)³). */
 export const MAX_BODIES = 24;
+/** Most points of one polygon (the self-intersection check grows as n², and every edge takes panels). */
+export const MAX_POLYGON_POINTS = 256;
+/** Most boundaries (walls, free surfaces, one enclosure). */
+export const MAX_BOUNDARIES = 16;
+/** Largest nominal panels per body. */
+export const MAX_PANELS_PER_BODY = 1024;
 
 const fmt = (v: unknown): string => {
   if (typeof v === 'number') return String(v);
@@ -49,8 +55,8 @@ function optionalFinite(where: string, v: unknown): void {
 }
 
 function polygonPoints(where: string, pts: unknown): void {
-  if (!Array.isArray(pts) || pts.length < 3) {
-    throw new RangeError(`${where} must list at least 3 points [x, y], got ${Array.isArray(pts) ? `${pts.length} points` : fmt(pts)}`);
+  if (!Array.isArray(pts) || pts.length < 3 || pts.length > MAX_POLYGON_POINTS) {
+    throw new RangeError(`${where} must list from 3 to ${MAX_POLYGON_POINTS} points [x, y], got ${Array.isArray(pts) ? `${pts.length} points` : fmt(pts)}`);
   }
   pts.forEach((p, k) => vec(`${where}[${k}]`, p));
   const flat = new Float64Array(pts.length * 2);
@@ -195,6 +201,13 @@ function segmentsCross(p: Polygon, i: number, q: Polygon, j: number): boolean {
   return d1 * d2 < 0 && d3 * d4 < 0;
 }
 
+/** Nominal panels per body: an integer from 16 to MAX_PANELS_PER_BODY (absent = the default). */
+export function checkPanelsPerBody(n: unknown): void {
+  if (n !== undefined && !(typeof n === 'number' && Number.isInteger(n) && n >= 16 && n <= MAX_PANELS_PER_BODY)) {
+    throw new RangeError(`panelsPerBody must be an integer from 16 to ${MAX_PANELS_PER_BODY}, got ${fmt(n)}`);
+  }
+}
+
 /** Validates a section input; throws with a clear message on the first problem found. */
 export function validateSectionInput(input: SectionInput): void {
   if (typeof input !== 'object' || input === null) throw new TypeError(`section input must be an object, got ${fmt(input)}`);
@@ -204,9 +217,10 @@ export function validateSectionInput(input: SectionInput): void {
   }
   if (input.bodies.length > MAX_BODIES) throw new RangeError(`bodies may hold at most ${MAX_BODIES} bodies, got ${input.bodies.length}`);
   if (input.boundaries !== undefined && !Array.isArray(input.boundaries)) throw new TypeError(`boundaries must be an array, got ${fmt(input.boundaries)}`);
-  if (input.panelsPerBody !== undefined && !(Number.isInteger(input.panelsPerBody) && input.panelsPerBody >= 16 && input.panelsPerBody <= 4096)) {
-    throw new RangeError(`panelsPerBody must be an integer from 16 to 4096, got ${fmt(input.panelsPerBody)}`);
+  if (input.boundaries !== undefined && input.boundaries.length > MAX_BOUNDARIES) {
+    throw new RangeError(`boundaries may hold at most ${MAX_BOUNDARIES} boundaries, got ${input.boundaries.length}`);
   }
+  checkPanelsPerBody(input.panelsPerBody);
   input.bodies.forEach(checkBody);
   const boundaries = input.boundaries ?? [];
   boundaries.forEach(checkBoundary);
