@@ -12,7 +12,7 @@ import type { MemberModel } from './model';
 import { checkStiffness, meshModes, modeResult, wetMass } from './modes';
 import { isMechanism, MECHANISM_MESSAGE } from './restraint';
 import type { MemberOutcome, MemberResult, ModeSetResult } from './result';
-import { defaultSectionSolver, type SectionSolver } from './section-bridge';
+import { defaultSectionSolver, SECTION_PANELS_MAX, type SectionSolver } from './section-bridge';
 import { parseMemberModel } from './validate';
 import { memberWarnings } from './warnings';
 import { massZones } from './zones';
@@ -30,6 +30,31 @@ export const DEFAULT_MAX_ELEMENTS = 3200;
  * default convergence tolerance): finer meshes are refused, and refinement stops before reaching them.
  */
 export const PRECISION_LIMIT = 1e-4;
+
+/** Frequency error from the added mass above which the result warns (1 %). */
+const BAND_WARNING = 0.01;
+
+/**
+ * Wet frequencies with the added mass raised and lowered by its relative error δ. By the Rayleigh quotient
+ * (classical) ω² = K/(M_s + M_a) over the mode, so with the liquid's share s of the kinetic energy,
+ * ω scales by 1/√(1 ± s δ); s is taken over all added mass, which over-states the band when only part
+ * of it came from the section solver.
+ */
+function frequencyBand(wet: ModeSetResult, delta: number | null): { lowHz: number[]; highHz: number[]; largestRelativeHalfWidth: number } | null {
+  if (delta === null || !(delta > 0)) return null;
+  const lowHz: number[] = [];
+  const highHz: number[] = [];
+  let worst = 0;
+  wet.modes.forEach((m) => {
+    const s = m.liquidKineticEnergyShare ?? 0;
+    const lo = m.frequencyHz / Math.sqrt(1 + s * delta);
+    const hi = m.frequencyHz / Math.sqrt(Math.max(1 - s * delta, 1e-6));
+    lowHz.push(lo);
+    highHz.push(hi);
+    if (m.frequencyHz > 0) worst = Math.max(worst, (hi - lo) / (2 * m.frequencyHz));
+  });
+  return { lowHz, highHz, largestRelativeHalfWidth: worst };
+}
 
 function sum(counts: Int32Array): number {
   let t = 0;
@@ -182,6 +207,17 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
   }
   if (merged > 0) {
     result.warnings.push(`${merged} mesh point(s) closer than ${(MIN_INTERVAL_FRACTION * model.lengthM).toPrecision(2)} m (length / 5000) to another were merged into it (moved by up to ${largestMoveM.toPrecision(2)} m).`);
+  }
+  const band = plan && wet ? frequencyBand(wet, plan.sectionRelativeError) : null;
+  if (band && result.addedMass) {
+    result.addedMass.wetFrequencyBand = band;
+    if (band.largestRelativeHalfWidth > BAND_WARNING) {
+      result.warnings.push(
+        `The section solver's added mass carries an estimated error of ${(100 * plan!.sectionRelativeError!).toPrecision(2)} % ` +
+          `(panels capped at ${SECTION_PANELS_MAX} per body), so the wet frequencies may be off by up to ${(100 * band.largestRelativeHalfWidth).toPrecision(2)} %; ` +
+          'the band is in the results. A gap much narrower than the section is the usual cause.',
+      );
+    }
   }
   const bad = resultSanity(result);
   if (bad) return { ok: false, reason: 'not-converged', message: bad };

@@ -96,7 +96,10 @@ export interface ErrorEstimate {
   extrapolated: number;
   /** Order used: observed from the N/4, N/2 and N values, bounded to [1, 2] (1 if not monotone). */
   order: number;
-  /** Estimated absolute error of the reported (fine) value: |fine − extrapolated|. */
+  /**
+   * Estimated absolute error of the reported (fine) value, which also bounds the extrapolated value's:
+   * |fine − extrapolated|, widened to the change from the coarsest level when the observed order is below 1.5.
+   */
   absoluteError: number;
   /** absoluteError / |fine|. */
   relativeError: number;
