@@ -43,10 +43,10 @@ describe('the member path resolves confined added mass to a stated accuracy', ()
     });
   });
 
-  it('a plate 50 mm from the wall resolves to 0.1 % and needs no warning', () => {
+  it('a plate 50 mm from the wall resolves to the member path tolerance of 0.5 % and needs no warning', () => {
     const out = solveMember(plateByWall(0.05));
     if (!out.ok) throw new Error(out.message);
-    expect(out.result.addedMass!.sectionRelativeError!).toBeLessThanOrEqual(1e-3);
+    expect(out.result.addedMass!.sectionRelativeError!).toBeLessThanOrEqual(5e-3);
     expect(out.result.warnings.join(' ')).not.toMatch(/section solver's added mass carries/);
   });
 
