@@ -42,17 +42,9 @@ import { bodyClearances } from './clearance';
  */
 const ASYMPTOTIC_ORDER = 1.8;
 
-/**
- * Nominal panels per body of the first solve when none is given (thin bodies get up to 2× more); the
- * solver doubles from here while its error estimate is above ADAPTIVE_TOLERANCE.
- */
-export const DEFAULT_PANELS_PER_BODY = 64;
-/** Error estimate (relative, every diagonal term) at which the adaptive default stops: the 0.1 % accuracy goal. */
-export const ADAPTIVE_TOLERANCE = 1e-3;
-/** Panels per body of a single-level solve (no error estimate, e.g. flow maps) when none is given. */
-export const SINGLE_LEVEL_PANELS = 128;
-/** Most panels per body the adaptive default doubles up to. */
-export const ADAPTIVE_MAX_PANELS = 256;
+/** Default nominal panels per body at the finest resolution (thin bodies get up to 2× more). */
+export const DEFAULT_PANELS_PER_BODY = 128;
+
 /**
  * Most panels at the finest level, all bodies and boundaries together: the dense LU grows as P³
  * (2,048 panels solve in a few seconds; 8,000 would take minutes and half a gigabyte).
@@ -83,37 +75,10 @@ function failure(reason: 'singular-system', column: number): SolvedSection {
   };
 }
 
-/**
- * Same as `solveSection`, also returning the model and the fine-level solution. With no panel count given,
- * the panels start at DEFAULT_PANELS_PER_BODY and double (up to ADAPTIVE_MAX_PANELS, and within
- * MAX_TOTAL_PANELS) until every diagonal term's error estimate is below ADAPTIVE_TOLERANCE.
- */
+/** Same as `solveSection`, also returning the model and the fine-level solution. */
 export function solveSectionDetailed(input: SectionInput, options: SolveOptions = {}): SolvedSection {
   validateSectionInput(input);
-  const given = options.panelsPerBody ?? input.panelsPerBody;
-  // A single level (flow maps) has no estimate to adapt on: it uses the resolution the maps were tuned for.
-  if (given !== undefined || options.skipErrorEstimate) return solveAt(input, given ?? SINGLE_LEVEL_PANELS, options);
-  let out = solveAt(input, DEFAULT_PANELS_PER_BODY, { ...options, energyCheck: false });
-  for (let n = DEFAULT_PANELS_PER_BODY; ; ) {
-    const r = out.outcome;
-    if (!r.ok || r.result.errorEstimates.every((e) => e.relativeError <= ADAPTIVE_TOLERANCE) || 2 * n > ADAPTIVE_MAX_PANELS) break;
-    if (4 * r.result.panelsFine > MAX_TOTAL_PANELS) break;
-    n *= 2;
-    out = solveAt(input, n, { ...options, energyCheck: false });
-  }
-  if (options.energyCheck && out.outcome.ok && out.model && out.fine) {
-    out.outcome.result.energyChecks = energyCheck(out.model, out.fine, fineMatrix(out.fine, 3 * input.bodies.length), input.liquidDensityKgPerM3, options.energyGridCells ?? 96);
-  }
-  return out;
-}
-
-/** The fine level's matrix, symmetrised (what the energy check compares with). */
-function fineMatrix(fine: LevelSolution, m3: number): Float64Array {
-  const m = Float64Array.from(fine.m);
-  for (let i = 0; i < m3; i++) {
-    for (let j = i + 1; j < m3; j++) m[i * m3 + j] = m[j * m3 + i] = 0.5 * (m[i * m3 + j] + m[j * m3 + i]);
-  }
-  return m;
+  return solveAt(input, options.panelsPerBody ?? input.panelsPerBody ?? DEFAULT_PANELS_PER_BODY, options);
 }
 
 /** One solve at N nominal panels per body (the input is already validated). */

@@ -41,7 +41,7 @@ export interface SectionInput {
 export interface SolveOptions {
   /**
    * Nominal panels per body at the finest resolution (overrides `SectionInput.panelsPerBody`), 16–1024; thin
-   * bodies get up to twice as many. Default: 64, doubled up to 256 until every error estimate is below 0.1 %.
+   * bodies get up to twice as many. Default 128.
    */
   panelsPerBody?: number;
   /**
