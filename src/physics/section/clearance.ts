@@ -5,19 +5,41 @@
  */
 import { lineDistance } from './lines';
 import type { SectionModel } from './model';
-import { bbox, distanceToPolygon, type Polygon } from './polygon';
+import { pointSegmentDistance, type Polygon } from './polygon';
 
-/** Smallest distance from the vertices of p to the outline q (q's bounding box first, to skip far pairs). */
+/** Edges per chunk of an outline; a chunk is skipped whole when its bounding box is farther than the best gap. */
+const CHUNK = 16;
+
+/** Smallest distance from the vertices of p to the outline q, at most `best` (chunked bounding boxes prune far edges). */
 function polygonGap(p: Polygon, q: Polygon, best: number): number {
-  const b = bbox(q);
+  const m = q.length / 2;
+  const chunks = Math.ceil(m / CHUNK);
+  const box = new Float64Array(4 * chunks);
+  for (let c = 0; c < chunks; c++) {
+    let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+    for (let e = c * CHUNK; e <= Math.min(m, (c + 1) * CHUNK); e++) {
+      const k = e % m;
+      x0 = Math.min(x0, q[2 * k]);
+      x1 = Math.max(x1, q[2 * k]);
+      y0 = Math.min(y0, q[2 * k + 1]);
+      y1 = Math.max(y1, q[2 * k + 1]);
+    }
+    box.set([x0, y0, x1, y1], 4 * c);
+  }
   let out = best;
   for (let i = 0; i < p.length; i += 2) {
     const x = p[i];
     const y = p[i + 1];
-    const dx = Math.max(b[0] - x, 0, x - b[2]);
-    const dy = Math.max(b[1] - y, 0, y - b[3]);
-    if (Math.hypot(dx, dy) >= out) continue;
-    out = Math.min(out, distanceToPolygon(q, x, y));
+    for (let c = 0; c < chunks; c++) {
+      const dx = Math.max(box[4 * c] - x, 0, x - box[4 * c + 2]);
+      const dy = Math.max(box[4 * c + 1] - y, 0, y - box[4 * c + 3]);
+      if (Math.hypot(dx, dy) >= out) continue;
+      const end = Math.min(m, (c + 1) * CHUNK);
+      for (let e = c * CHUNK; e < end; e++) {
+        const k1 = (e + 1) % m;
+        out = Math.min(out, pointSegmentDistance(x, y, q[2 * e], q[2 * e + 1], q[2 * k1], q[2 * k1 + 1]));
+      }
+    }
   }
   return out;
 }
