@@ -5,7 +5,7 @@
  * Throws TypeError / RangeError with a message naming the field, what was expected and what was got.
  */
 import type { BodySpec, BoundarySpec, SectionInput, Vec2 } from './types';
-import { validateSectionInput } from './validate';
+import { MAX_BODIES, MAX_BOUNDARIES, MAX_POLYGON_POINTS, validateSectionInput } from './validate';
 import { checkingKit, mustBe } from '../check/kit';
 
 type Obj = Record<string, unknown>;
@@ -53,6 +53,7 @@ function optPair(where: string, v: unknown): Vec2 | undefined {
 
 function points(where: string, v: unknown): Vec2[] {
   if (!Array.isArray(v)) throw new TypeError(`${where} must be an array of points [x, y], got ${show(v)}`);
+  if (v.length > MAX_POLYGON_POINTS) throw new RangeError(`${where} must list from 3 to ${MAX_POLYGON_POINTS} points [x, y], got ${v.length} points`);
   return v.map((p, k) => pair(`${where}[${k}]`, p));
 }
 
@@ -132,6 +133,9 @@ export function parseSectionInput(raw: unknown): SectionInput {
   onlyKeys('section input', o, ['liquidDensityKgPerM3', 'bodies', 'boundaries', 'panelsPerBody']);
   if (!Array.isArray(o.bodies)) throw new TypeError(`bodies must be an array of bodies, got ${show(o.bodies)}`);
   if (o.boundaries !== undefined && !Array.isArray(o.boundaries)) throw new TypeError(`boundaries must be an array, got ${show(o.boundaries)}`);
+  // Counts first, so a huge input is refused before any work on its entries.
+  if (o.bodies.length > MAX_BODIES) throw new RangeError(`bodies may hold at most ${MAX_BODIES} bodies, got ${o.bodies.length}`);
+  if (Array.isArray(o.boundaries) && o.boundaries.length > MAX_BOUNDARIES) throw new RangeError(`boundaries may hold at most ${MAX_BOUNDARIES} boundaries, got ${o.boundaries.length}`);
   const input: SectionInput = {
     liquidDensityKgPerM3: num('liquidDensityKgPerM3', o.liquidDensityKgPerM3),
     bodies: o.bodies.map(parseBody),
