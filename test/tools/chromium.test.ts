@@ -18,7 +18,7 @@ describe('the Chromium the browser tests drive', () => {
     expect(c.executablePath).not.toBe(SYSTEM_CHROMIUM);
     expect(c.env?.LD_LIBRARY_PATH).toMatch(/wetmode-chromium-[\d.]+-\d+\/lib$/);
     expect(c.label).toContain('system Chromium ignored');
-  });
+  }, 120_000); // the first call unpacks about 200 MB, which takes seconds on a busy machine
 
   it('starts and runs a page with the project flags (the chosen browser, or the packaged one under the switch)', async () => {
     const c = chooseChromium();
@@ -31,5 +31,5 @@ describe('the Chromium the browser tests drive', () => {
     } finally {
       await browser.close();
     }
-  }, 60_000);
+  }, 120_000);
 });
