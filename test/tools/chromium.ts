@@ -84,6 +84,20 @@ export function unpackPackagedChromium(): { folder: string; version: string } {
   return { folder, version };
 }
 
+/** The packaged binary and its libraries link against symbols up to GLIBC_2.34 (checked with `objdump -T`). */
+const MIN_GLIBC = '2.34';
+
+/** The running glibc's version ("2.36"), or undefined off glibc. */
+function glibcVersion(): string | undefined {
+  const header = (process.report?.getReport() as { header?: { glibcVersionRuntime?: string } } | undefined)?.header;
+  return header?.glibcVersionRuntime;
+}
+
+function olderThan(version: string, floor: string): boolean {
+  const [a, b] = [version, floor].map((v) => v.split('.').map(Number));
+  return a[0] !== b[0] ? a[0] < b[0] : (a[1] ?? 0) < (b[1] ?? 0);
+}
+
 /** Chooses the browser (see the top of this file); unpacks the packaged one when it is the choice. */
 export function chooseChromium(env: NodeJS.ProcessEnv = process.env): ChosenChromium {
   const fromEnv = env.CHROMIUM_PATH?.trim();
@@ -94,6 +108,10 @@ export function chooseChromium(env: NodeJS.ProcessEnv = process.env): ChosenChro
   }
   if (process.platform !== 'linux' || process.arch !== 'x64') {
     throw new Error(`No Chromium for the browser tests: the packaged one (${PACKAGE}) is for Linux x64 and this is ${process.platform} ${process.arch}. Set CHROMIUM_PATH to a Chromium or Chrome executable.`);
+  }
+  const glibc = glibcVersion();
+  if (glibc !== undefined && olderThan(glibc, MIN_GLIBC)) {
+    throw new Error(`No Chromium for the browser tests: the packaged one needs glibc ≥ ${MIN_GLIBC} and this machine has ${glibc}. Install Chromium (Debian: apt-get install chromium) or set CHROMIUM_PATH.`);
   }
   const { folder, version } = unpackPackagedChromium();
   const libs = join(folder, 'lib');
