@@ -1,6 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { chromium } from '@playwright/test';
-import { CHROMIUM_ARGS, SYSTEM_CHROMIUM, chooseChromium } from './chromium';
+import { CHROMIUM_ARGS, chooseChromium, packagedUnavailable } from './chromium';
+
+// Where the packaged browser cannot run (not Linux x64, or an old glibc), choosing it must say why instead.
+const packagedHere = packagedUnavailable() === undefined;
 
 describe('the Chromium the browser tests drive', () => {
   it('is CHROMIUM_PATH when that is set, whatever else is installed', () => {
@@ -8,14 +11,27 @@ describe('the Chromium the browser tests drive', () => {
     expect(c).toMatchObject({ source: 'CHROMIUM_PATH', executablePath: '/opt/some/chrome', env: undefined });
   });
 
-  it('an empty CHROMIUM_PATH counts as unset', () => {
-    expect(chooseChromium({ CHROMIUM_PATH: ' ' }).source).not.toBe('CHROMIUM_PATH');
+  it('is the system Chromium when there is one and CHROMIUM_PATH is unset or empty', () => {
+    const existing = process.execPath; // any file that exists stands in for /usr/bin/chromium
+    expect(chooseChromium({ CHROMIUM_PATH: ' ' }, existing)).toMatchObject({ source: 'system', executablePath: existing });
+    expect(chooseChromium({}, existing).source).toBe('system');
+  });
+
+  it('the packaged one is refused with a reason off Linux x64 or below glibc 2.34', () => {
+    expect(packagedUnavailable('darwin', 'arm64', undefined)).toMatch(/for Linux x64 and this is darwin arm64\. Set CHROMIUM_PATH/);
+    expect(packagedUnavailable('linux', 'x64', '2.31')).toMatch(/needs glibc ≥ 2\.34 and this machine has 2\.31/);
+    expect(packagedUnavailable('linux', 'x64', '2.34')).toBeUndefined();
+    expect(packagedUnavailable('linux', 'x64', '3.0')).toBeUndefined();
   });
 
   it('skips the system Chromium under WETMODE_IGNORE_SYSTEM_CHROMIUM=1 and unpacks the packaged one with its libraries', () => {
-    const c = chooseChromium({ WETMODE_IGNORE_SYSTEM_CHROMIUM: '1' });
+    const choose = () => chooseChromium({ WETMODE_IGNORE_SYSTEM_CHROMIUM: '1' }, process.execPath);
+    if (!packagedHere) {
+      expect(choose).toThrow(/^No Chromium for the browser tests: /);
+      return;
+    }
+    const c = choose();
     expect(c.source).toBe('packaged');
-    expect(c.executablePath).not.toBe(SYSTEM_CHROMIUM);
     expect(c.env?.LD_LIBRARY_PATH).toMatch(/wetmode-chromium-[\d.]+-\d+\/lib$/);
     expect(c.label).toContain('system Chromium ignored');
   }, 120_000); // the first call unpacks about 200 MB, which takes seconds on a busy machine

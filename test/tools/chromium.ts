@@ -98,21 +98,25 @@ function olderThan(version: string, floor: string): boolean {
   return a[0] !== b[0] ? a[0] < b[0] : (a[1] ?? 0) < (b[1] ?? 0);
 }
 
+/** Why the packaged browser cannot run on this machine, or undefined when it can. */
+export function packagedUnavailable(platform: string = process.platform, arch: string = process.arch, glibc: string | undefined = glibcVersion()): string | undefined {
+  if (platform !== 'linux' || arch !== 'x64') return `the packaged one (${PACKAGE}) is for Linux x64 and this is ${platform} ${arch}. Set CHROMIUM_PATH to a Chromium or Chrome executable.`;
+  if (glibc !== undefined && olderThan(glibc, MIN_GLIBC)) {
+    return `the packaged one needs glibc ≥ ${MIN_GLIBC} and this machine has ${glibc}. Install Chromium (Debian: apt-get install chromium) or set CHROMIUM_PATH.`;
+  }
+  return undefined;
+}
+
 /** Chooses the browser (see the top of this file); unpacks the packaged one when it is the choice. */
-export function chooseChromium(env: NodeJS.ProcessEnv = process.env): ChosenChromium {
+export function chooseChromium(env: NodeJS.ProcessEnv = process.env, systemChromium: string = SYSTEM_CHROMIUM): ChosenChromium {
   const fromEnv = env.CHROMIUM_PATH?.trim();
   if (fromEnv) return { executablePath: fromEnv, env: undefined, source: 'CHROMIUM_PATH', label: `CHROMIUM_PATH (${fromEnv})` };
   const ignoreSystem = env.WETMODE_IGNORE_SYSTEM_CHROMIUM === '1';
-  if (!ignoreSystem && existsSync(SYSTEM_CHROMIUM)) {
-    return { executablePath: SYSTEM_CHROMIUM, env: undefined, source: 'system', label: `system Chromium (${SYSTEM_CHROMIUM})` };
+  if (!ignoreSystem && existsSync(systemChromium)) {
+    return { executablePath: systemChromium, env: undefined, source: 'system', label: `system Chromium (${systemChromium})` };
   }
-  if (process.platform !== 'linux' || process.arch !== 'x64') {
-    throw new Error(`No Chromium for the browser tests: the packaged one (${PACKAGE}) is for Linux x64 and this is ${process.platform} ${process.arch}. Set CHROMIUM_PATH to a Chromium or Chrome executable.`);
-  }
-  const glibc = glibcVersion();
-  if (glibc !== undefined && olderThan(glibc, MIN_GLIBC)) {
-    throw new Error(`No Chromium for the browser tests: the packaged one needs glibc ≥ ${MIN_GLIBC} and this machine has ${glibc}. Install Chromium (Debian: apt-get install chromium) or set CHROMIUM_PATH.`);
-  }
+  const why = packagedUnavailable();
+  if (why !== undefined) throw new Error(`No Chromium for the browser tests: ${why}`);
   const { folder, version } = unpackPackagedChromium();
   const libs = join(folder, 'lib');
   return {
