@@ -90,7 +90,7 @@ describe('wetmode with many inputs in one run', () => {
       [join(dir, 'cases.jsonl'), 1, true],
       [join(dir, 'cases.jsonl'), 2, true],
     ]);
-  });
+  }, 60_000); // one section solve with its energy cross-check: about a second, several on a loaded machine
 
   it('a bad case in the middle is reported on its line, the batch goes on, and the exit status is 1', async () => {
     const bad = join(dir, 'bad.json');
