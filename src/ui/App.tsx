@@ -5,25 +5,11 @@ import { UpdatePrompt } from './shell/UpdatePrompt';
 import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
-import { SectionScreen } from './section/SectionScreen';
 import { MemberScreen } from './member/MemberScreen';
-import { ResultsScreen } from './screens/ResultsScreen';
-import { OpenLinkScreen } from './screens/OpenLinkScreen';
-import { CasesScreen, ReceivedBanner, ShareActions } from './cases';
-import { ReportScreen } from './screens/ReportScreen';
-import { AppServicesProvider, useModel } from './state/context';
+import { CasesScreen, OpenLinkScreen, ReportScreen, ResultsWithActions, SectionScreen } from './screens/lazy-screens';
+import { AppServicesProvider } from './state/context';
 import { useBoot } from './state/use-boot';
 import type { Route } from './shell/router';
-
-function ResultsWithActions() {
-  const [state] = useModel();
-  return (
-    <ResultsScreen
-      banner={state.doc ? <ReceivedBanner doc={state.doc} /> : null}
-      actions={state.doc ? <ShareActions doc={state.doc} /> : null}
-    />
-  );
-}
 
 function Screen({ route }: { route: Route }) {
   switch (route.screen) {

@@ -11,7 +11,7 @@ import type { Case, KeyResult } from '../../physics/case';
 import { sameCaseContent } from '../../physics/case';
 import type { MemberBuild } from '../../physics/members';
 import type { FieldErrors } from '../../forms';
-import { readCase } from '../../forms/read-case';
+import { readCaseOnDemand } from './read-on-demand';
 import type { CaseAnswer, CaseRequest } from '../../worker/solve-case';
 import type { Answer } from '../../worker/solver-client';
 
@@ -161,7 +161,8 @@ export class AppModel {
   private recompute(): void {
     const { doc } = this.state;
     if (!doc) return;
-    const reading = readCase(doc);
+    const reading = readCaseOnDemand(doc, () => this.recompute(), (m) => this.set({ solverMessage: m }));
+    if (!reading) return; // read again once the unit reader has loaded
     this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors });
     if (!reading.ok) return; // last good results stay, marked out of date
     const key = contentKey(doc);

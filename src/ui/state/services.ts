@@ -10,12 +10,16 @@ import { excitationDefaults } from '../../forms/excitation';
 import { sameCaseContent, type Case } from '../../physics/case';
 import type { DemoCase } from '../../forms';
 import { AppModel } from './app-model';
+import { loadUnitReaderAfterFirstAnswer } from './read-on-demand';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
     () => new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
   );
-  return new AppModel(client);
+  client.start(); // the worker loads while the device store opens
+  const model = new AppModel(client);
+  loadUnitReaderAfterFirstAnswer(model);
+  return model;
 }
 
 /** A fresh, unsaved case from a demo, with its own id. */
