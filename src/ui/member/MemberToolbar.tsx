@@ -3,7 +3,7 @@ import { FORMS, type UnitSystem } from '../../forms';
 import { convertExcitationValues } from '../../forms/excitation';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
-import { saveOpenCase } from '../cases';
+import { saveOpenCase } from '../cases/open-case';
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {

@@ -1,7 +1,6 @@
 import type { MemberModel } from '../../physics/beam/model';
 import { hashFor } from '../shell/router';
 import { sectionFormFromMember } from './from-member';
-import { loadSectionForm } from './SectionScreen';
 
 /**
  * Opens the Section view on this member's submerged section and surroundings (its added mass and flow map).
@@ -10,7 +9,8 @@ import { loadSectionForm } from './SectionScreen';
 export function MemberSectionLink({ model, label = 'Section view' }: { model: MemberModel | null; label?: string }) {
   const onClick = () => {
     const s = model ? sectionFormFromMember(model) : null;
-    if (s) loadSectionForm(s.form, s.about);
+    // The Section view is a chunk of its own; the form is handed over before the route change renders it.
+    if (s) void import('./SectionScreen').then((m) => m.loadSectionForm(s.form, s.about));
   };
   return (
     <a class="btn" href={hashFor('section')} onClick={onClick}>
