@@ -1,7 +1,8 @@
 import { useEffect, useState } from 'preact/hooks';
 import { onBeforeUpdate } from '../shell/before-update';
 import type { AppServices } from './context';
-import { createModel, firstCase, openDeviceStore } from './services';
+import { createModel, firstCase } from './services';
+import { openDeviceStoreOnce } from './early-store';
 
 /**
  * Creates the services once, opens the device store, and opens the first case (draft, or the demo on a
@@ -14,7 +15,7 @@ export function useBoot(openingLink: boolean): AppServices {
     let cancelled = false;
     const { model } = services;
     void (async () => {
-      const opened = await openDeviceStore();
+      const opened = await openDeviceStoreOnce();
       if (cancelled) return;
       if (opened.store) model.setDraftSink({ saveDraft: async (c) => {
         const r = await opened.store.saveDraft(c);
