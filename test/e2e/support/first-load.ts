@@ -108,3 +108,32 @@ export function describeLoad(label: string, load: FirstLoad): string {
   const lines = load.scripts.map((s) => `    ${s.path}: ${kb(s.rawBytes)} kB raw, ${kb(s.gzipBytes)} kB gzip`);
   return [`  ${label}: first answer ${load.firstAnswerMs.toFixed(0)} ms; JS before it ${kb(load.gzipBytes)} kB gzip (${kb(load.rawBytes)} kB raw)`, ...lines].join('\n');
 }
+
+export interface FirstLoadSeries {
+  cold: FirstLoad[];
+  warm: FirstLoad[];
+}
+
+/** `runs` cold loads, each in a fresh context, each followed by a warm visit in the same context. */
+export async function measureFirstLoads(newContext: () => Promise<BrowserContext>, url: string, distDir: string, runs = 3): Promise<FirstLoadSeries> {
+  const cold: FirstLoad[] = [];
+  const warm: FirstLoad[] = [];
+  for (let i = 0; i < runs; i++) {
+    const context = await newContext();
+    cold.push(await measureFirstLoad(context, url, distDir, { thenInstallServiceWorker: true }));
+    warm.push(await measureFirstLoad(context, url, distDir));
+    await context.close();
+  }
+  return { cold, warm };
+}
+
+/** The figures of a series: medians and bests of the throttled times, and the scripts of the first cold load. */
+export function describeSeries({ cold, warm }: FirstLoadSeries): string {
+  const ms = (ls: FirstLoad[]) => ls.map((l) => l.firstAnswerMs);
+  const fig = (ls: FirstLoad[]) => `median ${median(ms(ls)).toFixed(0)} ms, best ${Math.min(...ms(ls)).toFixed(0)} ms (${ms(ls).map((x) => x.toFixed(0)).join(', ')})`;
+  return [
+    `first answer at 4x CPU throttle, cold: ${fig(cold)}`,
+    `first answer at 4x CPU throttle, warm (service worker): ${fig(warm)}`,
+    describeLoad('cold load', cold[0]),
+  ].join('\n');
+}
