@@ -5,10 +5,24 @@
  */
 import { loadUnitReader } from '../../units/math-on-demand';
 import { lazyScreen } from '../shell/lazy-screen';
+import { parseHash } from '../shell/router';
+import { useServices } from '../state/context';
 
 const withUnits = <T,>(chunk: Promise<T>): Promise<T> => Promise.all([chunk, loadUnitReader()]).then(([m]) => m);
 
-export const CasesScreen = lazyScreen('Cases', () => import('../cases/CasesScreen').then((m) => m.CasesScreen));
+const LazyCases = lazyScreen('Cases', () => import('../cases/CasesScreen').then((m) => m.CasesScreen));
+
+/**
+ * The Cases list. A start with no route shows it while the app boots, and then, when a draft or the demo opens,
+ * moves on to the Member screen: its code is fetched only once the boot is over and the route still asks for it.
+ */
+export function CasesScreen() {
+  const { store, storeMessage } = useServices();
+  const booting = store === null && storeMessage === null;
+  const movingOn = parseHash(location.hash).screen !== 'cases'; // the boot has set the hash; the route follows
+  if (booting || movingOn) return <p class="loading-screen" role="status">Opening the cases on this device…</p>;
+  return <LazyCases />;
+}
 export const ResultsWithActions = lazyScreen('Results', () => withUnits(import('./ResultsWithActions')).then((m) => m.ResultsWithActions));
 export const ReportScreen = lazyScreen('Report', () => withUnits(import('./ReportScreen')).then((m) => m.ReportScreen));
 export const SectionScreen = lazyScreen('Section', () => withUnits(import('../section/SectionScreen')).then((m) => m.SectionScreen));
