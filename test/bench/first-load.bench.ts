@@ -1,69 +1,38 @@
 /**
- * JavaScript a cold first load fetches before the app can answer: the scripts dist/index.html loads (module
- * scripts and modulepreload links) and, transitively, the chunks they import statically. Dynamic imports and
- * workers load later and are listed apart. Sizes are raw and gzip (level 9, what a static server's gzip gives
- * within a few per cent). Each file is checked against the service worker's precache list, so offline still works.
- * Target: ≤ 150 kB gzip before the first answer.
+ * First load of the built app (dist/, from `npm run build`) in Chromium at 4× CPU throttling: gzipped JavaScript
+ * before the first answer (target ≤ 150 kB) and time to the first answer, cold and warm (target ≤ 1.0 s).
+ * The same measurement as test/e2e/first-load.spec.ts, served by `vite preview` on a spare port.
  */
-import { existsSync, readFileSync, readdirSync } from 'node:fs';
-import { join, posix } from 'node:path';
-import { gzipSync } from 'node:zlib';
+import { existsSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium } from '@playwright/test';
+import { preview } from 'vite';
+import { describeSeries, measureFirstLoads, median } from '../e2e/support/first-load';
 
-const DIST = 'dist';
-const TARGET_GZIP_BYTES = 150_000;
+const DIST = join(process.cwd(), 'dist');
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
-/** Paths (relative to dist/) of the scripts index.html loads eagerly. */
-function htmlScripts(html: string): string[] {
-  const out: string[] = [];
-  for (const m of html.matchAll(/<script\b[^>]*\btype="module"[^>]*\bsrc="([^"]+)"/g)) out.push(m[1]);
-  for (const m of html.matchAll(/<link\b[^>]*\brel="modulepreload"[^>]*\bhref="([^"]+)"/g)) out.push(m[1]);
-  return out.map((p) => p.replace(/^\//, ''));
-}
-
-/** Static imports of a built ES module (`import … from "./x.js"`, `import "./x.js"`), not `import("./x.js")`. */
-function staticImports(file: string, code: string): string[] {
-  const out: string[] = [];
-  for (const m of code.matchAll(/\b(?:import|export)\s*(?:[\w*{}\s,$]+?\s*from\s*)?["']([^"']+\.js)["']/g)) {
-    out.push(posix.normalize(posix.join(posix.dirname(file), m[1])));
+export async function run(): Promise<void> {
+  if (!existsSync(join(DIST, 'index.html'))) {
+    console.log('first load: not measured (no dist/: run `npm run build` first)');
+    return;
   }
-  return out;
-}
-
-function precached(): Set<string> {
-  const sw = existsSync(join(DIST, 'sw.js')) ? readFileSync(join(DIST, 'sw.js'), 'utf8') : '';
-  return new Set([...sw.matchAll(/url:\s*"([^"]+)"/g)].map((m) => m[1]));
-}
-
-const kB = (n: number) => `${(n / 1000).toFixed(1)} kB`;
-
-export function run(): void {
-  const html = readFileSync(join(DIST, 'index.html'), 'utf8');
-  const cache = precached();
-  const eager = new Set<string>();
-  const queue = htmlScripts(html);
-  while (queue.length > 0) {
-    const f = queue.shift()!;
-    if (eager.has(f)) continue;
-    eager.add(f);
-    queue.push(...staticImports(f, readFileSync(join(DIST, f), 'utf8')));
+  if (!existsSync(CHROMIUM)) {
+    console.log(`first load: not measured (no Chromium at ${CHROMIUM}; set CHROMIUM_PATH)`);
+    return;
   }
-  let raw = 0;
-  let gz = 0;
-  for (const f of eager) {
-    const bytes = readFileSync(join(DIST, f));
-    const g = gzipSync(bytes, { level: 9 }).length;
-    raw += bytes.length;
-    gz += g;
-    console.log(`  eager  ${f.padEnd(50)} ${kB(bytes.length).padStart(9)} raw ${kB(g).padStart(9)} gzip  precached: ${cache.has(f) ? 'yes' : 'NO'}`);
+  console.log(`dist/ built ${statSync(join(DIST, 'index.html')).mtime.toISOString()}`);
+  // Plain static serving of dist/ (the app's own config, with its plugins, is not needed to serve it).
+  const server = await preview({ configFile: false, root: process.cwd(), build: { outDir: 'dist' }, logLevel: 'silent', preview: { port: Number(process.env.WETMODE_BENCH_PORT ?? 4299), strictPort: false } });
+  const browser = await chromium.launch({ executablePath: CHROMIUM, args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'] });
+  try {
+    const url = server.resolvedUrls?.local[0] ?? 'http://localhost:4299/';
+    const series = await measureFirstLoads(() => browser.newContext(), url, DIST);
+    console.log(describeSeries(series));
+    const kb = series.cold[0].gzipBytes / 1000;
+    console.log(`targets: JS before first answer ≤ 150 kB gzip: ${kb <= 150 ? 'met' : 'NOT met'}; first answer ≤ 1000 ms (median, cold): ${median(series.cold.map((l) => l.firstAnswerMs)) <= 1000 ? 'met' : 'NOT met'}`);
+  } finally {
+    await browser.close();
+    await server.close();
   }
-  const later = readdirSync(join(DIST, 'assets'))
-    .map((n) => `assets/${n}`)
-    .filter((f) => f.endsWith('.js') && !eager.has(f));
-  for (const f of later) {
-    const bytes = readFileSync(join(DIST, f));
-    console.log(`  later  ${f.padEnd(50)} ${kB(bytes.length).padStart(9)} raw ${kB(gzipSync(bytes, { level: 9 }).length).padStart(9)} gzip  precached: ${cache.has(f) ? 'yes' : 'NO'}`);
-  }
-  console.log(
-    `${'first-load JavaScript (eager closure of index.html)'.padEnd(58)} ${kB(raw)} raw, ${kB(gz)} gzip in ${eager.size} file(s)  target ≤ ${kB(TARGET_GZIP_BYTES)} gzip: ${gz <= TARGET_GZIP_BYTES ? 'met' : 'NOT met'}`,
-  );
 }

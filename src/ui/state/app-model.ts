@@ -11,7 +11,7 @@ import type { Case, KeyResult } from '../../case';
 import { sameCaseContent } from '../../case';
 import type { MemberBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
-import { readCase } from '../../app/read-case';
+import { readCaseOnDemand } from './read-on-demand';
 import { revisionOf } from '../../store';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
@@ -200,7 +200,8 @@ export class AppModel {
   private recompute(): void {
     const { doc } = this.state;
     if (!doc) return;
-    const reading = readCase(doc);
+    const reading = readCaseOnDemand(doc, () => this.recompute(), (m) => this.set({ solverMessage: m }));
+    if (!reading) return; // read again once the unit reader has loaded
     this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors });
     if (!reading.ok) return; // last good results stay, marked out of date
     const key = contentKey(doc);

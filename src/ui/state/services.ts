@@ -13,12 +13,16 @@ import type { SectionAnswer, SectionRequest } from '../../worker/solve-section';
 import { SectionModel } from '../section/section-model';
 import type { SectionSolver } from '../section/section-solves';
 import { DEMO_CASES } from '../../kinds/registry';
+import { loadUnitReaderAfterFirstAnswer } from './read-on-demand';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
     () => new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
   );
-  return new AppModel(client);
+  client.start(); // the worker loads while the device store opens
+  const model = new AppModel(client);
+  loadUnitReaderAfterFirstAnswer(model);
+  return model;
 }
 
 /** The energy check of eight bodies takes about 9 s on the development machine; allow a slow tablet well beyond that. */

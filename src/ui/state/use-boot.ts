@@ -3,8 +3,9 @@ import { onBeforeUpdate } from '../shell/before-update';
 import type { AppServices } from './context';
 import { clearFallback, readFallbacks, writeFallback } from './draft-fallback';
 import { followStoreChanges } from './remote-changes';
-import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks, openDeviceStore } from './services';
-import { claimTab, openTabs, tabIdentity } from './tab';
+import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks } from './services';
+import { openTabs, tabIdentity } from './tab';
+import { openDeviceStoreOnce } from './early-store';
 
 /**
  * Creates the services once, opens the device store, and opens the first case (this tab's draft, a closed tab's
@@ -23,8 +24,9 @@ export function useBoot(openingLink: boolean): AppServices {
     const { model, section, sectionSolver } = services;
     let tab = tabIdentity();
     void (async () => {
-      tab = await claimTab();
-      const opened = await openDeviceStore(tab.id);
+      const early = await openDeviceStoreOnce();
+      tab = early.tab;
+      const opened = early.opened;
       if (cancelled) return;
       const store = opened.store;
       try {
