@@ -74,6 +74,32 @@ function readLimits(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs:
   return Object.keys(out).length > 0 ? out : undefined;
 }
 
+/**
+ * The machine of the MACHINE fields (resonance-fields.ts) as the screening takes it: shaft speed in rpm, blade
+ * count, highest speed and the orders; none when the shaft speed is empty. Messages go into `errs` by field key.
+ */
+export function readMachinery(r: ReturnType<typeof makeReader>, errs: FieldErrors): Machine[] {
+  const machinery: Machine[] = [];
+  const rpm = r.opt('machineSpeed');
+  const blades = r.opt('bladeCount');
+  const rpmMax = r.opt('machineSpeedMax');
+  if (blades !== undefined && !Number.isInteger(blades)) errs.bladeCount = `blades or vanes must be a whole number, got ${blades}`;
+  if (rpm === undefined && (blades !== undefined || rpmMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
+  if (rpm !== undefined && rpmMax !== undefined && !(rpmMax >= rpm)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', rpm)})`;
+  if (rpm !== undefined) {
+    // The frequency dimension reads rpm into Hz; the screening wants rpm.
+    machinery.push({
+      label: 'machine',
+      shaftSpeedRpm: rpm * 60,
+      shaftSpeedMaxRpm: rpmMax !== undefined ? rpmMax * 60 : undefined,
+      bladeCount: blades,
+      shaftOrders: r.list('shaftOrders'),
+      bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,
+    });
+  }
+  return machinery;
+}
+
 export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
 
 /** Reads the resonance inputs for a built member; messages by field key, in the user's units. */
@@ -101,24 +127,7 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
     }
   }
 
-  const machinery: Machine[] = [];
-  const rpm = r.opt('machineSpeed');
-  const blades = r.opt('bladeCount');
-  const rpmMax = r.opt('machineSpeedMax');
-  if (blades !== undefined && !Number.isInteger(blades)) errs.bladeCount = `blades or vanes must be a whole number, got ${blades}`;
-  if (rpm === undefined && (blades !== undefined || rpmMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
-  if (rpm !== undefined && rpmMax !== undefined && !(rpmMax >= rpm)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', rpm)})`;
-  if (rpm !== undefined) {
-    // The frequency dimension reads rpm into Hz; the screening wants rpm.
-    machinery.push({
-      label: 'machine',
-      shaftSpeedRpm: rpm * 60,
-      shaftSpeedMaxRpm: rpmMax !== undefined ? rpmMax * 60 : undefined,
-      bladeCount: blades,
-      shaftOrders: r.list('shaftOrders'),
-      bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,
-    });
-  }
+  const machinery = readMachinery(r, errs);
   const limits = readLimits(spec, r, errs);
   if (Object.keys(errs).length > 0) return { ok: false, errors: errs };
 
