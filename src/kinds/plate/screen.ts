@@ -1,7 +1,7 @@
 /**
  * Resonance screening of a plate panel: every reported mode against the machinery orders (the shared
  * machinery rule, ±margin, src/physics/excitation/machinery.ts) and, across a tank, the wet modes against the
- * tank's lowest sloshing frequencies: near those the "no sloshing" (pressure-release surface) assumption of
+ * tank's lowest sloshing frequencies (the nearest one per mode): near those the "no sloshing" (pressure-release surface) assumption of
  * the wet solve fails and the liquid's waves can drive the plate. Pure; numbers come from the plate result.
  */
 import { DEFAULT_LIMITS } from '../../physics/excitation';
@@ -80,7 +80,10 @@ export function screenPlate(result: PlateResult, excitation: PlateExcitation): P
     for (const line of lines) checks.push(machine(line, f, basis));
     const dryF = result.dry.frequenciesHz[modeIndex];
     if (alsoDry && dryF !== undefined) for (const line of lines) checks.push(machine(line, dryF, 'dry'));
-    for (const s of sloshing) checks.push(sloshingCheck(s, f, margin));
+    // Only the nearest sloshing frequency per mode: the others are further away, so they cannot decide its verdict.
+    const slosh = sloshing.map((sl) => sloshingCheck(sl, f, margin));
+    const nearest = worstIndex(slosh);
+    if (nearest >= 0) checks.push(slosh[nearest]);
     const w = worstIndex(checks);
     return { modeIndex, frequencyHz: f, checks, verdict: w < 0 ? 'clear' : checks[w].verdict };
   });
