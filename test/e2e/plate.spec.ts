@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { test, expect, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
 import { wetmodeJson, formatHz } from './support/cli';
 
 /** The Marrow Creek baffle: the same plate as examples/plate-marrow-creek-baffle.json, run through `wetmode plate`. */
@@ -23,6 +24,11 @@ const CHOSEN: Record<string, string> = {
   topEdge: 'free',
   liquidSetting: 'across-tank-2',
 };
+
+async function expectNoSeriousAxeViolations(page: Page) {
+  const scan = await new AxeBuilder({ page }).analyze();
+  expect(scan.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
+}
 
 async function shoot(page: Page, name: string) {
   for (const size of [
@@ -62,6 +68,7 @@ test('a plate panel entered with the form gives the numbers of wetmode plate, dr
   await page.locator('[data-field="bladeCount"] input').fill('3');
   await expect(page.getByTestId('quick-verdict')).toContainText('clear');
   await shoot(page, 'member');
+  await expectNoSeriousAxeViolations(page);
 
   await page.goto('/#/results');
   const table = page.locator('table.modes-table');
@@ -81,6 +88,7 @@ test('a plate panel entered with the form gives the numbers of wetmode plate, dr
   await expect(page.locator('table.checks-table')).toContainText('blade pass');
   await page.getByRole('region', { name: 'Mode shapes on the plate' }).screenshot({ path: 'screenshots/plate-shapes.png' });
   await shoot(page, 'results');
+  await expectNoSeriousAxeViolations(page);
 
   // Saved on this device and reopened from the Cases list.
   await page.goto('/#/member');
