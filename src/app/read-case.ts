@@ -4,13 +4,16 @@
  */
 import type { Case } from '../case';
 import type { CaseExcitation } from '../physics/excitation/from-member';
-import type { MemberBuild } from '../kinds/common/types';
+import type { MemberBuild, PlateBuild } from '../kinds/common/types';
 import { kindOf } from '../kinds/registry';
+import { type PlateExcitation, readPlateExcitation } from '../kinds/plate-panel/excitation';
 import { readExcitation } from '../forms/excitation';
 import { FORM_ERROR_KEY, type FieldErrors } from '../forms/types';
+import type { CaseRequest } from './solve-case';
 
 export type CaseReading =
-  | { ok: true; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors }
+  | { ok: true; engine: 'beam'; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors }
+  | { ok: true; engine: 'plate'; build: PlateBuild; excitation: PlateExcitation | null; excitationErrors: FieldErrors }
   | { ok: false; errors: FieldErrors; excitationErrors: FieldErrors };
 
 /**
@@ -32,8 +35,22 @@ function readCaseUnsafe(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitSy
   const kind = kindOf(c.kind);
   const r = kind.form.build(c.inputs, c.unitSystem);
   if (!r.ok) return { ok: false, errors: r.errors, excitationErrors: {} };
-  const e = readExcitation(kind.resonance, c.excitation, c.unitSystem, r.build);
+  const build = r.build;
+  if (build.engine === 'plate') {
+    const e = readPlateExcitation(c.excitation, c.unitSystem);
+    return e.ok
+      ? { ok: true, engine: 'plate', build, excitation: e.excitation, excitationErrors: {} }
+      : { ok: true, engine: 'plate', build, excitation: null, excitationErrors: e.errors };
+  }
+  const e = readExcitation(kind.resonance, c.excitation, c.unitSystem, build);
   return e.ok
-    ? { ok: true, build: r.build, excitation: e.excitation, excitationErrors: {} }
-    : { ok: true, build: r.build, excitation: null, excitationErrors: e.errors };
+    ? { ok: true, engine: 'beam', build, excitation: e.excitation, excitationErrors: {} }
+    : { ok: true, engine: 'beam', build, excitation: null, excitationErrors: e.errors };
+}
+
+/** The solver request for a case that reads, by the engine its kind names. */
+export function requestOf(reading: Extract<CaseReading, { ok: true }>): CaseRequest {
+  return reading.engine === 'plate'
+    ? { op: 'case', engine: 'plate', plate: reading.build.plate, excitation: reading.excitation }
+    : { op: 'case', model: reading.build.model, excitation: reading.excitation };
 }

@@ -9,30 +9,52 @@ import type { MemberFailureReason, MemberResult } from '../physics/beam/result';
 import { screenResonance } from '../physics/excitation';
 import { screeningInputFor, type CaseExcitation } from '../physics/excitation/from-member';
 import type { ScreeningResult } from '../physics/excitation/results';
+import { solvePlate, type PlateInput, type PlateOutcome, type PlateResult } from '../physics/plate';
 import type { KindEngine } from '../kinds/kind-module';
+import type { PlateExcitation } from '../kinds/plate-panel/excitation';
+import { type PlateScreening, screenPlate } from '../kinds/plate-panel/screen';
 
-export interface CaseRequest {
+/** A beam member's request; `engine` absent = 'beam' (`KindModule.engine`, src/kinds/kind-module.ts). */
+export interface BeamCaseRequest {
   op: 'case';
-  /**
-   * The engine that solves the model (`KindModule.engine`, src/kinds/kind-module.ts); absent = 'beam'. A kind
-   * that is not a beam adds its engine and model type here as another branch of this request.
-   */
-  engine?: KindEngine;
+  engine?: 'beam';
   model: MemberModel;
   /** Null: no screening inputs yet (frequencies only). */
   excitation: CaseExcitation | null;
 }
 
-export type CaseAnswer =
-  | {
-      ok: true;
-      member: MemberResult;
-      screening: ScreeningResult | null;
-      /** Why the screening could not run, in words (the frequencies are still good). */
-      screeningError: string | null;
-      elapsedMs: number;
-    }
-  | { ok: false; reason: MemberFailureReason | 'invalid-input'; message: string };
+/** A plate panel's request (src/physics/plate). */
+export interface PlateCaseRequest {
+  op: 'case';
+  engine: 'plate';
+  plate: PlateInput;
+  excitation: PlateExcitation | null;
+}
+
+export type CaseRequest = BeamCaseRequest | PlateCaseRequest;
+
+export interface BeamSolved {
+  ok: true;
+  engine?: 'beam';
+  member: MemberResult;
+  screening: ScreeningResult | null;
+  /** Why the screening could not run, in words (the frequencies are still good). */
+  screeningError: string | null;
+  elapsedMs: number;
+}
+
+export interface PlateSolved {
+  ok: true;
+  engine: 'plate';
+  plate: PlateResult;
+  screening: PlateScreening | null;
+  screeningError: string | null;
+  elapsedMs: number;
+}
+
+type PlateFailureReason = Extract<PlateOutcome, { ok: false }>['reason'];
+
+export type CaseAnswer = BeamSolved | PlateSolved | { ok: false; reason: MemberFailureReason | PlateFailureReason | 'invalid-input'; message: string };
 
 function message(e: unknown): string {
   return e instanceof Error ? e.message : String(e);
@@ -42,11 +64,13 @@ export function solveCase(req: CaseRequest, now: () => number = () => performanc
   const engine: KindEngine = req.engine ?? 'beam';
   switch (engine) {
     case 'beam':
-      return solveBeamCase(req, now);
+      return solveBeamCase(req as BeamCaseRequest, now);
+    case 'plate':
+      return solvePlateCase(req as PlateCaseRequest, now);
   }
 }
 
-function solveBeamCase(req: CaseRequest, now: () => number): CaseAnswer {
+function solveBeamCase(req: BeamCaseRequest, now: () => number): CaseAnswer {
   const t0 = now();
   let outcome;
   try {
@@ -65,4 +89,25 @@ function solveBeamCase(req: CaseRequest, now: () => number): CaseAnswer {
     }
   }
   return { ok: true, member: outcome.result, screening, screeningError, elapsedMs: now() - t0 };
+}
+
+function solvePlateCase(req: PlateCaseRequest, now: () => number): CaseAnswer {
+  const t0 = now();
+  let outcome: PlateOutcome;
+  try {
+    outcome = solvePlate(req.plate);
+  } catch (e) {
+    return { ok: false, reason: 'invalid-input', message: message(e) };
+  }
+  if (!outcome.ok) return outcome;
+  let screening: PlateScreening | null = null;
+  let screeningError: string | null = null;
+  if (req.excitation) {
+    try {
+      screening = screenPlate(outcome.result, req.excitation);
+    } catch (e) {
+      screeningError = message(e);
+    }
+  }
+  return { ok: true, engine: 'plate', plate: outcome.result, screening, screeningError, elapsedMs: now() - t0 };
 }

@@ -4,10 +4,11 @@
  * name and tag, the member model used, frequencies, the verdict with every check, and the cautions.
  */
 import { caseFromFileText } from '../share';
-import { readCase } from '../app/read-case';
+import { readCase, requestOf } from '../app/read-case';
 import { solveCase } from '../app/solve-case';
 import { cautionLines } from '../text/cautions';
 import { toJson } from './json-out';
+import { plateCaseJson } from './plate-case-json';
 
 function fieldMessages(errors: Record<string, string>): string {
   return Object.entries(errors)
@@ -21,10 +22,14 @@ export function runCaseCommand(inputText: string): string {
   const c = parsed.value;
   const reading = readCase(c);
   if (!reading.ok) throw new Error(`the case "${c.name || c.id}" has inputs that do not read: ${fieldMessages(reading.errors)}`);
-  const answer = solveCase({ op: 'case', model: reading.build.model, excitation: reading.excitation }, () => 0);
-  const cautions = cautionLines();
+  const answer = solveCase(requestOf(reading), () => 0);
+  const cautions = cautionLines(reading.engine);
   const head = { case: { id: c.id, name: c.name, tag: c.tag, kind: c.kind, unitSystem: c.unitSystem, updatedAt: c.updatedAt } };
   if (!answer.ok) return toJson({ ok: false, ...head, reason: answer.reason, message: answer.message, cautions });
+  if (answer.engine === 'plate' || reading.engine === 'plate') {
+    if (answer.engine !== 'plate' || reading.engine !== 'plate') throw new Error('the plate case was answered by another engine');
+    return plateCaseJson(head, answer, reading.build, reading.excitationErrors, cautions);
+  }
   const m = answer.member;
   return toJson({
     ok: true,

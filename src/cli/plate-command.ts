@@ -10,7 +10,7 @@ import { parseJsonText, toJson } from './json-out';
 export function runPlateCommand(inputText: string): string {
   const input = parsePlateInput(parseJsonText(inputText, 'plate'));
   const outcome = solvePlate(input);
-  const cautions = cautionLines();
+  const cautions = cautionLines('plate');
   if (!outcome.ok) return toJson({ ok: false, reason: outcome.reason, message: outcome.message, cautions });
   const r = outcome.result;
   return toJson({

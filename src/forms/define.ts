@@ -2,7 +2,7 @@
  * Turns a kind's field list and its mapping into a MemberForm: defaults per system, reading with per-field
  * and cross-field messages, building, and converting values between unit systems.
  */
-import type { MemberBuild } from '../kinds/common/types';
+import type { KindBuild, MemberBuild } from '../kinds/common/types';
 import { checkedField } from '../physics/check/kit';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
@@ -10,7 +10,7 @@ import { guardedBuild } from './total-build';
 import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
 
 /** The parts of a kind's form; `I` is the kind's SI input. */
-export interface FormSpec<I> {
+export interface FormSpec<I, B extends KindBuild = MemberBuild> {
   kind: MemberKind;
   title: string;
   summary: string;
@@ -27,7 +27,7 @@ export interface FormSpec<I> {
    * the field it is about (e.g. `{ outerDiameterM: 'outerDiameter' }`); unmapped paths go to FORM_ERROR_KEY.
    */
   coreFields?: Readonly<Record<string, string>>;
-  buildModel(input: I): MemberBuild;
+  buildModel(input: I): B;
 }
 
 /**
@@ -55,14 +55,14 @@ export function convertFieldValues(fields: readonly FieldDef[], values: FieldVal
   return out;
 }
 
-export function defineForm<I>(spec: FormSpec<I>): MemberForm<I> {
+export function defineForm<I, B extends KindBuild = MemberBuild>(spec: FormSpec<I, B>): MemberForm<I, B> {
   const { fields } = spec;
   const keys = new Set<string>();
   for (const f of fields) {
     if (keys.has(f.key)) throw new RangeError(`${spec.kind} form: field keys must be unique, got "${f.key}" twice`);
     keys.add(f.key);
   }
-  const form: MemberForm<I> = {
+  const form: MemberForm<I, B> = {
     kind: spec.kind,
     title: spec.title,
     summary: spec.summary,

@@ -74,6 +74,32 @@ function readLimits(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs:
   return Object.keys(out).length > 0 ? out : undefined;
 }
 
+/**
+ * The machine of the MACHINE fields (resonance-fields.ts) as the screening takes it: shaft speed in rpm, blade
+ * count, highest speed and the orders; none when the shaft speed is empty. Messages go into `errs` by field key.
+ */
+export function readMachinery(r: ReturnType<typeof makeReader>, errs: FieldErrors): Machine[] {
+  const machinery: Machine[] = [];
+  // The frequency dimension reads "1780 rpm" into Hz, the core's unit for shaft speed.
+  const hz = r.opt('machineSpeed');
+  const blades = r.opt('bladeCount');
+  const hzMax = r.opt('machineSpeedMax');
+  if (blades !== undefined && !Number.isInteger(blades)) errs.bladeCount = `blades or vanes must be a whole number, got ${blades}`;
+  if (hz === undefined && (blades !== undefined || hzMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
+  if (hz !== undefined && hzMax !== undefined && !(hzMax >= hz)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', hz)})`;
+  if (hz !== undefined) {
+    machinery.push({
+      label: 'machine',
+      shaftSpeedHz: hz,
+      shaftSpeedMaxHz: hzMax,
+      bladeCount: blades,
+      shaftOrders: r.list('shaftOrders'),
+      bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,
+    });
+  }
+  return machinery;
+}
+
 export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
 
 /** Reads the resonance inputs for a built member; messages by field key, in the user's units. */
@@ -101,24 +127,7 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
     }
   }
 
-  const machinery: Machine[] = [];
-  // The frequency dimension reads "1780 rpm" into Hz, the core's unit for shaft speed.
-  const hz = r.opt('machineSpeed');
-  const blades = r.opt('bladeCount');
-  const hzMax = r.opt('machineSpeedMax');
-  if (blades !== undefined && !Number.isInteger(blades)) errs.bladeCount = `blades or vanes must be a whole number, got ${blades}`;
-  if (hz === undefined && (blades !== undefined || hzMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
-  if (hz !== undefined && hzMax !== undefined && !(hzMax >= hz)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', hz)})`;
-  if (hz !== undefined) {
-    machinery.push({
-      label: 'machine',
-      shaftSpeedHz: hz,
-      shaftSpeedMaxHz: hzMax,
-      bladeCount: blades,
-      shaftOrders: r.list('shaftOrders'),
-      bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,
-    });
-  }
+  const machinery = readMachinery(r, errs);
   const limits = readLimits(spec, r, errs);
   if (Object.keys(errs).length > 0) return { ok: false, errors: errs };
 

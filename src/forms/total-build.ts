@@ -5,7 +5,6 @@
  * the model is checked for finiteness, and any failure comes back as a message beside the field that most
  * likely caused it (the one holding the most extreme number), or as a form-wide message.
  */
-import type { MemberBuild } from '../kinds/common/types';
 import { type FieldDef, type FieldErrors, FORM_ERROR_KEY } from './types';
 import type { ReadValue } from './read';
 
@@ -66,12 +65,12 @@ export function buildFailure(fields: readonly FieldDef[], read: Map<string, Read
 }
 
 /** Runs `build` so that it cannot throw: the build, or messages by field (`read` is asked for only on failure). */
-export function guardedBuild(
+export function guardedBuild<B>(
   fields: readonly FieldDef[],
   read: () => Map<string, ReadValue>,
-  build: () => MemberBuild,
-): { ok: true; build: MemberBuild } | { ok: false; errors: FieldErrors } {
-  let b: MemberBuild;
+  build: () => B,
+): { ok: true; build: B } | { ok: false; errors: FieldErrors } {
+  let b: B;
   try {
     b = build();
   } catch (e) {

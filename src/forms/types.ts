@@ -5,7 +5,7 @@
  * Values are kept as typed, one string per field key (`{ outerDiameter: '610', wallThickness: '0.5 in' }`).
  * A bare number takes the field's unit for the chosen unit system; a number with a unit is read as typed.
  */
-import type { MemberBuild } from '../kinds/common/types';
+import type { KindBuild, MemberBuild } from '../kinds/common/types';
 import type { KindId } from '../kinds/registry-pure';
 import type { Dimension, UnitSystem } from '../units';
 
@@ -81,10 +81,10 @@ export interface ChoiceField extends FieldBase {
 export type FieldDef = QuantityField | QuantityListField | ChoiceField;
 
 export type ToInputResult<I> = { ok: true; input: I } | { ok: false; errors: FieldErrors };
-export type BuildResult<I> = { ok: true; input: I; build: MemberBuild } | { ok: false; errors: FieldErrors };
+export type BuildResult<I, B extends KindBuild = MemberBuild> = { ok: true; input: I; build: B } | { ok: false; errors: FieldErrors };
 
-/** The form of one member kind; `I` is the kind's SI input (src/kinds/<kind>/build.ts). */
-export interface MemberForm<I = unknown> {
+/** The form of one member kind; `I` is the kind's SI input (src/kinds/<kind>/build.ts), `B` what it builds. */
+export interface MemberForm<I = unknown, B extends KindBuild = MemberBuild> {
   kind: MemberKind;
   /** "Pile", "Riser or conductor", … */
   title: string;
@@ -101,9 +101,9 @@ export interface MemberForm<I = unknown> {
    */
   toInput(values: FieldValues, system: UnitSystem): ToInputResult<I>;
   /** The member model and schematic data (src/kinds/<kind>/build.ts). Throws RangeError only for input that toInput would refuse. */
-  buildModel(input: I): MemberBuild;
+  buildModel(input: I): B;
   /** toInput then buildModel. */
-  build(values: FieldValues, system: UnitSystem): BuildResult<I>;
+  build(values: FieldValues, system: UnitSystem): BuildResult<I, B>;
   /** Re-expresses values typed for one system in the other's units (see convertFieldValues). */
   convertValues(values: FieldValues, from: UnitSystem, to: UnitSystem): FieldValues;
 }

@@ -9,13 +9,14 @@
  */
 import type { ResonanceSpec } from '../forms/excitation';
 import type { DemoCase, MemberForm } from '../forms/types';
-import type { MemberBuild } from './common/types';
+import type { KindBuild, MemberBuild } from './common/types';
 import type { KindId } from './registry-pure';
 
 /** The engines that solve a kind's build. */
-export type KindEngine = 'beam';
+export type KindEngine = 'beam' | 'plate';
 
-export interface KindModule<I = unknown> {
+/** `B` is what the kind builds: a beam member model (MemberBuild) or a plate (PlateBuild). */
+export interface KindModule<I = unknown, B extends KindBuild = MemberBuild> {
   id: KindId;
   engine: KindEngine;
   /** "Pile", "Riser or conductor", … (the form's title). */
@@ -29,9 +30,9 @@ export interface KindModule<I = unknown> {
   /** Checks the SI input once (throws RangeError naming the field); pure. */
   validate(input: I): I;
   /** The member model and schematic data from the SI input; pure. Throws RangeError for invalid input. */
-  build(input: I): MemberBuild;
+  build(input: I): B;
   /** The guided form: fields, defaults with their sources, cross-field checks, mapping to the SI input. */
-  form: MemberForm<I>;
+  form: MemberForm<I, B>;
   /** The resonance inputs the kind offers and how its flow is read. */
   resonance: ResonanceSpec;
   /** The worked example, in an invented setting. */

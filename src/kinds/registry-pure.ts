@@ -3,7 +3,7 @@
  * under the ES2022-only typecheck. `registry.ts` maps every id to its kind module with a
  * `Record<KindId, KindModule>`, so an id added here without a module (or the reverse) does not compile.
  */
-export const KIND_IDS = ['pile', 'riser', 'baffle', 'stem'] as const;
+export const KIND_IDS = ['pile', 'riser', 'baffle', 'stem', 'plate-panel'] as const;
 
-/** Member kind: pile, riser (or conductor), tank baffle, sensor stem. */
+/** Member kind: pile, riser (or conductor), tank baffle, sensor stem, plate panel. */
 export type KindId = (typeof KIND_IDS)[number];

@@ -7,9 +7,11 @@
 import type { DemoCase, MemberForm } from '../forms/types';
 import { BAFFLE } from './baffle';
 import type { BaffleInput } from './baffle/build';
-import type { MemberBuild } from './common/types';
+import type { KindBuild, MemberBuild, PlateBuild } from './common/types';
 import type { KindModule } from './kind-module';
 import { PILE } from './pile';
+import { PLATE } from './plate-panel';
+import type { PlateInput } from './plate-panel/build';
 import type { PileInput } from './pile/build';
 import { KIND_IDS, type KindId } from './registry-pure';
 import { RISER } from './riser';
@@ -26,30 +28,41 @@ export interface MemberInputs {
   riser: RiserInput;
   baffle: BaffleInput;
   stem: StemInput;
+  'plate-panel': PlateInput;
+}
+
+/** What each kind builds: a beam member model, or a plate for the plate engine. */
+export interface MemberBuilds {
+  pile: MemberBuild;
+  riser: MemberBuild;
+  baffle: MemberBuild;
+  stem: MemberBuild;
+  'plate-panel': PlateBuild;
 }
 
 /** Every kind's module, by id. */
-export const KINDS: { readonly [K in KindId]: KindModule<MemberInputs[K]> } = {
+export const KINDS: { readonly [K in KindId]: KindModule<MemberInputs[K], MemberBuilds[K]> } = {
   pile: PILE,
   riser: RISER,
   baffle: BAFFLE,
   stem: STEM,
+  'plate-panel': PLATE,
 };
 
 /** The kind module of an id, typed for any kind (use `KINDS[id]` when the id is a literal). */
-export function kindOf(kind: KindId): KindModule {
-  return KINDS[kind] as KindModule;
+export function kindOf(kind: KindId): KindModule<unknown, KindBuild> {
+  return KINDS[kind] as KindModule<unknown, KindBuild>;
 }
 
 /** The forms of every kind, by id. */
-export const FORMS = Object.fromEntries(KIND_IDS.map((k) => [k, KINDS[k].form])) as { readonly [K in KindId]: MemberForm<MemberInputs[K]> };
+export const FORMS = Object.fromEntries(KIND_IDS.map((k) => [k, KINDS[k].form])) as { readonly [K in KindId]: MemberForm<MemberInputs[K], MemberBuilds[K]> };
 
 /** The worked examples, one per kind, in registry order. */
 export const DEMO_CASES: readonly DemoCase[] = KIND_IDS.map((k) => KINDS[k].demo);
 
 /** Builds any kind of member from its SI input; throws RangeError for invalid input or an unknown kind. */
-export function buildMember<K extends KindId>(kind: K, input: MemberInputs[K]): MemberBuild {
-  const module = (KIND_IDS as readonly string[]).includes(kind) ? (KINDS[kind] as KindModule<MemberInputs[K]>) : undefined;
+export function buildMember<K extends KindId>(kind: K, input: MemberInputs[K]): MemberBuilds[K] {
+  const module = (KIND_IDS as readonly string[]).includes(kind) ? (KINDS[kind] as KindModule<MemberInputs[K], MemberBuilds[K]>) : undefined;
   if (!module) throw new RangeError(`kind must be one of ${KIND_IDS.map((k) => `"${k}"`).join(', ')}, got ${JSON.stringify(kind)}`);
   return module.build(input);
 }

@@ -42,7 +42,25 @@ export const CAUTIONS: readonly { title: string; text: string }[] = [
   },
 ];
 
+/** What the model behind a result is: the beam engine (piles, risers, strips, stems) or the plate engine. */
+export type CautionModel = 'beam' | 'plate';
+
+/** "The model has limits" for a plate panel, in place of the beam wording. */
+export const PLATE_MODEL_LIMITS: { title: string; text: string } = {
+  title: 'The model has limits',
+  text:
+    'Frequencies come from a thin-plate model with ideal edges (welded = clamped, bolted = simply supported) and added mass from ' +
+    'three-dimensional potential flow: inviscid, incompressible liquid at rest, small motions, a rigid wall or tank around the plate, and a ' +
+    'free surface treated as pressure-release (valid well above the tank\'s sloshing frequencies, which are listed). Real welds are neither ' +
+    'fully clamped nor fully free, stiffeners and openings are not modelled, and thick, dented or cracked plates fall outside it.',
+};
+
+/** The cautions for a result of this model: the shared ones, with the model's own limits. */
+export function cautionsFor(model: CautionModel = 'beam'): readonly { title: string; text: string }[] {
+  return model === 'plate' ? CAUTIONS.map((c) => (c.title === PLATE_MODEL_LIMITS.title ? PLATE_MODEL_LIMITS : c)) : CAUTIONS;
+}
+
 /** The cautions as plain lines, for command-line output and files. */
-export function cautionLines(): string[] {
-  return CAUTIONS.map((c) => `${c.title}: ${c.text}`);
+export function cautionLines(model: CautionModel = 'beam'): string[] {
+  return cautionsFor(model).map((c) => `${c.title}: ${c.text}`);
 }

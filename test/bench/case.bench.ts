@@ -6,7 +6,7 @@
  */
 
 import { excitationDefaults } from '../../src/forms/excitation';
-import { readCase } from '../../src/app/read-case';
+import { readCase, requestOf } from '../../src/app/read-case';
 import { solveCase } from '../../src/app/solve-case';
 import { report, time } from './timing';
 import { DEMO_CASES, FORMS, kindOf } from '../../src/kinds/registry';
@@ -24,14 +24,14 @@ export function run(): void {
     report(`${demo.kind}: read the form (units, checks, build)`, time(() => readCase(c), 30, 5));
     report(
       `${demo.kind}: solve dry + wet + screening (worker side)`,
-      time(() => solveCase({ op: 'case', model: reading.build.model, excitation: reading.excitation }), 30, 5),
+      time(() => solveCase(requestOf(reading)), 30, 5),
       16,
     );
     report(
       `${demo.kind}: keystroke to answer, both together`,
       time(() => {
         const r = readCase(c);
-        if (r.ok) solveCase({ op: 'case', model: r.build.model, excitation: r.excitation });
+        if (r.ok) solveCase(requestOf(r));
       }, 30, 5),
       100,
     );

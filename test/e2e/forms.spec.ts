@@ -9,10 +9,11 @@ const KIND_BUTTON: Record<MemberKind, RegExp> = {
   riser: /^Riser or conductor/,
   baffle: /^Tank baffle/,
   stem: /^Sensor stem/,
+  'plate-panel': /^Plate panel/,
 };
 
 /** What a surveyor types into each new form: values with units as on their drawings. */
-const TYPED: Record<Exclude<MemberKind, 'pile'>, Record<string, string>> = {
+const TYPED: Record<'riser' | 'baffle' | 'stem', Record<string, string>> = {
   riser: { outerDiameter: '16 in', wallThickness: '0.625 in' },
   baffle: { thickness: '0.5 in', span: '6 ft' },
   stem: { insertionLength: '10 in', tipMass: '0.2 kg' },

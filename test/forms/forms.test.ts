@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseMemberModel } from '../../src/physics/beam';
+import { parsePlateInput } from '../../src/physics/plate';
 import {
   FORM_ERROR_KEY,
   type FieldValues,
@@ -12,17 +13,18 @@ import {
 import { parseQuantity, parseQuantityList } from '../../src/units';
 import { expectClose } from '../helpers/expect-close';
 import { DEMO_CASES, FORMS, KIND_IDS as MEMBER_KINDS } from '../../src/kinds/registry';
+import type { KindBuild } from '../../src/kinds/common/types';
 
 const SYSTEMS: UnitSystem[] = ['si', 'us'];
 
-function errorsOf(form: MemberForm, values: FieldValues, system: UnitSystem) {
+function errorsOf(form: MemberForm<unknown, KindBuild>, values: FieldValues, system: UnitSystem) {
   const r = form.toInput(values, system);
   if (r.ok) throw new Error(`expected errors, got input ${JSON.stringify(r.input)}`);
   return r.errors;
 }
 
 /** SI value of every quantity field, to compare value sets typed in different systems. */
-function siValues(form: MemberForm, values: FieldValues, system: UnitSystem): Record<string, number | number[] | string> {
+function siValues(form: MemberForm<unknown, KindBuild>, values: FieldValues, system: UnitSystem): Record<string, number | number[] | string> {
   const out: Record<string, number | number[] | string> = {};
   for (const f of form.fields) {
     const text = values[f.key];
@@ -50,8 +52,14 @@ function expectSameValues(a: Record<string, number | number[] | string>, b: Reco
   }
 }
 
+/** The beam engine's or the plate engine's own gate takes the build's model. */
+function expectEngineAccepts(build: KindBuild): void {
+  if (build.engine === 'plate') expect(() => parsePlateInput(build.plate)).not.toThrow();
+  else expect(() => parseMemberModel(build.model)).not.toThrow();
+}
+
 describe.each(MEMBER_KINDS)('the %s form', (kind: MemberKind) => {
-  const form = FORMS[kind] as MemberForm;
+  const form = FORMS[kind] as MemberForm<unknown, KindBuild>;
 
   it('has at most twelve main fields shown with its defaults, each with a label and a default', () => {
     const values = form.defaults('si');
@@ -63,11 +71,11 @@ describe.each(MEMBER_KINDS)('the %s form', (kind: MemberKind) => {
     }
   });
 
-  it.each(SYSTEMS)('defaults read and build a model the beam engine accepts (%s units)', (system) => {
+  it.each(SYSTEMS)('defaults read and build a model its engine accepts (%s units)', (system) => {
     const r = form.build(form.defaults(system), system);
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
     expect(r.build.kind).toBe(kind);
-    expect(() => parseMemberModel(r.build.model)).not.toThrow();
+    expectEngineAccepts(r.build);
   });
 
   it('defaults in US units are the SI defaults re-expressed (same SI input)', () => {
@@ -79,13 +87,13 @@ describe.each(MEMBER_KINDS)('the %s form', (kind: MemberKind) => {
     );
   });
 
-  it('its demo case reads in its own units and builds a model the beam engine accepts', () => {
+  it('its demo case reads in its own units and builds a model its engine accepts', () => {
     const demos = DEMO_CASES.filter((d) => d.kind === kind);
     expect(demos.length).toBe(1);
     const demo = demos[0];
     const r = form.build(demo.values, demo.system);
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
-    expect(() => parseMemberModel(r.build.model)).not.toThrow();
+    expectEngineAccepts(r.build);
     expect(demo.name.length * demo.tag.length * demo.note.length).toBeGreaterThan(0);
     // Values typed with units read the same whichever system is chosen.
     const other = form.toInput(demo.values, demo.system === 'si' ? 'us' : 'si');
@@ -226,7 +234,7 @@ describe('convertValues', () => {
   });
 
   it('FORMS is a record of every member kind and an unknown field key cannot reach a form error silently', () => {
-    const record: Record<MemberKind, MemberForm> = FORMS;
+    const record: Record<MemberKind, MemberForm<unknown, KindBuild>> = FORMS;
     expect(Object.keys(record).sort()).toEqual([...MEMBER_KINDS].sort());
     expect(FORM_ERROR_KEY).toBe('_form');
   });

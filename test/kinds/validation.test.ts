@@ -78,7 +78,7 @@ describe('member inputs are checked once at the public entry, with the field, wh
 
   it('buildMember dispatches by kind and names an unknown kind', () => {
     expect(buildMember('stem', STEM).kind).toBe('stem');
-    expect(() => buildMember('mast' as MemberKind, STEM)).toThrow(new RangeError('kind must be one of "pile", "riser", "baffle", "stem", got "mast"'));
+    expect(() => buildMember('mast' as MemberKind, STEM)).toThrow(new RangeError('kind must be one of "pile", "riser", "baffle", "stem", "plate-panel", got "mast"'));
     expect(() => buildPileModel(null as unknown as PileInput)).toThrow(new RangeError('pile input must be an object, got null'));
   });
 });

@@ -85,7 +85,7 @@ describe('case links round trip', () => {
 
   it('refuses to encode a case that does not pass parseCase', async () => {
     await expect(encodeCasePayload({ ...demoCase(), kind: 'tower' } as unknown as Case)).rejects.toThrow(
-      'encodeCasePayload: the case is not valid: kind must be one of "pile", "riser", "baffle", "stem", got "tower"',
+      'encodeCasePayload: the case is not valid: kind must be one of "pile", "riser", "baffle", "stem", "plate-panel", got "tower"',
     );
   });
 });
@@ -166,7 +166,7 @@ describe('broken links get a clear message and no case', () => {
     wire[5] = 'tower';
     expect(await decodeCasePayload(jsonPayload(wire))).toEqual({
       ok: false,
-      message: 'this link holds a case this Wetmode cannot read: kind must be one of "pile", "riser", "baffle", "stem", got "tower"',
+      message: 'this link holds a case this Wetmode cannot read: kind must be one of "pile", "riser", "baffle", "stem", "plate-panel", got "tower"',
     });
   });
 

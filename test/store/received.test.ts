@@ -105,7 +105,7 @@ describe('saveReceived never overwrites', () => {
   it('refuses a case that does not pass parseCase, and writes nothing', async () => {
     const store = await harness().open();
     const r = await store.saveReceived({ ...demoCase(), kind: 'mast' } as unknown as Case);
-    expect(r).toEqual({ ok: false, kind: 'invalid-case', message: 'Could not save the received case: kind must be one of "pile", "riser", "baffle", "stem", got "mast"' });
+    expect(r).toEqual({ ok: false, kind: 'invalid-case', message: 'Could not save the received case: kind must be one of "pile", "riser", "baffle", "stem", "plate-panel", got "mast"' });
     expect(unwrap(await store.listCases()).cases).toEqual([]);
   });
 });

@@ -48,7 +48,7 @@ const FIELDS: readonly FieldDef[] = [
 export const BAFFLE_FORM = defineForm({
   kind: 'baffle',
   title: 'Tank baffle',
-  summary: 'A flat plate strip in a tank, spanning between two supports and vibrating across its thickness.',
+  summary: 'A flat plate strip in a tank, spanning between two supports and vibrating across its thickness (a narrow baffle on clips). For a plate welded on two or more edges use Plate panel.',
   fields: FIELDS,
   toInput(r, err): BaffleInput | null {
     const width = r.num('width');

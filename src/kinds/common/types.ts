@@ -4,6 +4,7 @@
  * axis from z = 0 (stated per kind in `origin`), positive towards the member's top or tip.
  */
 import type { MemberModel } from '../../physics/beam/model';
+import type { PlateInput } from '../../physics/plate';
 import type { KindId } from '../registry-pure';
 
 /** The member kind of a build (the ids are listed once, in ../registry-pure.ts). */
@@ -56,6 +57,8 @@ export type Confinement =
 
 export interface MemberBuild {
   kind: MemberKind;
+  /** The engine that solves this build (src/kinds/kind-module.ts); absent = the beam engine. */
+  engine?: 'beam';
   /** The beam engine's input (src/physics/beam/model.ts). */
   model: MemberModel;
   /** Where z = 0 is, in words, e.g. "effective fixity point below the mudline". */
@@ -68,3 +71,15 @@ export interface MemberBuild {
   /** Modelling choices in plain words, for the assumptions panel. */
   notes: string[];
 }
+
+/** What a plate-panel kind builds: the plate engine's input (src/physics/plate) and its modelling notes. */
+export interface PlateBuild {
+  kind: MemberKind;
+  engine: 'plate';
+  plate: PlateInput;
+  /** Modelling choices in plain words, for the assumptions panel. */
+  notes: string[];
+}
+
+/** Any kind's build; `engine` tells them apart. */
+export type KindBuild = MemberBuild | PlateBuild;

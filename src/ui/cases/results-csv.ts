@@ -11,6 +11,7 @@ import { caseFileName } from '../../share/file';
 import type { CaseAnswer } from '../../app/solve-case';
 import { displayName, kindTitle } from './format';
 import { kindOf } from '../../kinds/registry';
+import { plateCsvRows } from '../plate/plate-csv';
 
 export type CsvRow = CsvCell[];
 
@@ -57,6 +58,10 @@ export function resultCsvRows(doc: Case, answer: CaseAnswer | null, exportedAt: 
   }
   if (!answer.ok) {
     rows.push(['No results', answer.message]);
+    return rows;
+  }
+  if (answer.engine === 'plate') {
+    rows.push(...plateCsvRows(answer, csvNumber));
     return rows;
   }
   const { member, screening } = answer;

@@ -1,4 +1,5 @@
 import type { ModelState } from '../state/app-model';
+import { answerFigures } from '../../app/answer-figures';
 import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
 
@@ -9,20 +10,21 @@ import { VerdictBadge } from '../results/VerdictBadge';
  */
 export function AnswerBar({ state, stale }: { state: ModelState; stale: boolean }) {
   const a = state.results?.answer;
+  const fig = a && a.ok ? answerFigures(a) : null;
   const errorCount = Object.keys(state.errors).length;
   return (
     <div class={`answer-bar${stale ? ' stale' : ''}`} data-testid="answer-bar">
-      {a && a.ok ? (
+      {fig ? (
         <>
           <span>
-            Dry <strong>{formatHz(a.member.dry.frequenciesHz[0])}</strong>
+            Dry <strong>{formatHz(fig.lowestDryHz)}</strong>
           </span>
-          {a.member.wet && (
+          {fig.lowestWetHz !== null && (
             <span>
-              Wet <strong>{formatHz(a.member.wet.frequenciesHz[0])}</strong>
+              Wet <strong>{formatHz(fig.lowestWetHz)}</strong>
             </span>
           )}
-          {a.screening && <VerdictBadge verdict={a.screening.verdict} />}
+          {fig.verdict && <VerdictBadge verdict={fig.verdict} />}
         </>
       ) : (
         <span>{a && !a.ok ? 'No answer: see the message above' : 'Fill in the member to see its frequencies'}</span>

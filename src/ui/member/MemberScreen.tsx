@@ -1,5 +1,7 @@
 import { placeholderOf } from '../../forms';
 import { formatQuantity } from '../../units';
+import { PlateSchematic } from '../plate/PlateSchematic';
+import '../plate/plate.css';
 import { useModel } from '../state/context';
 import { MemberPlot } from '../plots/MemberPlot';
 import { hashFor } from '../shell/router';
@@ -70,7 +72,8 @@ export function MemberScreen() {
         </div>
         <aside class="member-side">
           <QuickResults state={state} stale={stale} />
-          {build && (
+          {build && build.engine === 'plate' && <PlateSchematic plate={build.plate} lengthUnit={lengthUnit} />}
+          {build && build.engine !== 'plate' && (
             <figure class={`panel schematic${stale ? ' stale' : ''}`}>
               <MemberPlot model={build.model} landmarks={build.landmarks} title={`${form.title} schematic, to scale`} widthPx={280} heightPx={380} />
               <figcaption>

@@ -1,4 +1,5 @@
 import type { ModelState } from '../state/app-model';
+import { answerFigures } from '../../app/answer-figures';
 import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { hashFor } from '../shell/router';
@@ -7,6 +8,8 @@ import { MemberSectionLink } from '../section/MemberSectionLink';
 /** The answer beside the form: lowest dry and wet frequency and the verdict, marked when out of date. */
 export function QuickResults({ state, stale }: { state: ModelState; stale: boolean }) {
   const a = state.results?.answer;
+  const fig = a && a.ok ? answerFigures(a) : null;
+  const build = state.results?.build;
   const errorCount = Object.keys(state.errors).length;
   return (
     <section class={`panel quick${stale ? ' stale' : ''}`} aria-labelledby="quick-title" aria-live="polite">
@@ -20,27 +23,27 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
       {!a && !stale && <p>Fill in the member to see its frequencies.</p>}
       {state.solverMessage && <p class="field-error" role="alert">{state.solverMessage}</p>}
       {a && !a.ok && <p class="field-error" data-testid="solve-failure">{a.message}</p>}
-      {a && a.ok && (
+      {fig && (
         <dl class="quick-figures">
           <div>
             <dt>Lowest dry frequency</dt>
-            <dd data-testid="quick-dry">{formatHz(a.member.dry.frequenciesHz[0])}</dd>
+            <dd data-testid="quick-dry">{formatHz(fig.lowestDryHz)}</dd>
           </div>
-          {a.member.wet && (
+          {fig.lowestWetHz !== null && (
             <div>
               <dt>Lowest wet frequency</dt>
-              <dd data-testid="quick-wet">{formatHz(a.member.wet.frequenciesHz[0])}</dd>
+              <dd data-testid="quick-wet">{formatHz(fig.lowestWetHz)}</dd>
             </div>
           )}
           <div>
             <dt>Resonance</dt>
-            <dd data-testid="quick-verdict">{a.screening ? <VerdictBadge verdict={a.screening.verdict} /> : 'not screened: see the resonance inputs'}</dd>
+            <dd data-testid="quick-verdict">{fig.verdict ? <VerdictBadge verdict={fig.verdict} /> : 'not screened: see the resonance inputs'}</dd>
           </div>
         </dl>
       )}
       <div class="quick-links">
         <a class="btn" href={hashFor('results')}>All results</a>
-        <MemberSectionLink model={state.results?.build.model ?? null} label="Section and flow" />
+        {build?.engine !== 'plate' && <MemberSectionLink model={build?.model ?? null} label="Section and flow" />}
       </div>
     </section>
   );

@@ -10,6 +10,7 @@ import { SummaryPanel } from '../results/SummaryPanel';
 import { methodNotes } from './method-notes';
 import { ModeShapesStrip } from './ModeShapesStrip';
 import { ReportResonance } from './ReportResonance';
+import { PlateReportDetails, PlateReportKey } from '../plate/PlateReport';
 
 type Props = { doc: Case; results: Results | null; current: boolean; children?: ComponentChildren };
 
@@ -41,12 +42,18 @@ export function ReportKeyResults({ doc, results, current }: Props) {
           These results were computed for earlier inputs than those listed in this record: recompute before relying on it.
         </p>
       )}
-      <div class="report-section">
-        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={results.answer} />
-      </div>
-      <div class="report-section">
-        <ModesTable member={results.answer.member} />
-      </div>
+      {results.answer.engine === 'plate' ? (
+        <PlateReportKey answer={results.answer} />
+      ) : (
+        <>
+          <div class="report-section">
+            <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={results.answer} />
+          </div>
+          <div class="report-section">
+            <ModesTable member={results.answer.member} />
+          </div>
+        </>
+      )}
     </>
   );
 }
@@ -56,13 +63,17 @@ export function ReportKeyResults({ doc, results, current }: Props) {
 export function ReportDetails({ doc, results, children }: Props) {
   const answer = results?.answer;
   if (!results || !answer || !answer.ok) return <>{children}</>;
+  const build = results.build;
+  if (answer.engine === 'plate' || build.engine === 'plate') {
+    return answer.engine === 'plate' && build.engine === 'plate' ? <PlateReportDetails answer={answer} build={build}>{children}</PlateReportDetails> : <>{children}</>;
+  }
   const units = displayUnits(doc.unitSystem);
   const { member, screening } = answer;
   return (
     <>
       <section class="report-section" aria-labelledby="report-shape-title">
         <h2 id="report-shape-title">Mode shapes</h2>
-        <ModeShapesStrip member={member} lengthM={results.build.model.lengthM} />
+        <ModeShapesStrip member={member} lengthM={build.model.lengthM} />
       </section>
       <div class="report-section">
         <MassTable member={member} units={units} withMethod={false} />
@@ -73,7 +84,7 @@ export function ReportDetails({ doc, results, children }: Props) {
           <DiagnosticsPanel member={member} units={units} />
           {children}
         </div>
-        <AssumptionsPanel member={member} build={results.build} />
+        <AssumptionsPanel member={member} build={build} />
       </div>
       <section class="report-section" aria-labelledby="report-method-title">
         <h2 id="report-method-title">Method and sources</h2>

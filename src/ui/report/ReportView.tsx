@@ -48,7 +48,7 @@ export function ReportView({ doc, results, link, appVersion }: ReportViewProps) 
         <ReportHeader doc={doc} appVersion={appVersion} printedAt={printedAt} />
         <ReportKeyResults doc={doc} results={results} current={current} />
         <div class="report-section report-cautions">
-          <CautionsPanel />
+          <CautionsPanel model={kind.engine} />
         </div>
         <ReportSignOff />
         <section class="report-section report-page-start" aria-labelledby="report-inputs-title">

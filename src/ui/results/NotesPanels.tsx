@@ -1,6 +1,6 @@
 import type { MemberResult } from '../../physics/beam/result';
 import type { MemberBuild } from '../../kinds/common/types';
-import { CAUTIONS } from '../../text/cautions';
+import { type CautionModel, cautionsFor } from '../../text/cautions';
 import { assumptionLines, meshText, tensionText } from './assumptions';
 import type { DisplayUnits } from './display-units';
 
@@ -50,13 +50,13 @@ export function AssumptionsPanel({ member, build }: { member: MemberResult; buil
   );
 }
 
-/** The full cautions, always shown with results (and in the report). */
-export function CautionsPanel() {
+/** The full cautions, always shown with results (and in the report); `model` picks the model-limits wording. */
+export function CautionsPanel({ model = 'beam' }: { model?: CautionModel }) {
   return (
     <section class="panel cautions-panel" aria-labelledby="cautions-panel-title">
       <h2 id="cautions-panel-title">Cautions</h2>
       <ol class="cautions-list">
-        {CAUTIONS.map((c) => (
+        {cautionsFor(model).map((c) => (
           <li key={c.title}>
             <h3>{c.title}</h3>
             <p>{c.text}</p>

@@ -8,6 +8,7 @@ import { ModesTable } from './ModesTable';
 import { AssumptionsPanel, CautionsPanel, DiagnosticsPanel } from './NotesPanels';
 import { ResonancePanel } from './ResonancePanel';
 import { StatusBanner } from './StatusBanner';
+import { PlateResultsBody } from '../plate/PlateResultsView';
 import { failureText } from './summary';
 import { FailurePanel, SummaryPanel } from './SummaryPanel';
 import './results.css';
@@ -48,6 +49,16 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
       </div>
     );
   }
+  const build = results.build;
+  if (answer.engine === 'plate' || build.engine === 'plate') {
+    return (
+      <div class={stale ? 'results results-stale' : 'results'} aria-busy={computing}>
+        {banner}
+        {answer.engine === 'plate' && build.engine === 'plate' && <PlateResultsBody answer={answer} build={build} />}
+        <CautionsPanel model="plate" />
+      </div>
+    );
+  }
   const units = displayUnits(doc.unitSystem);
   const { member, screening } = answer;
   return (
@@ -56,12 +67,12 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
       <div class="results-body">
         <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
         <ModesTable member={member} />
-        <ModeShapePanel build={results.build} member={member} units={units} />
+        <ModeShapePanel build={build} member={member} units={units} />
         <MassTable member={member} units={units} />
         {member.wet && sectionPanel}
         {screening && <ResonancePanel screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
         <DiagnosticsPanel member={member} units={units} />
-        <AssumptionsPanel member={member} build={results.build} />
+        <AssumptionsPanel member={member} build={build} />
       </div>
       <CautionsPanel />
     </div>

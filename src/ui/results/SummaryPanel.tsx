@@ -1,10 +1,10 @@
 import type { MemberKind } from '../../case';
 import type { UnitSystem } from '../../units';
-import type { CaseAnswer } from '../../app/solve-case';
+import type { BeamSolved } from '../../app/solve-case';
 import { summarise } from './summary';
 import { VerdictBadge } from './VerdictBadge';
 
-type Solved = Extract<CaseAnswer, { ok: true }>;
+type Solved = BeamSolved;
 
 /** The answer in a few lines: verdict (word and icon), what drives it, lowest frequencies, lock-in onset. */
 export function SummaryPanel({ kind, system, answer }: { kind: MemberKind; system: UnitSystem; answer: Solved }) {

@@ -9,12 +9,12 @@ import { kindOf } from '../../kinds/registry';
 import type { CheckResult, ScreeningResult } from '../../physics/excitation/results';
 import { VERDICT_WORDS, type Verdict } from '../../physics/excitation/verdict';
 import type { UnitSystem } from '../../units';
-import type { CaseAnswer } from '../../app/solve-case';
+import type { BeamSolved, CaseAnswer } from '../../app/solve-case';
 import { formatHz, formatSig } from '../format/numbers';
 import { displayUnits, marginText, pct, qty, zText } from './display-units';
 
 type Failed = Extract<CaseAnswer, { ok: false }>;
-type Solved = Extract<CaseAnswer, { ok: true }>;
+type Solved = BeamSolved;
 
 /** What the flow past the member is called for each kind, in the surveyor's words. */
 export function flowWord(kind: MemberKind): string {
@@ -43,6 +43,9 @@ export function failureText(answer: Failed): { title: string; text: string } {
       };
     case 'invalid-input':
       return { title: 'The inputs could not be used', text: answer.message };
+    case 'basis-ill-conditioned':
+    case 'added-mass-not-positive':
+      return { title: 'The plate solver failed', text: `Check the plate’s sizes and the liquid inputs for extreme values. Solver: ${answer.message}.` };
   }
 }
 

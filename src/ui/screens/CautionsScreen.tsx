@@ -1,4 +1,4 @@
-import { CAUTIONS } from '../../text/cautions';
+import { CAUTIONS, PLATE_MODEL_LIMITS } from '../../text/cautions';
 
 /** The full cautions page, linked from the caution line on every screen. */
 export function CautionsScreen() {
@@ -11,6 +11,7 @@ export function CautionsScreen() {
           <li key={c.title}>
             <h2>{c.title}</h2>
             <p>{c.text}</p>
+            {c.title === PLATE_MODEL_LIMITS.title && <p>For plate panels: {PLATE_MODEL_LIMITS.text}</p>}
           </li>
         ))}
       </ol>

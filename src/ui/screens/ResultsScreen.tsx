@@ -27,7 +27,7 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
             stale={!model.resultsCurrent()}
             computing={state.computing}
             errorsCount={Object.keys(state.errors).length}
-            sectionPanel={state.results && <MemberSectionPanel model={state.results.build.model} system={doc.unitSystem} />}
+            sectionPanel={state.results && state.results.build.engine !== 'plate' && <MemberSectionPanel model={state.results.build.model} system={doc.unitSystem} />}
           />
         </>
       )}

@@ -9,10 +9,12 @@
  */
 import type { Case, KeyResult } from '../../case';
 import { sameCaseContent } from '../../case';
-import type { MemberBuild } from '../../kinds/common/types';
+import type { KindBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
 import { readCaseOnDemand } from './read-on-demand';
 import { revisionOf } from '../../store';
+import { requestOf } from '../../app/read-case';
+import { answerFigures } from '../../app/answer-figures';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
 import { CASE_ADVICE, solverFailureWords } from './solver-words';
@@ -21,7 +23,7 @@ export type CaseMode = 'editing' | 'received';
 
 export interface Results {
   answer: CaseAnswer;
-  build: MemberBuild;
+  build: KindBuild;
   /** Content key of the case these results were computed for. */
   forKey: string;
 }
@@ -71,8 +73,8 @@ export function keyResultOf(results: Results | null): KeyResult | undefined {
   const a = results?.answer;
   if (!a || !a.ok) return undefined;
   // A member with no liquid has no wet frequency: the list then shows the verdict only.
-  const f = a.member.wet?.frequenciesHz[0];
-  return { lowestWetFrequencyHz: f !== undefined && f > 0 && Number.isFinite(f) ? f : undefined, verdict: a.screening?.verdict };
+  const { lowestWetHz: f, verdict } = answerFigures(a);
+  return { lowestWetFrequencyHz: f !== null && f > 0 && Number.isFinite(f) ? f : undefined, verdict: verdict ?? undefined };
 }
 
 export class AppModel {
@@ -208,7 +210,7 @@ export class AppModel {
     const build = reading.build;
     this.set({ computing: true });
     void this.solver
-      .request({ op: 'case', model: build.model, excitation: reading.excitation })
+      .request(requestOf(reading))
       .catch((e: unknown): Answer<CaseAnswer> => ({ status: 'crashed', message: e instanceof Error ? e.message : String(e) }))
       .then((ans) => {
       if (ans.status === 'superseded') return;

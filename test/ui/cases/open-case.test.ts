@@ -34,7 +34,7 @@ describe('saving the open case', () => {
     const r = await saveOpenCase(store, model);
     expect(r.ok && r.text).toBe(`Saved “${pileDemo.name}”.`);
     const answer = model.get().results!.answer;
-    if (!answer.ok) throw new Error('the demo pile should solve');
+    if (!answer.ok || answer.engine === 'plate') throw new Error('the demo pile should solve by the beam engine');
     const [saved] = unwrap(await store.listCases()).cases;
     expect(saved.keyResult).toEqual({ lowestWetFrequencyHz: answer.member.wet!.frequenciesHz[0], verdict: answer.screening!.verdict });
     expect(model.unsaved()).toBe(false);

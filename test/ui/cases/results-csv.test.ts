@@ -28,7 +28,7 @@ describe('results as CSV rows', () => {
 
   it('have one row per mode, with numbers as numbers, matching the solver to 6 significant figures', () => {
     expect(answer.ok).toBe(true);
-    if (!answer.ok) return;
+    if (!answer.ok || answer.engine === 'plate') throw new Error('the demo pile should solve by the beam engine');
     const rows = resultCsvRows(pile, answer, AT);
     const head = rows.findIndex((r) => r[0] === 'Mode' && r[1] === 'Dry frequency (Hz)');
     expect(head).toBeGreaterThan(0);

@@ -5,10 +5,10 @@
 import type { MemberResult, ModeResult, ZoneResult } from '../../../src/physics/beam/result';
 import { screenResonance } from '../../../src/physics/excitation';
 import type { ScreeningResult } from '../../../src/physics/excitation/results';
-import type { CaseAnswer } from '../../../src/app/solve-case';
+import type { BeamSolved } from '../../../src/app/solve-case';
 import { pileCase } from '../../physics/excitation/fixtures';
 
-export type Solved = Extract<CaseAnswer, { ok: true }>;
+export type Solved = BeamSolved;
 
 function mode(n: number, frequencyHz: number, share?: number): ModeResult {
   const m: ModeResult = {

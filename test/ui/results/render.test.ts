@@ -10,7 +10,7 @@ vi.mock('preact/hooks', () => ({
 }));
 
 
-import { readCase } from '../../../src/app/read-case';
+import { readCase, requestOf } from '../../../src/app/read-case';
 import { createCase } from '../../../src/case';
 import type { Case } from '../../../src/case';
 import { CAUTIONS } from '../../../src/text/cautions';
@@ -37,7 +37,7 @@ function demo(kind: Case['kind']): { doc: Case; results: Results } {
   });
   const r = readCase(doc);
   if (!r.ok) throw new Error(`demo ${kind} does not read: ${JSON.stringify(r.errors)}`);
-  const answer = solveCase({ op: 'case', model: r.build.model, excitation: r.excitation });
+  const answer = solveCase(requestOf(r));
   return { doc, results: { answer, build: r.build, forKey: contentKey(doc) } };
 }
 
