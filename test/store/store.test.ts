@@ -194,7 +194,7 @@ describe('records that cannot be read are reported, never dropped', () => {
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
     const tx = db.transaction(['cases', 'draft'], 'readwrite');
     await req(tx.objectStore('cases').put({ id: 'junk-1', name: 42 }));
-    await req(tx.objectStore('draft').put({ savedAt: NOW, case: { format: 'wetmode-case', schemaVersion: 1 } }, 'current'));
+    await req(tx.objectStore('draft').put({ savedAt: NOW, case: { format: 'wetmode-case', schemaVersion: 2 } }, 'current'));
     db.close();
     return { h, store: await h.open() };
   }
