@@ -7,6 +7,7 @@
  * the kind's own builder makes the member at any setting (one form field may drive many model numbers).
  */
 import { formatForEntry, formatQuantity, parseQuantity, unitFactor, type UnitSystem } from '../units';
+import { convertFieldValues } from './define';
 import { fieldUnit, isShown, readFields, type ReadValue } from './read';
 import type { FieldDef, FieldValues, QuantityField } from './types';
 
@@ -162,4 +163,12 @@ export function valuesAt(fields: readonly FieldDef[], values: FieldValues, range
     out[r.key] = String(x[i] / unitFactor(fieldUnit(f, system)));
   });
   return out;
+}
+
+/** Re-expresses range texts typed for one unit system in the other's field units (as the values themselves are). */
+export function convertRangeTexts(fields: readonly FieldDef[], texts: RangeTexts, from: UnitSystem, to: UnitSystem): RangeTexts {
+  const keys = Object.keys(texts);
+  const lows = convertFieldValues(fields, Object.fromEntries(keys.map((k) => [k, texts[k].low])), from, to);
+  const highs = convertFieldValues(fields, Object.fromEntries(keys.map((k) => [k, texts[k].high])), from, to);
+  return Object.fromEntries(keys.map((k) => [k, { low: lows[k], high: highs[k], on: texts[k].on }]));
 }
