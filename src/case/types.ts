@@ -25,6 +25,8 @@ export interface KeyResult {
   /** Lowest wet natural frequency, Hz (finite, > 0). */
   lowestWetFrequencyHz?: number;
   verdict?: Verdict;
+  /** The verdict over the band of the ranges on uncertain inputs, when ranges were on (schema version 2). */
+  bandVerdict?: Verdict;
 }
 
 /**

@@ -25,7 +25,9 @@ function keyResult(value: unknown): KeyResult | undefined {
   }
   const v = own(value, 'verdict');
   if (v !== undefined) out.verdict = oneOf('keyResult.verdict', v, VERDICTS);
-  return out.lowestWetFrequencyHz === undefined && out.verdict === undefined ? undefined : out;
+  const bv = own(value, 'bandVerdict');
+  if (bv !== undefined) out.bandVerdict = oneOf('keyResult.bandVerdict', bv, VERDICTS);
+  return out.lowestWetFrequencyHz === undefined && out.verdict === undefined && out.bandVerdict === undefined ? undefined : out;
 }
 
 /** Validates a version-1 case object (format and version already checked by the caller). Throws CaseFieldError. */

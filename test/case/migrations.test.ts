@@ -87,6 +87,16 @@ describe('case migration ladder', () => {
     });
   });
 
+  it('keeps the verdict over the band with the key result, and refuses a word that is not a verdict', () => {
+    const r = parseCase({ ...demoCase(), keyResult: { lowestWetFrequencyHz: 1.8, verdict: 'close', bandVerdict: 'inside-band' } });
+    if (!r.ok) throw new Error(r.message);
+    expect(r.value.keyResult).toEqual({ lowestWetFrequencyHz: 1.8, verdict: 'close', bandVerdict: 'inside-band' });
+    expect(parseCase({ ...demoCase(), keyResult: { bandVerdict: 'fine' } })).toEqual({
+      ok: false,
+      message: 'keyResult.bandVerdict must be one of "clear", "close", "inside-band", got "fine"',
+    });
+  });
+
   it('climbs a version 0 case through every step to the current version', () => {
     const r = parseCase(v0Case());
     if (!r.ok) throw new Error(r.message);

@@ -74,8 +74,16 @@ test('the default ranges give a band table, a sensitivity chart with its table, 
   await page.setViewportSize({ width: 768, height: 1024 });
   await panel.screenshot({ path: 'screenshots/ranges-results-768.png' });
 
+  // The Cases list shows the verdict over the ranges kept with the saved case.
+  await page.goto('/#/cases');
+  await expect(page.locator('li', { hasText: 'P7 with ranges' }).first().getByTestId('case-band-verdict')).toContainText('inside band');
+  await page.goto('/#/results');
   await page.reload();
   await expect(page.getByTestId('band-panel').getByTestId('band-wet-1')).toHaveText(wetBand, { timeout: 20_000 });
+  await page.goto('/#/report');
+  await expect(page.getByTestId('report-band').locator('svg.sens-chart .sens-row')).toHaveCount(6, { timeout: 20_000 });
+  await page.getByTestId('report-band').screenshot({ path: 'screenshots/ranges-report.png' });
+  await page.goto('/#/results');
 
   await page.getByRole('button', { name: 'Copy link' }).click();
   const link = await page.evaluate(() => navigator.clipboard.readText());

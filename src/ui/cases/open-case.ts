@@ -7,6 +7,7 @@ import type { CaseStore, StoreErrorKind } from '../../store';
 import { CASE_FILE_MIME, caseFileName, caseToFileText } from '../../share/file';
 import { keyResultOf, type AppModel } from '../state/app-model';
 import { downloadText } from './download';
+import { existingBandModel } from '../state/band-context';
 import { askPersistenceOnce } from './persistence';
 import { quoted, receivedOutcomeWords, sentence } from './words';
 
@@ -18,7 +19,9 @@ export function docForSaving(model: Pick<AppModel, 'get' | 'resultsCurrent'>): C
   const { doc, results } = model.get();
   if (!doc) return null;
   const { keyResult: _old, ...rest } = doc;
-  const keyResult = model.resultsCurrent() ? keyResultOf(results) : undefined;
+  const kr = model.resultsCurrent() ? keyResultOf(results) : undefined;
+  const bandVerdict = kr ? existingBandModel(model)?.currentVerdict() : undefined;
+  const keyResult = kr && bandVerdict ? { ...kr, bandVerdict } : kr;
   return keyResult ? { ...rest, keyResult } : rest;
 }
 

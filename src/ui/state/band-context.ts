@@ -27,6 +27,11 @@ export function bandModelFor(app: AppModel): BandModel {
   return m;
 }
 
+/** The band model of an open-case model if one was started (the Cases screen reads it without starting a worker). */
+export function existingBandModel(app: object): BandModel | undefined {
+  return models.get(app as AppModel);
+}
+
 /** The band of the open case; re-renders on every change. */
 export function useBand(): [BandState, BandModel] {
   const { model } = useServices();

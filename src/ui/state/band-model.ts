@@ -7,6 +7,7 @@
 import { type Case } from '../../case';
 import type { BandAnswer, BandRequest } from '../../app/band-case';
 import type { Answer } from '../../worker/solver-client';
+import type { Verdict as BandVerdictWord } from '../../physics/excitation/verdict';
 import type { AppModel } from './app-model';
 import { type SolverAdvice, solverFailureWords } from './solver-words';
 
@@ -67,6 +68,12 @@ export class BandModel {
   current(): boolean {
     const doc = this.app.get().doc;
     return !!doc && this.state.status === 'done' && this.state.forKey === bandKey(doc);
+  }
+
+  /** The verdict over the band of the case on screen, when it is worked out and current. */
+  currentVerdict(): BandVerdictWord | undefined {
+    const a = this.state.answer;
+    return this.current() && a && a.ok && a.band && a.verdict ? a.verdict.bandVerdict : undefined;
   }
 
   private set(patch: Partial<BandState>): void {
