@@ -1,4 +1,5 @@
 import { test, expect, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
 
 /**
  * Ranges on uncertain inputs on the demo pile: the band, what drives it and the verdict over the band, and the
@@ -11,6 +12,12 @@ async function typeInto(page: Page, key: string, text: string) {
   const input = field(page, key);
   await input.fill('');
   await input.pressSequentially(text, { delay: 5 });
+}
+
+async function expectNoSeriousAxeFindings(page: Page) {
+  const results = await new AxeBuilder({ page }).analyze();
+  const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+  expect(bad.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
 }
 
 /** The demo pile in a slow current with short waves: close at the likely values, and inside band over the fixity range. */
@@ -40,10 +47,18 @@ test('a fixity range on the demo pile gives a band, a band verdict worse than th
   await expect(quick.getByTestId('band-switches')).toContainText('close unless fixity depth below mudline is below');
   await expect(quick.getByTestId('quick-band-range')).toContainText('Hz');
   await page.screenshot({ path: 'screenshots/ranges-member-1024.png', fullPage: false });
+  await expectNoSeriousAxeFindings(page);
+  await page.setViewportSize({ width: 768, height: 1024 });
+  await fixity.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: 'screenshots/ranges-member-768-form.png' });
+  // In portrait the answer bar keeps the band in view while the ranges are typed.
+  await expect(page.getByTestId('answer-bar-band')).toContainText('inside band');
 
   // A low end above the high end is refused beside the range, naming the field.
   await fixity.locator('#m-fixityDepth-low').fill('7');
   await expect(fixity.locator('.field-error')).toContainText('the range of fixity depth below mudline runs from 7 m to 6.096 m');
+  await expect(page.getByTestId('quick-band').getByTestId('band-failure')).toContainText('fixity depth below mudline');
+  await fixity.screenshot({ path: 'screenshots/ranges-field-error.png' });
   await fixity.locator('#m-fixityDepth-low').fill('2.667');
   await expect(fixity.locator('.field-error')).toHaveCount(0);
 });
@@ -71,6 +86,7 @@ test('the default ranges give a band table, a sensitivity chart with its table, 
   await expect(panel.getByTestId('band-likely-verdict')).toContainText('close');
   await expect(panel.getByTestId('band-band-verdict')).toContainText('inside band');
   await panel.screenshot({ path: 'screenshots/ranges-results-1024.png' });
+  await expectNoSeriousAxeFindings(page);
   await page.setViewportSize({ width: 768, height: 1024 });
   await panel.screenshot({ path: 'screenshots/ranges-results-768.png' });
 

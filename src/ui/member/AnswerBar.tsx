@@ -1,6 +1,7 @@
 import type { ModelState } from '../state/app-model';
 import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
+import { AnswerBarBand } from './AnswerBarBand';
 
 /**
  * The answer in one line, kept in view at the bottom of the screen while the surveyor types (portrait and
@@ -23,6 +24,7 @@ export function AnswerBar({ state, stale }: { state: ModelState; stale: boolean 
             </span>
           )}
           {a.screening && <VerdictBadge verdict={a.screening.verdict} />}
+          <AnswerBarBand />
         </>
       ) : (
         <span>{a && !a.ok ? 'No answer: see the message above' : 'Fill in the member to see its frequencies'}</span>
