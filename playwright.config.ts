@@ -1,12 +1,16 @@
 import { defineConfig } from '@playwright/test';
+import { CHROMIUM_ARGS, chooseChromium } from './test/tools/chromium';
 
 /**
- * End-to-end tests in Debian's Chromium (never Playwright's own browser download), against the production
- * build served by `vite preview`, so the service worker and precache are the real ones.
+ * End-to-end tests against the production build served by `vite preview`, so the service worker and precache are
+ * the real ones, in `CHROMIUM_PATH`, else Debian's `/usr/bin/chromium`, else the Chromium shipped in the
+ * `@sparticuz/chromium` devDependency (test/tools/chromium.ts); never Playwright's own browser download.
  */
 /** Port of the preview server; another worktree may be serving on the default one. */
 const port = Number(process.env.WETMODE_E2E_PORT ?? 4173);
-const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+const browser = chooseChromium();
+// The config is read by the runner and again by each worker: say once which browser runs.
+if (process.env.TEST_WORKER_INDEX === undefined) console.log(`Browser tests run in ${browser.label}`);
 
 export default defineConfig({
   testDir: 'test/e2e',
@@ -21,9 +25,9 @@ export default defineConfig({
     baseURL: `http://localhost:${port}`,
     viewport: { width: 1024, height: 768 },
     launchOptions: {
-      executablePath,
-      // Flags for a root, offline-by-design machine: no sandbox, no background calls out.
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      executablePath: browser.executablePath,
+      args: CHROMIUM_ARGS,
+      ...(browser.env ? { env: { ...process.env, ...browser.env } } : {}),
     },
     trace: 'off',
   },

@@ -3,4 +3,4 @@
  */
 import { main } from './cli/main';
 
-process.exitCode = main(process.argv.slice(2), (s) => process.stdout.write(s + '\n'), (s) => process.stderr.write(s + '\n'));
+process.exitCode = await main(process.argv.slice(2), (s) => process.stdout.write(s + '\n'), (s) => process.stderr.write(s + '\n'));

@@ -7,7 +7,7 @@ import type { CaseExcitation } from '../physics/excitation/from-member';
 import type { MemberBuild } from '../kinds/common/types';
 import { kindOf } from '../kinds/registry';
 import { readExcitation } from '../forms/excitation';
-import type { FieldErrors } from '../forms/types';
+import { FORM_ERROR_KEY, type FieldErrors } from '../forms/types';
 
 export type CaseReading =
   | { ok: true; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors }
@@ -18,6 +18,17 @@ export type CaseReading =
  * stop the frequencies: the excitation is null and its messages come back beside the fields.
  */
 export function readCase(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitSystem'>): CaseReading {
+  // Total: whatever a case holds, reading it gives a build or messages, never a throw (a draft, link or file
+  // that threw here would stop the app from opening it, or from starting at all).
+  try {
+    return readCaseUnsafe(c);
+  } catch (e) {
+    const why = e instanceof Error ? e.message : String(e);
+    return { ok: false, errors: { [FORM_ERROR_KEY]: `These inputs cannot be computed (${why.slice(0, 200)}); check the values for a stray exponent or a wrong unit.` }, excitationErrors: {} };
+  }
+}
+
+function readCaseUnsafe(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitSystem'>): CaseReading {
   const kind = kindOf(c.kind);
   const r = kind.form.build(c.inputs, c.unitSystem);
   if (!r.ok) return { ok: false, errors: r.errors, excitationErrors: {} };

@@ -3,13 +3,17 @@
  * throws a `CaseFieldError` whose message names the field, what was expected and what was got;
  * `parseCase` turns that into `{ ok: false, message }` (nothing escapes it).
  */
+import { checkingKit, mustBe } from '../physics/check/kit';
 import { got, memberPath, quote } from './describe';
 
 /** Internal: a field failed its check. Never leaves `parseCase`. */
 export class CaseFieldError extends Error {}
 
+// The core's checking kit, with this schema's words for values ("a list of 3 items") and its error class.
+const KIT = checkingKit((value) => got(value).slice('got '.length), (field, expected, gotText) => new CaseFieldError(mustBe(field, expected, gotText)));
+
 export function fail(field: string, expected: string, value: unknown): never {
-  throw new CaseFieldError(`${field} must be ${expected}, ${got(value)}`);
+  return KIT.fail(field, expected, value);
 }
 
 /** Own data property only: values inherited through a prototype are not part of a case. */

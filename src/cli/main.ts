@@ -1,43 +1,51 @@
 /**
  * The `wetmode` command line, as a function of its arguments (tested without a process).
- * Output is JSON on standard output; errors go to standard error with a non-zero exit code.
+ * One FILE: one pretty JSON object on standard output, errors on standard error. Many inputs: see batch.ts.
+ * Each command's code is loaded only when that command runs (the case command alone needs the unit reader).
  */
-import { readInput } from './read-input';
+import { readFileSync } from 'node:fs';
 import { cautionLines } from '../text/cautions';
-import { runCalibrateCommand } from './calibrate-command';
-import { runCaseCommand } from './case-command';
-import { runMemberCommand } from './member-command';
-import { runSectionCommand } from './section-command';
-import { runSpectrumCommand } from './spectrum-command';
-import { runPlateCommand } from './plate-command';
+import { OPTIONS_HELP, parseCommandArgs } from './args';
+import { runBatch } from './batch';
+import { expandInputs } from './inputs';
+import { prepareOutDir } from './out-dir';
 
 interface Subcommand {
   summary: string;
   usage: string;
-  run: (inputText: string) => string;
+  load: () => Promise<(inputText: string) => string>;
 }
 
 const SUBCOMMANDS: Record<string, Subcommand> = {
-  member: { usage: 'member FILE', summary: 'dry and wet modes of a member model (SI JSON)', run: runMemberCommand },
-  section: { usage: 'section FILE', summary: '2D added-mass matrix of a cross-section (SI JSON)', run: runSectionCommand },
-  plate: { usage: 'plate FILE', summary: 'dry and wet modes of a plate panel in liquid (SI JSON)', run: runPlateCommand },
-  case: { usage: 'case FILE', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', run: runCaseCommand },
-  spectrum: { usage: 'spectrum FILE', summary: 'peaks of a motion record (CSV or text: time s, 1 to 3 accelerations)', run: runSpectrumCommand },
-  calibrate: { usage: 'calibrate FILE', summary: 'back-calculate one unknown input from a measured frequency', run: runCalibrateCommand },
+  member: { usage: 'member INPUT...', summary: 'dry and wet modes of a member model (SI JSON)', load: async () => (await import('./member-command')).runMemberCommand },
+  section: { usage: 'section INPUT...', summary: '2D added-mass matrix of a cross-section (SI JSON)', load: async () => (await import('./section-command')).runSectionCommand },
+  case: { usage: 'case INPUT...', summary: 'a saved case file (.wetmode.json): frequencies and resonance verdict', load: async () => (await import('./case-command')).runCaseCommand },
+  plate: { usage: 'plate INPUT...', summary: 'dry and wet modes of a plate panel in liquid (SI JSON)', load: async () => (await import('./plate-command')).runPlateCommand },
+  spectrum: { usage: 'spectrum FILE', summary: 'peaks of a motion record (CSV or text: time s, 1 to 3 accelerations)', load: async () => (await import('./spectrum-command')).runSpectrumCommand },
+  calibrate: { usage: 'calibrate INPUT...', summary: 'back-calculate one unknown input from a measured frequency', load: async () => (await import('./calibrate-command')).runCalibrateCommand },
 };
+
+/** What the command line needs from its process; tests pass their own. */
+export interface CliIo {
+  readStdin: () => string;
+  /** Whether standard error is a terminal (progress is then on without --progress). */
+  stderrIsTty: boolean;
+  now: () => number;
+}
 
 function help(): string {
   const lines = [
     `wetmode ${__APP_VERSION__} — dry and wet natural frequencies of members in liquid (screening estimates)`,
     '',
     'Usage:',
-    '  wetmode <command> FILE      FILE is a JSON file, or - for standard input',
+    '  wetmode <command> [options] INPUT...',
     '  wetmode --help | -h         this text',
     '  wetmode --version | -v      the version',
     '',
     'Commands:',
     ...Object.entries(SUBCOMMANDS).map(([name, c]) => `  ${c.usage.padEnd(26)}${c.summary}`),
-    ...(Object.keys(SUBCOMMANDS).length === 0 ? ['  (none yet)'] : []),
+    '',
+    ...OPTIONS_HELP,
     '',
     'Cautions:',
     ...cautionLines().map((l) => `  - ${l}`),
@@ -45,8 +53,14 @@ function help(): string {
   return lines.join('\n');
 }
 
-/** Runs the command line; returns the exit code. Separated from process handling so it can be tested. */
-export function main(argv: string[], out: (s: string) => void, err: (s: string) => void): number {
+const NODE_IO: CliIo = {
+  readStdin: () => readFileSync(0, 'utf8'),
+  stderrIsTty: Boolean(process.stderr.isTTY),
+  now: () => performance.now(),
+};
+
+/** Runs the command line; resolves to the exit status: 0 all ok, 1 any case failed, 2 usage error. */
+export async function main(argv: string[], out: (s: string) => void, err: (s: string) => void, io: CliIo = NODE_IO): Promise<number> {
   const [first, ...rest] = argv;
   if (first === undefined || first === '--help' || first === '-h' || first === 'help') {
     out(help());
@@ -58,19 +72,33 @@ export function main(argv: string[], out: (s: string) => void, err: (s: string) 
   }
   const sub = SUBCOMMANDS[first];
   if (!sub) {
-    err(`wetmode: unknown command "${first}". Expected one of: ${Object.keys(SUBCOMMANDS).join(', ') || '--help, --version'}. Try "wetmode --help".`);
+    err(`wetmode: unknown command "${first}". Expected one of: ${Object.keys(SUBCOMMANDS).join(', ')}. Try "wetmode --help".`);
     return 2;
   }
-  if (rest.length !== 1) {
-    err(`wetmode ${first}: expected exactly one FILE (or - for standard input), got ${rest.length}. Usage: wetmode ${sub.usage}`);
+  const parsed = parseCommandArgs(rest);
+  if (!parsed.ok) {
+    err(`wetmode ${first}: ${parsed.message}. Usage: wetmode ${sub.usage}`);
     return 2;
   }
-  try {
-    out(sub.run(readInput(rest[0])));
-    return 0;
-  } catch (e) {
-    err(`wetmode ${first}: ${e instanceof Error ? e.message : String(e)}`);
-    return 1;
+  const args = parsed.value;
+  if (args.outDir !== undefined) {
+    const problem = prepareOutDir(args.outDir, args.inputs);
+    if (problem) {
+      err(`wetmode ${first}: ${problem}`);
+      return 2;
+    }
   }
+  const { sources, single } = expandInputs(args.inputs, args.jsonl, io);
+  const run = await sub.load();
+  if (single && args.outDir === undefined) {
+    try {
+      out(run(sources[0].read()));
+      return 0;
+    } catch (e) {
+      err(`wetmode ${first}: ${e instanceof Error ? e.message : String(e)}`);
+      return 1;
+    }
+  }
+  const progress = args.progress || io.stderrIsTty ? err : undefined;
+  return runBatch(first, run, sources, args.outDir, { out, err, progress, now: io.now });
 }
-

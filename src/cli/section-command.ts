@@ -5,7 +5,7 @@
  */
 import { cautionLines } from '../text/cautions';
 import { toJson } from './json-out';
-import { formatNumber } from '../units';
+import { formatNumber } from '../units/format-number'; // not '../units': that loads mathjs
 import { parseSectionInput, solveSection } from '../physics/section/index';
 import type { SectionInput, SectionResult } from '../physics/section/index';
 

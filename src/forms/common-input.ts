@@ -2,6 +2,16 @@
 import type { BeamTheoryChoice } from '../kinds/common/theory';
 import type { Reader } from './read';
 
+/** Core field paths of the inputs every kind shares -> form field keys (for `FormSpec.coreFields`). */
+export const COMMON_CORE_FIELDS: Readonly<Record<string, string>> = {
+  youngsModulusPa: 'youngsModulus',
+  materialDensityKgPerM3: 'materialDensity',
+  liquidDensityKgPerM3: 'liquidDensity',
+};
+
+/** The same for a tube's outer diameter and wall. */
+export const TUBE_CORE_FIELDS: Readonly<Record<string, string>> = { outerDiameterM: 'outerDiameter', wallThicknessM: 'wallThickness' };
+
 /** Material and model options common to every kind's SI input. */
 export function commonInput(r: Reader): { youngsModulusPa: number; materialDensityKgPerM3: number; endEffect3d: boolean; beamTheory: BeamTheoryChoice } {
   return {

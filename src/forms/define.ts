@@ -3,8 +3,10 @@
  * and cross-field messages, building, and converting values between unit systems.
  */
 import type { MemberBuild } from '../kinds/common/types';
+import { checkedField } from '../physics/check/kit';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
+import { guardedBuild } from './total-build';
 import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
 
 /** The parts of a kind's form; `I` is the kind's SI input. */
@@ -20,6 +22,11 @@ export interface FormSpec<I> {
   toInput(r: Reader, err: (key: string, message: string) => void): I | null;
   /** The physics-side validator, run last as a safety net (its messages use SI field names). */
   validate(input: I): unknown;
+  /**
+   * Core field paths of the SI input -> this form's field keys, so a message from the safety net lands beside
+   * the field it is about (e.g. `{ outerDiameterM: 'outerDiameter' }`); unmapped paths go to FORM_ERROR_KEY.
+   */
+  coreFields?: Readonly<Record<string, string>>;
   buildModel(input: I): MemberBuild;
 }
 
@@ -75,14 +82,20 @@ export function defineForm<I>(spec: FormSpec<I>): MemberForm<I> {
       try {
         spec.validate(input);
       } catch (e) {
-        return { ok: false, errors: { [FORM_ERROR_KEY]: e instanceof Error ? e.message : String(e) } };
+        const core = checkedField(e);
+        const key = core !== undefined && spec.coreFields && Object.prototype.hasOwnProperty.call(spec.coreFields, core) ? spec.coreFields[core] : FORM_ERROR_KEY;
+        return { ok: false, errors: { [key]: e instanceof Error ? e.message : String(e) } };
       }
       return { ok: true, input };
     },
     buildModel: spec.buildModel,
     build(values, system) {
       const r = form.toInput(values, system);
-      return r.ok ? { ok: true, input: r.input, build: spec.buildModel(r.input) } : r;
+      if (!r.ok) return r;
+      const input = r.input;
+      // Never throws, and never passes on a non-finite number: see total-build.ts.
+      const b = guardedBuild(fields, () => readFields(fields, values, system).read, () => spec.buildModel(input));
+      return b.ok ? { ok: true, input, build: b.build } : b;
     },
     convertValues(values, from, to) {
       return convertFieldValues(fields, values, from, to);

@@ -102,18 +102,18 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
   }
 
   const machinery: Machine[] = [];
-  const rpm = r.opt('machineSpeed');
+  // The frequency dimension reads "1780 rpm" into Hz, the core's unit for shaft speed.
+  const hz = r.opt('machineSpeed');
   const blades = r.opt('bladeCount');
-  const rpmMax = r.opt('machineSpeedMax');
+  const hzMax = r.opt('machineSpeedMax');
   if (blades !== undefined && !Number.isInteger(blades)) errs.bladeCount = `blades or vanes must be a whole number, got ${blades}`;
-  if (rpm === undefined && (blades !== undefined || rpmMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
-  if (rpm !== undefined && rpmMax !== undefined && !(rpmMax >= rpm)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', rpm)})`;
-  if (rpm !== undefined) {
-    // The frequency dimension reads rpm into Hz; the screening wants rpm.
+  if (hz === undefined && (blades !== undefined || hzMax !== undefined)) errs.machineSpeed = 'enter the shaft speed, or clear the blade count and highest speed';
+  if (hz !== undefined && hzMax !== undefined && !(hzMax >= hz)) errs.machineSpeedMax = `highest shaft speed must be at least the shaft speed (${r.fmt('machineSpeed', hz)})`;
+  if (hz !== undefined) {
     machinery.push({
       label: 'machine',
-      shaftSpeedRpm: rpm * 60,
-      shaftSpeedMaxRpm: rpmMax !== undefined ? rpmMax * 60 : undefined,
+      shaftSpeedHz: hz,
+      shaftSpeedMaxHz: hzMax,
       bladeCount: blades,
       shaftOrders: r.list('shaftOrders'),
       bladePassOrders: blades !== undefined ? r.list('bladePassOrders') : undefined,

@@ -1,15 +1,12 @@
 /**
- * deflate-raw (RFC 1951) through the platform's CompressionStream / DecompressionStream
- * (all current browsers; Node 20 has them globally). Decompression is capped so a crafted link
- * that expands enormously ("zip bomb") is stopped early.
+ * deflate-raw (RFC 1951): compression through the platform's CompressionStream (all current browsers; Node 20
+ * has it globally); decompression through our own decoder (`inflate.ts`), the same on every platform, capped so
+ * a crafted link that expands enormously ("zip bomb") is stopped early.
  */
+import { inflateRawSync } from './inflate';
 
 export function compressionAvailable(): boolean {
   return typeof CompressionStream === 'function';
-}
-
-export function decompressionAvailable(): boolean {
-  return typeof DecompressionStream === 'function';
 }
 
 async function readAll(readable: ReadableStream<Uint8Array>, maxBytes: number): Promise<Uint8Array | 'too-large'> {
@@ -49,16 +46,17 @@ export async function deflateRaw(bytes: Uint8Array): Promise<Uint8Array> {
   return out as Uint8Array;
 }
 
-export type Inflated = { ok: true; bytes: Uint8Array } | { ok: false; reason: 'unsupported' | 'corrupt' | 'too-large' };
+export type Inflated = { ok: true; bytes: Uint8Array } | { ok: false; reason: 'corrupt' | 'too-large' };
 
-/** Never throws: a corrupt or truncated stream is `corrupt`, output beyond `maxBytes` is `too-large`. */
+/**
+ * Never throws: a corrupt, truncated or over-long stream (bytes after its final block) is `corrupt`, output
+ * beyond `maxBytes` is `too-large`. Decoded by our own `inflateRawSync`, not the platform's DecompressionStream,
+ * so Node and every browser accept and refuse exactly the same links (their streams differ on trailing bytes).
+ */
 export async function inflateRaw(bytes: Uint8Array, maxBytes: number): Promise<Inflated> {
-  if (!decompressionAvailable()) return { ok: false, reason: 'unsupported' };
   try {
-    const ds = new DecompressionStream('deflate-raw');
-    feed(ds.writable, bytes);
-    const out = await readAll(ds.readable, maxBytes);
-    return out === 'too-large' ? { ok: false, reason: 'too-large' } : { ok: true, bytes: out };
+    const r = inflateRawSync(bytes, maxBytes);
+    return r.ok ? r : { ok: false, reason: r.reason === 'too-large' ? 'too-large' : 'corrupt' };
   } catch {
     return { ok: false, reason: 'corrupt' };
   }

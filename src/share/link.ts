@@ -35,7 +35,6 @@ export const LINK_MESSAGES = {
     'this link is in a form this Wetmode does not know — if it was made by a newer Wetmode, update the app to open it; otherwise ask the sender to copy it again',
   extra: 'this link has extra characters at the end — it may have been changed when copied',
   damaged: 'this link is damaged — it may have been changed when copied; ask the sender to copy it again',
-  noDecompression: 'this browser cannot open compressed links — update the browser, or open the link on another device',
   notALink: 'this is not a Wetmode case link (a case link contains "#/open/")',
   newer: NEWER_VERSION_MESSAGE,
 } as const;
@@ -85,6 +84,22 @@ export async function encodeCaseLink(c: Case, baseUrl: string): Promise<string> 
 const fail = (message: string): DecodeResult => ({ ok: false, message });
 
 /**
+ * Undoes percent-encoding (RFC 3986 §2.1) where it is well formed; a stray "%" is left as it is (and then
+ * refused as a character that does not belong). The payload alphabet has no "%", so this never changes a good link.
+ */
+export function percentDecode(text: string): string {
+  if (!text.includes('%')) return text;
+  try {
+    return decodeURIComponent(text);
+  } catch {
+    return text.replace(/%[0-9A-Fa-f]{2}/g, (m) => {
+      const c = parseInt(m.slice(1), 16);
+      return c < 0x80 ? String.fromCharCode(c) : m;
+    });
+  }
+}
+
+/**
  * Reads a payload back into a case. Never throws and never returns part of a case: any cut, altered
  * or foreign payload gets one of LINK_MESSAGES (or parseCase's reason, for a well-formed link holding a bad case).
  */
@@ -92,8 +107,9 @@ export async function decodeCasePayload(payload: unknown): Promise<DecodeResult>
   try {
     if (typeof payload !== 'string') return fail(LINK_MESSAGES.damaged);
     if (payload.length > 2 * MAX_PAYLOAD_CHARS) return fail(LINK_MESSAGES.tooLong);
-    // Mail and chat apps sometimes wrap long links; white space is never part of a payload, so drop it.
-    const text = payload.replace(/\s+/g, '');
+    // The browser hands the fragment over percent-encoded (a space as %20, a pasted line break as %0A), and mail
+    // and chat apps wrap long links: decode, then drop white space, which is never part of a payload.
+    const text = percentDecode(payload).replace(/\s+/g, '');
     if (text.length === 0) return fail(LINK_MESSAGES.empty);
     if (text.length > MAX_PAYLOAD_CHARS) return fail(LINK_MESSAGES.tooLong);
     const prefix = text[0];
@@ -114,7 +130,7 @@ export async function decodeCasePayload(payload: unknown): Promise<DecodeResult>
     if (prefix === 'z') {
       const inflated = await inflateRaw(body, MAX_LINK_JSON_BYTES);
       if (!inflated.ok) {
-        return fail(inflated.reason === 'unsupported' ? LINK_MESSAGES.noDecompression : inflated.reason === 'too-large' ? LINK_MESSAGES.tooLong : LINK_MESSAGES.damaged);
+        return fail(inflated.reason === 'too-large' ? LINK_MESSAGES.tooLong : LINK_MESSAGES.damaged);
       }
       json = inflated.bytes;
     }

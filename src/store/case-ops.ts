@@ -2,8 +2,9 @@
 import { cutText, parseCase, type Case } from '../case';
 import type { CaseList, UndoToken, UnreadableRecord } from './api';
 import { caseKey, checkIncoming, failWith, inTx, notFound, readStored, type StoreContext, type Tx } from './context';
-import { CASES, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';
-import type { StoreResult } from './errors';
+import { CASES, storedRevision, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';
+import { storeError, StoreFailure, type StoreResult } from './errors';
+import { revisionOf, stamp, stampFrom, toRecord } from './revision';
 
 const DAY_MS = 86_400_000;
 
@@ -20,7 +21,7 @@ export function listCases(ctx: StoreContext): Promise<StoreResult<CaseList>> {
     const unreadable: UnreadableRecord[] = [];
     values.forEach((raw, i) => {
       const r = parseCase(raw);
-      if (r.ok) cases.push(r.value);
+      if (r.ok) cases.push(stampFrom(r.value, raw));
       else unreadable.push({ key: String(keys[i]), message: `This saved case cannot be read: ${r.message}` });
     });
     return { cases: cases.sort(newest), unreadable };
@@ -33,16 +34,42 @@ export function getCase(ctx: StoreContext, id: string): Promise<StoreResult<Case
     const key = caseKey(id, action);
     const raw: unknown = await tx.objectStore(CASES).get(key);
     if (raw === undefined) notFound(id, action);
-    return readStored(raw, key, action);
+    return stampFrom(readStored(raw, key, action), raw);
   });
 }
 
-export function saveCase(ctx: StoreContext, c: Case): Promise<StoreResult<Case>> {
+/** What a save is based on: the revision of the saved case the edits started from (null: never saved here). */
+export interface SaveBase {
+  baseRevision: number | null;
+}
+
+/**
+ * Saves a case. With `base`, the save is refused with kind 'conflict' (and the saved version in `theirs`) when the
+ * case on the device is not the one the edits started from — another tab or window saved it since — so nothing is
+ * overwritten silently. Without `base`, it replaces whatever is there (the user chose "keep mine").
+ */
+export function saveCase(ctx: StoreContext, c: Case, base?: SaveBase): Promise<StoreResult<Case>> {
   const action = 'save the case';
   return inTx(ctx, action, [CASES], 'readwrite', async (tx) => {
-    const value: Case = { ...checkIncoming(c, action), updatedAt: ctx.now().toISOString(), appVersion: ctx.appVersion };
-    await tx.objectStore(CASES).put(value);
-    return value;
+    const incoming = checkIncoming(c, action);
+    const store = tx.objectStore(CASES);
+    const raw: unknown = await store.get(incoming.id);
+    const current = raw === undefined ? null : storedRevision(raw);
+    if (base && raw !== undefined && current !== base.baseRevision) {
+      const parsed = parseCase(raw);
+      const theirs = parsed.ok ? stamp(parsed.value, current!) : null;
+      throw new StoreFailure(
+        storeError(
+          'conflict',
+          `Could not save the case: it was saved in another tab or window since you opened it${theirs ? ` (as ${JSON.stringify(theirs.name)}, ${theirs.updatedAt})` : ''}. Choose which version to keep.`,
+          { case: theirs, revision: current! },
+        ),
+      );
+    }
+    const revision = (current ?? 0) + 1;
+    const value: Case = { ...incoming, updatedAt: ctx.now().toISOString(), appVersion: ctx.appVersion };
+    await store.put(toRecord(value, revision));
+    return stamp(value, revision);
   });
 }
 
@@ -51,7 +78,12 @@ async function readForChange(tx: Tx, id: string, action: string): Promise<Case> 
   const key = caseKey(id, action);
   const raw: unknown = await tx.objectStore(CASES).get(key);
   if (raw === undefined) notFound(id, action);
-  return readStored(raw, key, action);
+  return stampFrom(readStored(raw, key, action), raw);
+}
+
+/** The revision a stored case was read at (by `readForChange`). */
+function revisionRead(c: Case): number {
+  return revisionOf(c) ?? 0;
 }
 
 export function duplicateCase(ctx: StoreContext, id: string, newName: string): Promise<StoreResult<Case>> {
@@ -60,8 +92,8 @@ export function duplicateCase(ctx: StoreContext, id: string, newName: string): P
     const original = await readForChange(tx, id, action);
     const nowIso = ctx.now().toISOString();
     const copy = checkIncoming({ ...original, id: ctx.newId(), name: newName, createdAt: nowIso, updatedAt: nowIso, appVersion: ctx.appVersion }, action);
-    await tx.objectStore(CASES).add(copy);
-    return copy;
+    await tx.objectStore(CASES).add(toRecord(copy, 1));
+    return stamp(copy, 1);
   });
 }
 
@@ -70,8 +102,9 @@ export function renameCase(ctx: StoreContext, id: string, newName: string): Prom
   return inTx(ctx, action, [CASES], 'readwrite', async (tx) => {
     const original = await readForChange(tx, id, action);
     const renamed = checkIncoming({ ...original, name: newName, updatedAt: ctx.now().toISOString(), appVersion: ctx.appVersion }, action);
-    await tx.objectStore(CASES).put(renamed);
-    return renamed;
+    const revision = revisionRead(original) + 1;
+    await tx.objectStore(CASES).put(toRecord(renamed, revision));
+    return stamp(renamed, revision);
   });
 }
 
@@ -117,7 +150,10 @@ export function undoDelete(ctx: StoreContext, token: UndoToken, nameChars: numbe
       restored = taken
         ? checkIncoming({ ...parsed.value, id: ctx.newId(), name: restoredName(parsed.value.name, nameChars) }, action)
         : parsed.value;
-      await cases.add(restored);
+      // One more than it had, so a tab still holding the deleted version notices the change when it saves.
+      const revision = taken ? 1 : storedRevision(entry.record) + 1;
+      await cases.add(toRecord(restored, revision));
+      stamp(restored, revision);
     } else {
       // An unreadable record goes back exactly as it was; `add` refuses (and aborts) rather than overwrite.
       try {

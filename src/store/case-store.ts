@@ -2,7 +2,9 @@
  * `openStore(factory?, options?)`: the device store of cases, drafts and undo, on IndexedDB through idb.
  * See `api.ts` for what each method does and `db-schema.ts` for the layout and its migration ladder.
  */
-import { CASE_LIMITS } from '../case';
+import { CASE_LIMITS, type Case } from '../case';
+import { openChangeChannel, type StoreChange } from './broadcast';
+import { revisionOf } from './revision';
 import type { CaseStore, StoreOptions } from './api';
 import * as cases from './case-ops';
 import type { StoreContext } from './context';
@@ -33,31 +35,49 @@ export async function openStore(factory?: IDBFactory, options: StoreOptions = {}
   const opened = await openDatabase(f, { name: options.dbName ?? DB_NAME, nowIso: () => now().toISOString(), onClose });
   if (!opened.ok) return opened;
   const db = opened.value;
+  const tabId = options.tabId ?? 'tab';
   const ctx: StoreContext = {
     db,
     now,
     newId: options.newId ?? newCaseId,
     appVersion: options.appVersion ?? APP_VERSION,
     isClosed: () => closed,
+    tabId,
   };
   const storage = 'storage' in options ? options.storage : defaultStorage();
+  const channel = 'channel' in options ? openChangeChannel(options.channel ?? null) : openChangeChannel();
+  // After a successful change, tell the other tabs (their lists and open cases follow).
+  const told = <T>(r: StoreResult<T>, change: (v: T) => StoreChange | null): StoreResult<T> => {
+    const c = r.ok ? change(r.value) : null;
+    if (c) channel.post(c);
+    return r;
+  };
+  const savedChange = (c: Case): StoreChange => ({ type: 'saved', id: c.id, revision: revisionOf(c) ?? 0, from: tabId });
+  const draftsChange = (): StoreChange => ({ type: 'drafts', from: tabId });
   const store: CaseStore = {
     listCases: () => cases.listCases(ctx),
     getCase: (id) => cases.getCase(ctx, id),
-    saveCase: (c) => cases.saveCase(ctx, c),
-    duplicateCase: (id, newName) => cases.duplicateCase(ctx, id, newName),
-    renameCase: (id, newName) => cases.renameCase(ctx, id, newName),
-    deleteCase: (id) => cases.deleteCase(ctx, id),
-    undoDelete: (token) => cases.undoDelete(ctx, token, CASE_LIMITS.nameChars),
-    saveDraft: (draft) => drafts.saveDraft(ctx, draft),
+    saveCase: async (c, base) => told(await cases.saveCase(ctx, c, base), savedChange),
+    duplicateCase: async (id, newName) => told(await cases.duplicateCase(ctx, id, newName), savedChange),
+    renameCase: async (id, newName) => told(await cases.renameCase(ctx, id, newName), savedChange),
+    deleteCase: async (id) => told(await cases.deleteCase(ctx, id), () => ({ type: 'deleted', id: String(id).toLowerCase(), from: tabId })),
+    undoDelete: async (token) => told(await cases.undoDelete(ctx, token, CASE_LIMITS.nameChars), (c) => (c ? savedChange(c) : draftsChange())),
+    saveDraft: (draft, baseRevision = null, rec = false) => drafts.saveDraft(ctx, draft, baseRevision, rec),
     loadDraft: () => drafts.loadDraft(ctx),
+    listDrafts: () => drafts.listDrafts(ctx),
+    adoptDraft: async (key) => told(await drafts.adoptDraft(ctx, key), draftsChange),
+    mergeDraft: async (tab, draft, savedAt, baseRevision, rec = false) =>
+      told(await drafts.mergeDraft(ctx, tab, draft, savedAt, baseRevision, rec), (w) => (w ? draftsChange() : null)),
+    discardDraft: async (key) => told(await drafts.discardDraft(ctx, key), draftsChange),
     clearDraft: () => drafts.clearDraft(ctx),
+    onChange: (fn) => channel.listen(fn),
     findSameCase: (c) => received.findSameCase(ctx, c),
-    saveReceived: (c) => received.saveReceived(ctx, c),
+    saveReceived: async (c) => told(await received.saveReceived(ctx, c), (v) => (v.status === 'same' ? null : savedChange(v.case))),
     requestPersistence: () => requestPersistence(storage),
     estimateQuota: () => estimateQuota(storage),
     close: () => {
       closed = true;
+      channel.close();
       db.close();
     },
   };

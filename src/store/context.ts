@@ -9,6 +9,8 @@ export interface StoreContext {
   newId: () => string;
   appVersion: string;
   isClosed: () => boolean;
+  /** This tab's id (drafts are kept per tab). */
+  tabId: string;
 }
 
 /** Typed as read-write so writes typecheck; read-only bodies only read. */

@@ -8,17 +8,29 @@
  * Version 1 — pre-release development builds:
  *   `cases`  keyPath "id"   case objects as saved (schema version 0 or 1)
  *   `draft`  out-of-line    the case being edited, stored bare under the key "current"
- * Version 2 — current:
+ * Version 2:
  *   `cases`  keyPath "id"   case objects, schema version 1 (older ones rewritten by the step)
  *   `draft`  out-of-line    `DraftRecord` under the key "current"
  *   `trash`  keyPath "token" `TrashRecord`: deleted cases kept for undo (purged after TRASH_DAYS)
+ * Version 3 — current:
+ *   `cases`  keyPath "id"   case objects, each with a `revision` beside the case fields (`StoredCase`): 1 when
+ *                           first written, +1 on every change; a record without one counts as revision 0
+ *   `drafts` keyPath "key"  `TabDraftRecord`: one draft per tab and case (several tabs no longer share one slot);
+ *                           the step moves version 2's single draft here under the tab "earlier"
+ *   `trash`  as in version 2
  */
 import type { IDBPDatabase, IDBPTransaction } from 'idb';
 import { parseCase } from '../case';
 
 export const DB_NAME = 'wetmode';
 export const CASES = 'cases';
+/** Version 1–2 draft store (one slot); replaced by DRAFTS in version 3. */
 export const DRAFT = 'draft';
+export const DRAFTS = 'drafts';
+/** The tab name given to a draft kept by a version 2 database (one slot, no tab). */
+export const EARLIER_TAB = 'earlier';
+/** The tab name of drafts set aside when their tab moved on to another case (offered on the Cases screen). */
+export const SET_ASIDE_TAB = 'set-aside';
 export const TRASH = 'trash';
 export const DRAFT_KEY = 'current';
 /** Deleted cases stay restorable for this many days. */
@@ -29,6 +41,34 @@ export interface DraftRecord {
   savedAt: string;
   /** Read back through parseCase. */
   case: unknown;
+}
+
+/** A draft from version 3: the case one tab is editing, keyed by tab and case. */
+export interface TabDraftRecord {
+  /** `draftKey(tab, caseId)`. */
+  key: string;
+  tab: string;
+  caseId: string;
+  savedAt: string;
+  /** Revision of the saved case this draft was based on; null when it was never saved (or not known). */
+  baseRevision: number | null;
+  /** True for a received (link) or imported (file) case kept before an update: it reopens as received. */
+  received?: boolean;
+  /** Read back through parseCase. */
+  case: unknown;
+}
+
+export function draftKey(tab: string, caseId: string): string {
+  return `${tab}\n${caseId}`;
+}
+
+/** A case record as stored from version 3: the case fields plus its revision (parseCase drops the extra field). */
+export const REVISION_FIELD = 'revision';
+
+/** The revision of a stored record: a whole number ≥ 0; a record without one (older versions) counts as 0. */
+export function storedRevision(raw: unknown): number {
+  const r = typeof raw === 'object' && raw !== null ? (raw as Record<string, unknown>)[REVISION_FIELD] : undefined;
+  return typeof r === 'number' && Number.isSafeInteger(r) && r >= 0 ? r : 0;
 }
 
 /** A deleted case kept for undo. */
@@ -82,6 +122,29 @@ async function dbV1toV2(db: UpgradeDb, tx: UpgradeTx, ctx: UpgradeContext): Prom
   }
 }
 
+/** 2 -> 3: drafts by tab and case; the one draft of version 2 moves there, under the tab "earlier". */
+async function dbV2toV3(db: UpgradeDb, tx: UpgradeTx, ctx: UpgradeContext): Promise<void> {
+  db.createObjectStore(DRAFTS, { keyPath: 'key' });
+  const old: unknown = await tx.objectStore(DRAFT).get(DRAFT_KEY);
+  if (old !== undefined) {
+    const rec = (typeof old === 'object' && old !== null ? old : {}) as Partial<DraftRecord>;
+    const parsed = parseCase(rec.case);
+    const caseId = parsed.ok ? parsed.value.id : 'unknown';
+    const moved: TabDraftRecord = {
+      key: draftKey(EARLIER_TAB, caseId),
+      tab: EARLIER_TAB,
+      caseId,
+      savedAt: typeof rec.savedAt === 'string' ? rec.savedAt : ctx.nowIso,
+      // Records from before revisions count as revision 0: a draft of a saved case starts from it (no false conflict).
+      baseRevision: parsed.ok && (await tx.objectStore(CASES).getKey(caseId)) !== undefined ? 0 : null,
+      // Kept as it was, readable or not: an unreadable draft is listed and can be discarded, never dropped here.
+      case: rec.case ?? old,
+    };
+    await tx.objectStore(DRAFTS).put(moved);
+  }
+  db.deleteObjectStore(DRAFT);
+}
+
 /** The ladder; its length is the current database version. */
-export const DB_STEPS: readonly DbStep[] = [dbV0toV1, dbV1toV2];
+export const DB_STEPS: readonly DbStep[] = [dbV0toV1, dbV1toV2, dbV2toV3];
 export const DB_VERSION = DB_STEPS.length;

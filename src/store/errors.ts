@@ -2,6 +2,7 @@
  * Store results: every store call resolves to `{ ok: true, value }` or a `StoreError` with a kind the UI can act on
  * and a message in plain words it can show as it is. Nothing fails silently and nothing is thrown at the UI.
  */
+import type { Case } from '../case';
 
 export type StoreErrorKind =
   /** No IndexedDB, private browsing that refuses it, or site storage turned off. */
@@ -20,6 +21,8 @@ export type StoreErrorKind =
   | 'invalid-case'
   /** A stored record does not pass `parseCase` (the message says why). */
   | 'unreadable'
+  /** The saved case changed (another tab or window saved it) since the version this save was based on. */
+  | 'conflict'
   /** Anything else; the message names the action and the browser's reason. */
   | 'failed';
 
@@ -27,6 +30,8 @@ export interface StoreError {
   ok: false;
   kind: StoreErrorKind;
   message: string;
+  /** With 'conflict': the saved version now on the device (null when that record cannot be read) and its revision. */
+  theirs?: { case: Case | null; revision: number };
 }
 
 export type StoreResult<T> = { ok: true; value: T } | StoreError;
@@ -35,8 +40,8 @@ export function ok<T>(value: T): StoreResult<T> {
   return { ok: true, value };
 }
 
-export function storeError(kind: StoreErrorKind, message: string): StoreError {
-  return { ok: false, kind, message };
+export function storeError(kind: StoreErrorKind, message: string, theirs?: StoreError['theirs']): StoreError {
+  return theirs ? { ok: false, kind, message, theirs } : { ok: false, kind, message };
 }
 
 /** A store error raised inside an operation; `runOp` returns it as it is (after aborting the transaction). */

@@ -12,10 +12,14 @@
  * }
  * ```
  */
-export type { CaseList, CaseStore, Draft, ReceivedOutcome, SameCaseAnswer, StoreOptions, UndoToken, UnreadableRecord } from './api';
+export type { CaseList, CaseStore, Draft, DraftList, ReceivedOutcome, SameCaseAnswer, StoreOptions, UndoToken, UnreadableRecord } from './api';
 export { openStore } from './case-store';
 export { DB_NAME, DB_VERSION, TRASH_DAYS } from './db-schema';
 export type { StoreError, StoreErrorKind, StoreResult } from './errors';
 export { searchCases, sortCases, type CaseSort } from './list-view';
 export { APP_VERSION, newCase, newCaseId } from './new-case';
 export { estimateQuota, requestPersistence, type PersistenceAnswer, type QuotaEstimate, type StorageLike } from './persistence';
+export { revisionOf } from './revision';
+export type { StoreChange } from './broadcast';
+export type { SaveBase } from './case-ops';
+export { EARLIER_TAB, SET_ASIDE_TAB } from './db-schema';

@@ -7,17 +7,19 @@ import type { ReceivedOutcome, SameCaseAnswer } from './api';
 import { checkIncoming, inTx, type StoreContext, type Tx } from './context';
 import { CASES } from './db-schema';
 import type { StoreResult } from './errors';
+import { stamp, stampFrom, toRecord } from './revision';
 
 async function compareWithSaved(tx: Tx, c: Case): Promise<SameCaseAnswer> {
   const raw: unknown = await tx.objectStore(CASES).get(c.id);
   if (raw === undefined) return { status: 'new' };
-  const saved = parseCase(raw);
-  if (!saved.ok) return { status: 'changed', saved: null };
+  const parsed = parseCase(raw);
+  if (!parsed.ok) return { status: 'changed', saved: null };
+  const saved = { ok: true as const, value: stampFrom(parsed.value, raw) };
   if (sameCaseContent(saved.value, c)) return { status: 'same', saved: saved.value };
   // The same changed link received before was saved as a renamed copy with a new id: that copy is "the same".
   for (const other of await tx.objectStore(CASES).getAll()) {
     const o = parseCase(other);
-    if (o.ok && o.value.id !== c.id && isRenamedCopy(o.value, c)) return { status: 'same', saved: o.value };
+    if (o.ok && o.value.id !== c.id && isRenamedCopy(o.value, c)) return { status: 'same', saved: stampFrom(o.value, other) };
   }
   return { status: 'changed', saved: saved.value };
 }
@@ -56,8 +58,8 @@ export function saveReceived(ctx: StoreContext, c: Case): Promise<StoreResult<Re
     const nowIso = now.toISOString();
     if (found.status === 'new') {
       const value: Case = { ...incoming, updatedAt: nowIso, appVersion: ctx.appVersion };
-      await cases.add(value);
-      return { status: 'saved', case: value };
+      await cases.add(toRecord(value, 1));
+      return { status: 'saved', case: stamp(value, 1) };
     }
     const names = new Set<string>();
     for (const raw of await cases.getAll()) {
@@ -69,7 +71,7 @@ export function saveReceived(ctx: StoreContext, c: Case): Promise<StoreResult<Re
       action,
     );
     // `add`, not `put`: if the new id were somehow taken, the transaction aborts instead of overwriting.
-    await cases.add(copy);
-    return { status: 'saved-copy', case: copy };
+    await cases.add(toRecord(copy, 1));
+    return { status: 'saved-copy', case: stamp(copy, 1) };
   });
 }

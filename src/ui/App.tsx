@@ -5,29 +5,12 @@ import { UpdatePrompt } from './shell/UpdatePrompt';
 import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
-import { SectionScreen } from './section/SectionScreen';
 import { MemberScreen } from './member/MemberScreen';
-import { ResultsScreen } from './screens/ResultsScreen';
-import { OpenLinkScreen } from './screens/OpenLinkScreen';
-import { CasesScreen, ReceivedBanner, ShareActions } from './cases';
-import { ReportScreen } from './screens/ReportScreen';
-import { AppServicesProvider, useModel, useServices } from './state/context';
+import { CasesScreen, OpenLinkScreen, ReportScreen, ResultsWithActions, SectionScreen } from './screens/lazy-screens';
+import { AppServicesProvider } from './state/context';
+import { ConflictPrompt } from './cases/ConflictPrompt';
 import { useBoot } from './state/use-boot';
 import type { Route } from './shell/router';
-
-function ResultsWithActions() {
-  const [state] = useModel();
-  return (
-    <ResultsScreen
-      banner={state.doc ? <ReceivedBanner doc={state.doc} /> : null}
-      actions={state.doc ? <ShareActions doc={state.doc} /> : null}
-    />
-  );
-}
-
-function SectionWithModel() {
-  return <SectionScreen model={useServices().section} />;
-}
 
 function Screen({ route }: { route: Route }) {
   switch (route.screen) {
@@ -40,7 +23,7 @@ function Screen({ route }: { route: Route }) {
     case 'report':
       return <ReportScreen />;
     case 'section':
-      return <SectionWithModel />;
+      return <SectionScreen />;
     case 'cautions':
       return <CautionsScreen />;
     case 'open':
@@ -66,6 +49,7 @@ export function App() {
       <UpdatePrompt />
       <main id="main" tabIndex={-1}>
         <AppServicesProvider value={services}>
+          <ConflictPrompt />
           <Screen route={route} />
         </AppServicesProvider>
       </main>

@@ -7,6 +7,7 @@
  */
 import { DIMENSIONS, type Dimension, type UnitSystem } from './dimensions';
 import { evaluateText, isUnit } from './math';
+import { formatNumber } from './format-number';
 
 const factors = new Map<string, number>([
   ['', 1],
@@ -30,12 +31,7 @@ export function unitLabel(unit: string): string {
   return unit.replace(/\^2/g, '²').replace(/\^3/g, '³').replace(/ (?=[A-Za-z])/g, '·');
 }
 
-/** A number to `digits` significant figures, without trailing zeros or a negative zero: 304.8 → "305". */
-export function formatNumber(x: number, digits = 4): string {
-  if (!Number.isFinite(x)) return String(x);
-  const v = Number(x.toPrecision(Math.min(21, Math.max(1, Math.round(digits)))));
-  return String(v === 0 ? 0 : v);
-}
+export { formatNumber };
 
 /** `formatQuantity(0.305, 'mm')` → "305 mm"; `formatQuantity(7850, 'kg/m^3')` → "7850 kg/m³". */
 export function formatQuantity(valueSI: number, unit: string, digits = 4): string {

@@ -12,6 +12,7 @@
 import { DIMENSIONS, type Dimension, describeExponents, matchesDimension } from './dimensions';
 import { unitFactor } from './format';
 import { evaluateWithUnits, isUnit } from './math';
+import { isUnitReaderPending } from './reader-pending';
 
 export type QuantityResult = { ok: true; valueSI: number } | { ok: false; message: string };
 export type QuantityListResult = { ok: true; valuesSI: number[] } | { ok: false; message: string };
@@ -115,6 +116,7 @@ export function parseQuantity(text: string, { dimension, unit }: QuantityOptions
   try {
     ({ value: r, namedUnits } = evaluateWithUnits(src));
   } catch (e) {
+    if (isUnitReaderPending(e)) throw e; // not an input error: the app loads the reader and reads again
     return { ok: false, message: explain(e, shown, dimension) };
   }
   let value: number;

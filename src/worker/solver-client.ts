@@ -51,6 +51,11 @@ export class SolverClient<Req, Res> {
     });
   }
 
+  /** Starts the worker now, so its script loads while the page boots rather than at the first request. */
+  start(): void {
+    this.ensureWorker();
+  }
+
   /** Stops the worker; anything running or waiting resolves as superseded. */
   terminate(): void {
     this.clearTimer();

@@ -31,8 +31,8 @@ function makeCase(modes: number, nodes: number, seed: number): ScreeningInput {
     stemFrequencyRatioScreen: true,
     waves: { periodMinS: 3, periodMaxS: 15 },
     machinery: [
-      { label: 'pump', shaftSpeedRpm: 1480, bladeCount: 6 },
-      { label: 'fan', shaftSpeedRpm: 600, shaftSpeedMaxRpm: 900, bladeCount: 4, shaftOrders: [1, 2, 3] },
+      { label: 'pump', shaftSpeedHz: 1480 / 60, bladeCount: 6 },
+      { label: 'fan', shaftSpeedHz: 10, shaftSpeedMaxHz: 15, bladeCount: 4, shaftOrders: [1, 2, 3] },
     ],
     machineryAgainst: 'wet-and-dry',
   };

@@ -35,6 +35,22 @@ export function run(): void {
     boundaries: [{ kind: 'enclosure', shape: 'circle', diameterM: 3.2 }],
   };
   report('three bodies in a circular enclosure, default', time(() => must(three), 10, 3), 100);
+  // Four circles in a row 0.1 D above a wall (invented layout), at the default (adaptive) accuracy.
+  const four: SectionInput = {
+    liquidDensityKgPerM3: RHO,
+    bodies: [0, 1, 2, 3].map((k) => ({ shape: 'circle' as const, diameterM: 0.5, centerM: [0.8 * k, 0.3] as [number, number] })),
+    boundaries: [{ kind: 'wall', pointM: [0, 0], normal: [0, 1] }],
+  };
+  const rFour = must(four);
+  const worstFour = Math.max(...rFour.errorEstimates.filter((e) => e.motion !== 'rotation').map((e) => e.relativeError));
+  report('four circles 0.1 D above a wall, default accuracy', time(() => must(four), 10, 2), 10);
+  console.log(`  panels per body ${rFour.bodies[0].panels}, largest estimated relative error (x, y) ${worstFour.toExponential(2)}`);
+  // A 1 % annulus gap at the default: true error against Fritz and the estimate (which must be at least it).
+  const narrow: SectionInput = { liquidDensityKgPerM3: RHO, bodies: [{ shape: 'circle', diameterM: 1 }], boundaries: [{ kind: 'enclosure', shape: 'circle', diameterM: 1.01 }] };
+  const rn = must(narrow);
+  const fritzNarrow = (RHO * Math.PI * 0.25 * (0.505 ** 2 + 0.25)) / (0.505 ** 2 - 0.25);
+  report('annulus with a 1 % gap, default accuracy', time(() => must(narrow), 5, 1));
+  console.log(`  true error ${((rn.bodies[0].addedMassX - fritzNarrow) / fritzNarrow).toExponential(2)}, estimated ${rn.errorEstimates[0].relativeError.toExponential(2)}, panels per body ${rn.bodies[0].panels}`);
   const t = time(() => solveSection(circle, { energyCheck: true }), 5, 1);
   report('single circle with the energy cross-check', t);
 

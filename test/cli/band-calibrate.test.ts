@@ -4,10 +4,10 @@ import { main } from '../../src/cli/main';
 import { runMemberCommand } from '../../src/cli/member-command';
 import { expectClose } from '../helpers/expect-close';
 
-function run(args: string[]) {
+async function run(args: string[]) {
   const out: string[] = [];
   const err: string[] = [];
-  const code = main(args, (s) => out.push(s), (s) => err.push(s));
+  const code = await main(args, (s) => out.push(s), (s) => err.push(s));
   return { code, out: out.join('\n'), err: err.join('\n') };
 }
 
@@ -15,7 +15,7 @@ const pileText = readFileSync('examples/member-fender-pile-port-halloran.json', 
 const withRanges = (ranges: unknown) => JSON.stringify({ ...JSON.parse(pileText), ranges });
 
 describe('wetmode member with ranges', () => {
-  it('adds a band mode by mode, lowest first, that holds the likely answer, and leaves the rest unchanged', () => {
+  it('adds a band mode by mode, lowest first, that holds the likely answer, and leaves the rest unchanged', async () => {
     const plain = JSON.parse(runMemberCommand(pileText));
     const ranged = JSON.parse(
       runMemberCommand(withRanges([
@@ -43,23 +43,23 @@ describe('wetmode member with ranges', () => {
     expect(mass.atHighHz).toBeLessThan(mass.atLowHz);
   });
 
-  it('refuses a bad path or a low above high with a message naming it (exit 1)', () => {
+  it('refuses a bad path or a low above high with a message naming it (exit 1)', async () => {
     const dir = '/tmp/wetmode-band-test';
     mkdirSync(dir, { recursive: true });
     writeFileSync(`${dir}/bad-path.json`, withRanges([{ path: 'masses.4.massKg', low: 0, high: 1 }]));
     writeFileSync(`${dir}/low-high.json`, withRanges([{ path: 'liquid.toM', low: 18, high: 14 }]));
-    const a = run(['member', `${dir}/bad-path.json`]);
+    const a = await run(['member', `${dir}/bad-path.json`]);
     expect(a.code).toBe(1);
     expect(a.err).toContain('masses.4.massKg');
-    const b = run(['member', `${dir}/low-high.json`]);
+    const b = await run(['member', `${dir}/low-high.json`]);
     expect(b.code).toBe(1);
     expect(b.err).toContain('ranges[0] (liquid.toM): low 18 is above high 14');
   });
 });
 
 describe('wetmode calibrate', () => {
-  it('back-calculates the scoured soil top of the example pile and prints the value, interval and frequencies', () => {
-    const r = run(['calibrate', 'examples/calibrate-fender-pile-port-halloran.json']);
+  it('back-calculates the scoured soil top of the example pile and prints the value, interval and frequencies', async () => {
+    const r = await run(['calibrate', 'examples/calibrate-fender-pile-port-halloran.json']);
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out);
     expect(out.ok).toBe(true);
@@ -72,12 +72,12 @@ describe('wetmode calibrate', () => {
     expect(out.cautions.length).toBeGreaterThan(0);
   });
 
-  it('prints ok false with the reachable range when nothing in the range fits', () => {
+  it('prints ok false with the reachable range when nothing in the range fits', async () => {
     const doc = JSON.parse(readFileSync('examples/calibrate-fender-pile-port-halloran.json', 'utf8'));
     doc.measured.frequencyHz = 3;
     mkdirSync('/tmp/wetmode-band-test', { recursive: true });
     writeFileSync('/tmp/wetmode-band-test/nofit.json', JSON.stringify(doc));
-    const r = run(['calibrate', '/tmp/wetmode-band-test/nofit.json']);
+    const r = await run(['calibrate', '/tmp/wetmode-band-test/nofit.json']);
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out);
     expect(out.ok).toBe(false);

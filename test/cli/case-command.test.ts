@@ -32,14 +32,14 @@ describe('wetmode case', () => {
     expect(out.cautions.join(' ')).toContain('qualified engineer');
   });
 
-  it('bad files say what was expected and what was got, and exit non-zero', () => {
+  it('bad files say what was expected and what was got, and exit non-zero', async () => {
     expect(() => runCaseCommand('{ not json')).toThrow(/not valid JSON/);
     expect(() => runCaseCommand(JSON.stringify({ format: 'something-else' }))).toThrow(/not a usable Wetmode case/);
     const bad = JSON.parse(readFileSync(EXAMPLE, 'utf8'));
     bad.inputs.wallThickness = '500 mm';
     expect(() => runCaseCommand(JSON.stringify(bad))).toThrow(/wallThickness: wall thickness must be less than half the outer diameter \(381 mm\)/);
     const err: string[] = [];
-    const code = main(['case', 'no/such/file.json'], () => undefined, (s) => err.push(s));
+    const code = await main(['case', 'no/such/file.json'], () => undefined, (s) => err.push(s));
     expect(code).toBe(1);
     expect(err.join('')).toContain('no such file');
   });

@@ -4,10 +4,10 @@ import { main } from '../../src/cli/main';
 import { runSpectrumCommand } from '../../src/cli/spectrum-command';
 import { expectClose } from '../helpers/expect-close';
 
-function run(args: string[]) {
+async function run(args: string[]) {
   const out: string[] = [];
   const err: string[] = [];
-  const code = main(args, (s) => out.push(s), (s) => err.push(s));
+  const code = await main(args, (s) => out.push(s), (s) => err.push(s));
   return { code, out: out.join('\n'), err: err.join('\n') };
 }
 
@@ -15,8 +15,8 @@ function run(args: string[]) {
 const fd = (f: number, z: number) => f * Math.sqrt(1 - z * z);
 
 describe('wetmode spectrum', () => {
-  it('prints the rate, resolution, Nyquist limit and the peaks of the logger example, strongest first, with cautions', () => {
-    const r = run(['spectrum', 'examples/record-port-halloran-pile-logger.csv']);
+  it('prints the rate, resolution, Nyquist limit and the peaks of the logger example, strongest first, with cautions', async () => {
+    const r = await run(['spectrum', 'examples/record-port-halloran-pile-logger.csv']);
     expect(r.err).toBe('');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out);
@@ -41,7 +41,7 @@ describe('wetmode spectrum', () => {
     expect(cautions).toContain("site's safety procedures");
   });
 
-  it('reads the tablet example (semicolons, decimal comma, irregular times) and says it was resampled', () => {
+  it('reads the tablet example (semicolons, decimal comma, irregular times) and says it was resampled', async () => {
     const out = JSON.parse(runSpectrumCommand(readFileSync('examples/record-skerry-alpha-riser-tablet.txt', 'utf8')));
     // Made with modes of 1.62 Hz (ζ 0.018) and 5.9 Hz (ζ 0.01) at about 60 events a second, one in fifty late.
     expectClose(out.peaks[0].frequencyHz, fd(1.62, 0.018), { rtol: 0.01, label: 'tablet first peak' });
@@ -52,14 +52,14 @@ describe('wetmode spectrum', () => {
     expect(out.notes.join(' ')).toContain('not evenly timed');
   });
 
-  it('exits 1 with the line and what was expected for a file that does not read', () => {
-    const bad = run(['spectrum', 'examples/member-fender-pile-port-halloran.json']);
+  it('exits 1 with the line and what was expected for a file that does not read', async () => {
+    const bad = await run(['spectrum', 'examples/member-fender-pile-port-halloran.json']);
     expect(bad.code).toBe(1);
     expect(bad.err).toMatch(/^wetmode spectrum: the motion record does not read: /);
     expect(() => runSpectrumCommand('t,a\n0,1\n0.01,2\n0.02,x\n')).toThrow('the motion record does not read: 1 row of 3 does not read as 2 numbers (comma-separated); the first is line 4 ("0.02,x"): expected a number in column 2, got "x"');
   });
 
-  it('is listed in the help', () => {
-    expect(run(['--help']).out).toMatch(/spectrum FILE\s+peaks of a motion record/);
+  it('is listed in the help', async () => {
+    expect((await run(['--help'])).out).toMatch(/spectrum FILE\s+peaks of a motion record/);
   });
 });

@@ -1,50 +1,14 @@
 import { test, expect, type Page } from '@playwright/test';
 import { serviceWorkerActivated } from './support/service-worker';
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { cpSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { servedCopyForFile } from './support/served-copy';
 
 /**
  * A new version arriving while a case is open: the app waits for the user, and keeps the open work.
  * Runs on its own server (port 4174) over a copy of the build, so rebuilding it disturbs no other test.
  */
-const PORT = 4174;
-let dir = '';
-let server: ChildProcess | null = null;
-
-test.describe.configure({ mode: 'serial' });
-
-test.beforeAll(async () => {
-  dir = mkdtempSync(join(tmpdir(), 'wetmode-update-'));
-  cpSync('dist', dir, { recursive: true });
-  // Node runs Vite directly (not through npx), so killing this process stops the server.
-  server = spawn(process.execPath, ['node_modules/vite/bin/vite.js', 'preview', '--outDir', dir, '--port', String(PORT), '--strictPort'], { stdio: 'ignore' });
-  for (let i = 0; i < 100; i++) {
-    try {
-      if ((await fetch(`http://localhost:${PORT}/`)).ok) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error('preview server for the update test did not start');
-});
-
-/** Publishes a new build over the served one and asks the page's service worker to look for it. */
-async function publishBuild(page: Page, stamp: string): Promise<void> {
-  const built = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', dir, '--emptyOutDir'], {
-    env: { ...process.env, WETMODE_BUILD_STAMP: stamp },
-    encoding: 'utf8',
-  });
-  expect(built.status, built.stderr).toBe(0);
-  await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
-}
-
-test.afterAll(() => {
-  server?.kill();
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
+const served = servedCopyForFile(4174);
+const PORT = served.port;
+const publishBuild = (page: Page, stamp: string) => served.publishBuild(page, stamp);
 
 test('a new version waits for the user, and updating keeps the case being edited', async ({ page }) => {
   test.setTimeout(120_000);

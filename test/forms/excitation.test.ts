@@ -40,10 +40,10 @@ describe('resonance inputs form', () => {
     ]);
   });
 
-  it('a shaft speed typed in rpm reaches the screening in rpm, with blades for blade pass', () => {
+  it('a shaft speed typed in rpm reaches the screening in Hz (rpm / 60), with blades for blade pass', () => {
     const r = readExcitation(KINDS.pile.resonance, { currentSurface: '0', machineSpeed: '1450', bladeCount: '5' }, 'si', pileBuild());
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
-    expect(r.excitation.machinery?.[0].shaftSpeedRpm).toBeCloseTo(1450, 9);
+    expect(r.excitation.machinery?.[0].shaftSpeedHz).toBeCloseTo(1450 / 60, 9);
     expect(r.excitation.machinery?.[0].bladeCount).toBe(5);
   });
 

@@ -50,7 +50,7 @@ describe('case files', () => {
 });
 
 describe('resultsToCsv', () => {
-  it('writes RFC 4180: commas, quotes and line breaks quoted, inner quotes doubled, CRLF line ends', () => {
+  it('writes RFC 4180: every text cell quoted, inner quotes doubled, CRLF line ends', () => {
     // RFC 4180 §2 rules 1, 5, 6, 7.
     const csv = resultsToCsv([
       ['case', 'mode', 'wet frequency (Hz)'],
@@ -58,18 +58,18 @@ describe('resultsToCsv', () => {
       ['say "hi"', 2, 6.5],
       ['two\nlines', 3, null],
     ]);
-    expect(csv).toBe('case,mode,wet frequency (Hz)\r\n"Pile B7, east",1,1.8432\r\n"say ""hi""",2,6.5\r\n"two\nlines",3,\r\n');
+    expect(csv).toBe('"case","mode","wet frequency (Hz)"\r\n"Pile B7, east",1,1.8432\r\n"say ""hi""",2,6.5\r\n"two\nlines",3,\r\n');
   });
 
   it('neutralises text that a spreadsheet would run as a formula, but leaves numbers as numbers', () => {
     // OWASP "CSV Injection": prefix cells starting with = + - @ tab or CR.
     const csv = resultsToCsv([['=HYPERLINK("http://x")', '+1', '-2', '@SUM(A1)', '\tx', '\rx', -2.5, 'ok=1']]);
-    expect(csv).toBe(`"'=HYPERLINK(""http://x"")",'+1,'-2,'@SUM(A1),'\tx,"'\rx",-2.5,ok=1\r\n`);
+    expect(csv).toBe(`"'=HYPERLINK(""http://x"")","'+1","'-2","'@SUM(A1)","'\tx","'\rx",-2.5,"ok=1"\r\n`);
   });
 
   it('writes booleans as words, non-finite numbers and missing values as empty cells, and a BOM when asked', () => {
     expect(resultsToCsv([[true, false, Number.NaN, Number.POSITIVE_INFINITY, undefined]])).toBe('true,false,,,\r\n');
-    expect(resultsToCsv([['m³']], { excelBom: true })).toBe('\uFEFFm³\r\n');
+    expect(resultsToCsv([['m³']], { excelBom: true })).toBe('\uFEFF"m³"\r\n');
     expect(resultsToCsv([])).toBe('');
   });
 

@@ -176,10 +176,34 @@ describe('broken links get a clear message and no case', () => {
     expect(await decodeCasePayload(jsonPayload(wire))).toEqual({ ok: false, message: NEWER_VERSION_MESSAGE });
   });
 
-  it('a compressed link where this browser has no DecompressionStream', async () => {
+  it('a compressed link opens where the platform has no DecompressionStream (our own decoder reads it)', async () => {
     const p = await encodeCasePayload(demoCase());
     vi.stubGlobal('DecompressionStream', undefined);
-    expect(await decodeCasePayload(p)).toEqual({ ok: false, message: LINK_MESSAGES.noDecompression });
+    const r = await decodeCasePayload(p);
+    expect(r.ok && r.value.id).toBe(demoCase().id);
+  });
+
+  it('a link with spaces, %20, line breaks and %0A in it opens (white space is never part of a payload)', async () => {
+    const p = await encodeCasePayload(demoCase());
+    const cut = (s: string, at: number, insert: string) => s.slice(0, at) + insert + s.slice(at);
+    for (const mangled of [
+      cut(p, 10, ' '),
+      cut(cut(p, 40, '%20'), 10, '%20'),
+      cut(cut(p, 30, '\r\n'), 60, '\n  '),
+      cut(p, 25, '%0A'),
+      ` ${cut(p, 50, '%0D%0A%20')} `,
+    ]) {
+      const r = await decodeCasePayload(mangled);
+      expect(r.ok && r.value.id, JSON.stringify(mangled.slice(0, 70))).toBe(demoCase().id);
+      const whole = await decodeCaseLink(`https://wetmode.example/#/open/${mangled}`);
+      expect(whole.ok).toBe(true);
+    }
+  });
+
+  it('a stray or broken percent sign is refused as a character that does not belong', async () => {
+    const p = await encodeCasePayload(demoCase());
+    expect(await decodeCasePayload(p.slice(0, 20) + '%' + p.slice(20))).toEqual({ ok: false, message: LINK_MESSAGES.badChars });
+    expect(await decodeCasePayload(p.slice(0, 20) + '%E2%82' + p.slice(20))).toEqual({ ok: false, message: LINK_MESSAGES.badChars });
   });
 
   it('something that is not a link, or not text', async () => {

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { IDBFactory } from 'fake-indexeddb';
-import { DB_VERSION } from '../../src/store';
+import { DB_VERSION, revisionOf } from '../../src/store';
 import { demoCase, v0Case } from '../case/fixtures';
 import { harness, openRaw, openV1Layout, rawRecords, req, unwrap } from './helpers';
 
@@ -37,8 +37,11 @@ const v1: PastLayout = {
     expect(list.cases.find((c) => c.id === demoCase().id)).toEqual(demoCase());
     expect(list.cases.find((c) => c.id === migratedId)).toMatchObject({ schemaVersion: 2, name: 'Level probe, settling tank', kind: 'stem', unitSystem: 'us' });
     expect(list.unreadable.map((u) => u.key)).toEqual(['junk-7']);
-    const draft = unwrap(await store.loadDraft());
-    expect(draft).toMatchObject({ savedAt: '2025-11-20T08:30:00Z', case: { name: 'Draft probe', kind: 'stem' } });
+    // The one draft of old versions is kept for the tab "earlier" (offered in the Cases screen, not this tab's own).
+    expect(unwrap(await store.loadDraft())).toBeNull();
+    const drafts = unwrap(await store.listDrafts());
+    expect(drafts.drafts).toHaveLength(1);
+    expect(drafts.drafts[0]).toMatchObject({ tab: 'earlier', savedAt: '2025-11-20T08:30:00Z', baseRevision: 0, case: { name: 'Draft probe', kind: 'stem' } });
     // Undo works on the upgraded database (the step added its store).
     const token = unwrap(await store.deleteCase(demoCase().id));
     expect(unwrap(await store.undoDelete(token))?.id).toBe(demoCase().id);
@@ -51,8 +54,50 @@ const v1: PastLayout = {
   },
 };
 
+/** Database version 2: `cases`, `draft` (one `{ savedAt, case }` under "current"), `trash` (keyPath token). */
+function openV2Layout(factory: IDBFactory): Promise<IDBDatabase> {
+  return openRaw(factory, 'wetmode', 2, (d) => {
+    d.createObjectStore('cases', { keyPath: 'id' });
+    d.createObjectStore('draft');
+    d.createObjectStore('trash', { keyPath: 'token' });
+  });
+}
+
+const v2TrashEntry = { token: 'tok-1', deletedAt: '2026-11-30T10:00:00.000Z', record: { ...demoCase(), id: '00000000-0000-4000-8000-0000000000aa', name: 'Deleted pile' } };
+
+const v2: PastLayout = {
+  async build(factory) {
+    const db = await openV2Layout(factory);
+    const tx = db.transaction(['cases', 'draft', 'trash'], 'readwrite');
+    await req(tx.objectStore('cases').put(demoCase()));
+    await req(tx.objectStore('cases').put(junk));
+    await req(tx.objectStore('draft').put({ savedAt: '2026-11-30T09:00:00.000Z', case: { ...demoCase(), name: 'Unsaved rename' } }, 'current'));
+    await req(tx.objectStore('trash').put(v2TrashEntry));
+    db.close();
+  },
+  async check(h) {
+    const store = await h.open();
+    const list = unwrap(await store.listCases());
+    expect(list.cases).toEqual([demoCase()]);
+    // A record written before revisions counts as revision 0; saving it based on 0 is no conflict.
+    expect(revisionOf(list.cases[0])).toBe(0);
+    expect(list.unreadable.map((u) => u.key)).toEqual(['junk-7']);
+    const drafts = unwrap(await store.listDrafts());
+    expect(drafts.drafts.map((d) => [d.tab, d.case.name, d.savedAt, d.baseRevision])).toEqual([['earlier', 'Unsaved rename', '2026-11-30T09:00:00.000Z', 0]]);
+    // The closed tab's draft can be taken over by a tab, and is then its own.
+    const adopted = unwrap(await store.adoptDraft(drafts.drafts[0].key));
+    expect(unwrap(await store.loadDraft())).toEqual(adopted);
+    // Saved from the revision it started at: no conflict.
+    expect(unwrap(await store.saveCase(adopted.case, { baseRevision: adopted.baseRevision })).name).toBe('Unsaved rename');
+    // The trash came through: undo still works.
+    expect(unwrap(await store.undoDelete('tok-1'))?.name).toBe('Deleted pile');
+    store.close();
+    expect((await rawRecords(h.factory, 'cases')).values).toContainEqual(junk);
+  },
+};
+
 /** One entry per past database version: adding a version to the ladder without a fixture here fails the first test. */
-const PAST: Record<number, PastLayout> = { 1: v1 };
+const PAST: Record<number, PastLayout> = { 1: v1, 2: v2 };
 
 describe('database migration ladder', () => {
   it('has a hand-built fixture for every past version', () => {
@@ -63,7 +108,7 @@ describe('database migration ladder', () => {
     const h = harness();
     (await h.open()).close();
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
-    expect([db.version, [...db.objectStoreNames].sort()]).toEqual([DB_VERSION, ['cases', 'draft', 'trash']]);
+    expect([db.version, [...db.objectStoreNames].sort()]).toEqual([DB_VERSION, ['cases', 'drafts', 'trash']]);
     db.close();
   });
 

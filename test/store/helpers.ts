@@ -31,6 +31,8 @@ export function harness(start = '2026-12-01T12:00:00.000Z'): Harness {
     },
     appVersion: '0.2.0',
     storage: null,
+    // No channel to other tabs unless a test asks for one (test/store/revisions-drafts.test.ts).
+    channel: null,
   };
   return {
     factory,

@@ -164,10 +164,11 @@ describe('the draft', () => {
     const store = await h.open();
     expect(unwrap(await store.loadDraft())).toBeNull();
     const draft: Case = { ...demoCase(), name: '', inputs: { outerDiameter: '61' } };
-    expect(unwrap(await store.saveDraft(draft))).toEqual({ case: draft, savedAt: NOW });
+    const kept = { key: `tab\n${draft.id}`, tab: 'tab', case: draft, savedAt: NOW, baseRevision: null };
+    expect(unwrap(await store.saveDraft(draft))).toEqual(kept);
     store.close();
     const again = await h.open();
-    expect(unwrap(await again.loadDraft())).toEqual({ case: draft, savedAt: NOW });
+    expect(unwrap(await again.loadDraft())).toEqual(kept);
     unwrap(await again.clearDraft());
     expect(unwrap(await again.loadDraft())).toBeNull();
   });
@@ -192,9 +193,9 @@ describe('records that cannot be read are reported, never dropped', () => {
     unwrap(await store.saveCase(demoCase()));
     store.close();
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
-    const tx = db.transaction(['cases', 'draft'], 'readwrite');
+    const tx = db.transaction(['cases', 'drafts'], 'readwrite');
     await req(tx.objectStore('cases').put({ id: 'junk-1', name: 42 }));
-    await req(tx.objectStore('draft').put({ savedAt: NOW, case: { format: 'wetmode-case', schemaVersion: 2 } }, 'current'));
+    await req(tx.objectStore('drafts').put({ key: 'tab\njunk', tab: 'tab', caseId: 'junk', savedAt: NOW, baseRevision: null, case: { format: 'wetmode-case', schemaVersion: 2 } }));
     db.close();
     return { h, store: await h.open() };
   }
@@ -221,13 +222,15 @@ describe('records that cannot be read are reported, never dropped', () => {
     expect(raw.values).toContainEqual({ id: 'junk-1', name: 42 });
   });
 
-  it('an unreadable draft is reported with its reason', async () => {
+  it('an unreadable draft is set aside: never loaded as the tab draft, listed with its reason, and can be discarded', async () => {
     const { store } = await withJunk();
-    expect(await store.loadDraft()).toEqual({
-      ok: false,
-      kind: 'unreadable',
-      message: 'Could not load the draft: the kept draft cannot be read (id must be a UUID such as "3f6c2a9e-8b41-4d7a-9c15-2e0b7d4f6a81", got nothing).',
+    expect(unwrap(await store.loadDraft())).toBeNull();
+    expect(unwrap(await store.listDrafts())).toEqual({
+      drafts: [],
+      unreadable: [{ key: 'tab\njunk', tab: 'tab', message: 'this kept draft cannot be read (id must be a UUID such as "3f6c2a9e-8b41-4d7a-9c15-2e0b7d4f6a81", got nothing)' }],
     });
+    unwrap(await store.discardDraft('tab\njunk'));
+    expect(unwrap(await store.listDrafts()).unreadable).toEqual([]);
   });
 
   it('every case the list returns passes parseCase', async () => {

@@ -1,9 +1,11 @@
 /**
- * Renders public/icons/wetmode.svg to the PNG icons the manifest lists, in Debian's Chromium.
+ * Renders public/icons/wetmode.svg to the PNG icons the manifest lists, in the Chromium the browser tests use
+ * (test/tools/chromium.ts).
  * Run after changing the SVG: `npm run icons`.
  */
 import { chromium } from '@playwright/test';
 import { readFileSync, writeFileSync } from 'node:fs';
+import { CHROMIUM_ARGS, chooseChromium } from './chromium';
 
 const svg = readFileSync('public/icons/wetmode.svg', 'utf8');
 // Maskable: full-bleed background and the drawing inside the central 80 % safe zone.
@@ -11,7 +13,9 @@ const maskable = svg
   .replace(/<svg([^>]*)>/, '<svg$1><rect width="512" height="512" fill="#0b3d5c"/><g transform="translate(64 64) scale(0.75)">')
   .replace('</svg>', '</g></svg>');
 
-const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: ['--no-sandbox'] });
+const chosen = chooseChromium();
+console.log(`rendering in ${chosen.label}`);
+const browser = await chromium.launch({ executablePath: chosen.executablePath, args: CHROMIUM_ARGS, env: chosen.env ? { ...process.env, ...chosen.env } : undefined });
 const page = await browser.newPage();
 async function render(source: string, size: number, out: string): Promise<void> {
   await page.setViewportSize({ width: size, height: size });

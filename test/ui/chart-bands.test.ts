@@ -9,7 +9,7 @@ describe('excitation bands for the frequency chart', () => {
     const result = screenResonance(
       pileCase(0.8, 1.0, {
         waves: { periodMinS: 4, periodMaxS: 12 },
-        machinery: [{ label: 'pump', shaftSpeedRpm: 1200, shaftOrders: [1] }],
+        machinery: [{ label: 'pump', shaftSpeedHz: 20, shaftOrders: [1] }],
       }),
     );
     const bands = chartBands(result);
@@ -32,7 +32,7 @@ describe('excitation bands for the frequency chart', () => {
   });
 
   it('merges one excitation over several modes into one band, sorted by frequency', () => {
-    const input = pileCase(0.5, 1.5, { machinery: [{ label: 'fan', shaftSpeedRpm: 600, shaftOrders: [1] }] });
+    const input = pileCase(0.5, 1.5, { machinery: [{ label: 'fan', shaftSpeedHz: 10, shaftOrders: [1] }] });
     input.modes = [linearMode(0.5), linearMode(3.2)];
     const bands = chartBands(screenResonance(input));
     const labels = bands.map((b) => b.label);

@@ -1,6 +1,6 @@
 /** The tank baffle form: fields, cross-field checks and the mapping to BaffleInput. */
 import { type BaffleInput, buildBaffleModel, MAX_PERFORATION_RATIO, type PlateEnd, validateBaffleInput } from './build';
-import { commonInput } from '../../forms/common-input';
+import { COMMON_CORE_FIELDS, commonInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
 import type { Choice, FieldDef } from '../../forms/types';
@@ -77,5 +77,6 @@ export const BAFFLE_FORM = defineForm({
     return input;
   },
   validate: validateBaffleInput,
+  coreFields: { ...COMMON_CORE_FIELDS, spanM: 'span', widthM: 'width', thicknessM: 'thickness' },
   buildModel: buildBaffleModel,
 });

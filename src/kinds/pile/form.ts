@@ -1,6 +1,6 @@
 /** The pile form: fields, defaults with their sources, cross-field checks and the mapping to PileInput. */
 import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type PileInput, validatePileInput } from './build';
-import { commonInput, tubeInput } from '../../forms/common-input';
+import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
 import type { Reader } from '../../forms/read';
@@ -141,5 +141,6 @@ export const PILE_FORM = defineForm({
     return input;
   },
   validate: validatePileInput,
+  coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS, waterDepthM: 'waterDepth', topAboveStillWaterM: 'topAboveWater', waterLevelOffsetM: 'waterLevelOffset', topMassKg: 'topMass', topRotaryInertiaKgM2: 'topRotaryInertia' },
   buildModel: buildPileModel,
 });

@@ -1,7 +1,7 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
 import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
-import { commonInput, tubeInput } from '../../forms/common-input';
+import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import {
   BEAM_THEORY_FIELD,
@@ -138,5 +138,6 @@ export const RISER_FORM = defineForm({
     return input;
   },
   validate: validateRiserInput,
+  coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS },
   buildModel: buildRiserModel,
 });

@@ -1,6 +1,6 @@
 /** The sensor stem form: fields, cross-field checks and the mapping to StemInput. */
 import { buildStemModel, type StemInput, validateStemInput } from './build';
-import { commonInput } from '../../forms/common-input';
+import { COMMON_CORE_FIELDS, commonInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
 import type { FieldDef } from '../../forms/types';
@@ -80,5 +80,6 @@ export const STEM_FORM = defineForm({
     return input;
   },
   validate: validateStemInput,
+  coreFields: { ...COMMON_CORE_FIELDS },
   buildModel: buildStemModel,
 });

@@ -50,12 +50,13 @@ export type AddedMassPlanOutcome = { ok: true; plan: AddedMassPlan } | { ok: fal
 /** Cache of section-solver coefficients (and their error estimates) by input, shared across the mesh levels of one solve. */
 export type SectionCache = Map<string, { ca: number; relativeError: number | null }>;
 
-export function addedMassPerM(plan: AddedMassPlan, seg: MemberSegment, segIndex: number, t: number): number {
+/** `referenceAreaM2`: the section's reference area at t when the caller has it (saves recomputing the section). */
+export function addedMassPerM(plan: AddedMassPlan, seg: MemberSegment, segIndex: number, t: number, referenceAreaM2?: number): number {
   const s = plan.segments[segIndex];
   if (!s) return 0;
   const ca = s.caStart + (s.caEnd - s.caStart) * t;
   const factor = plan.endEffect ? plan.endEffect.factor : 1;
-  return ca * plan.densityKgPerM3 * sectionAt(seg, t).referenceAreaM2 * factor;
+  return ca * plan.densityKgPerM3 * (referenceAreaM2 ?? sectionAt(seg, t).referenceAreaM2) * factor;
 }
 
 export function planAddedMass(model: MemberModel, solver: SectionSolver | undefined, cache: SectionCache): AddedMassPlanOutcome {

@@ -5,12 +5,12 @@
  * the diagonal.
  */
 import { createSymBanded, type SymBanded, symBandedAdd } from '../linalg/banded';
-import { type AddedMassPlan, addedMassPerM } from './added-mass';
-import { addElementIntegral, CURVATURE, GAUSS_N, GAUSS_XI, SLOPE, VALUE } from './element';
+import type { AddedMassPlan } from './added-mass';
+import { addElementIntegral, CURVATURE, GAUSS_N, SLOPE, VALUE } from './element';
 import { addTimoshenkoElement, type TimoshenkoSamples } from './element-timoshenko';
 import { type Mesh, nodeAt } from './mesh';
 import type { MemberModel } from './model';
-import { dryMassPerM, sectionAt } from './section-props';
+import { gaussProps, prismaticCache } from './gauss-props';
 import { type TensionField, tensionField } from './tension';
 
 export const HALF_BANDWIDTH = 3;
@@ -60,7 +60,9 @@ export function assembleMember(model: MemberModel, mesh: Mesh, plan: AddedMassPl
   const kG = createSymBanded(n, HALF_BANDWIDTH);
   const mD = createSymBanded(n, HALF_BANDWIDTH);
   const mA = plan ? createSymBanded(n, HALF_BANDWIDTH) : null;
-  const tension = tensionField(model, mesh);
+  const cache = prismaticCache(model);
+  const tension = tensionField(model, mesh, cache);
+  const props = gaussProps(model, mesh, plan, cache);
 
   const ei = new Float64Array(GAUSS_N);
   const mass = new Float64Array(GAUSS_N);
@@ -76,22 +78,15 @@ export function assembleMember(model: MemberModel, mesh: Mesh, plan: AddedMassPl
   const ma = new Float64Array(16);
   const dofs = new Int32Array(4);
   for (let e = 0; e < ne; e++) {
-    const za = mesh.z[e];
-    const h = mesh.z[e + 1] - za;
-    const si = mesh.segmentOf[e];
-    const seg = model.segments[si];
-    const segLen = seg.toM - seg.fromM;
+    const h = mesh.z[e + 1] - mesh.z[e];
     const wet = plan !== null && mesh.submerged[e] === 1;
-    for (let g = 0; g < GAUSS_N; g++) {
-      const t = (za + GAUSS_XI[g] * h - seg.fromM) / segLen;
-      const p = sectionAt(seg, t);
-      ei[g] = p.eiNm2;
-      mass[g] = dryMassPerM(p);
-      added[g] = wet ? addedMassPerM(plan, seg, si, t) : 0;
-      soil[g] = mesh.soilModulus[e];
-      kga[g] = p.shearStiffnessN;
-      rotary[g] = p.rotaryInertiaKgM;
-    }
+    const o = e * GAUSS_N;
+    ei.set(props.ei.subarray(o, o + GAUSS_N));
+    mass.set(props.mass.subarray(o, o + GAUSS_N));
+    added.set(props.added.subarray(o, o + GAUSS_N));
+    kga.set(props.kga.subarray(o, o + GAUSS_N));
+    rotary.set(props.rotary.subarray(o, o + GAUSS_N));
+    soil.fill(mesh.soilModulus[e]);
     ke.fill(0);
     kg.fill(0);
     me.fill(0);

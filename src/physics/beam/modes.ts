@@ -8,7 +8,7 @@ import { lowestModesBanded } from '../linalg/eigen-lanczos';
 import type { MemberSystem } from './assemble';
 import type { ModeResult } from './result';
 
-export type StiffnessCheck = { ok: true } | { ok: false; reason: 'buckles'; message: string };
+export type StiffnessCheck = { ok: true } | { ok: false; reason: 'buckles' | 'not-converged'; message: string };
 
 /**
  * K + K_G must be positive definite once the member is restrained (checked before): a negative pivot
@@ -19,6 +19,10 @@ export function checkStiffness(system: MemberSystem): StiffnessCheck {
   const f = factorLdlt(system.kTotal);
   if (f.negativePivots === 0) return { ok: true };
   const t = system.tension;
+  if (t.minN >= 0) {
+    // Without compression K + K_G is positive definite for a restrained member: a negative pivot is rounding.
+    return { ok: false, reason: 'not-converged', message: 'the stiffness matrix lost precision (no compression, yet a negative pivot): check the inputs for extreme values' };
+  }
   return {
     ok: false,
     reason: 'buckles',

@@ -28,7 +28,12 @@ export function isMechanism(model: MemberModel, tensionIntegralNm: number): bool
   }
   if (points.length === 0) return true;
   if (rotation) return false;
-  const lo = Math.min(...points);
-  const hi = Math.max(...points);
+  // A loop, not Math.min(...points): spreading a long array overflows the call stack.
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const p of points) {
+    lo = Math.min(lo, p);
+    hi = Math.max(hi, p);
+  }
   return !(hi - lo > 1e-9 * model.lengthM);
 }

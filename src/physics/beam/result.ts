@@ -75,6 +75,11 @@ export interface MemberResult {
     sectionSolves: number;
     /** Largest estimated relative discretisation error of the section-solver added masses (null when none used). */
     sectionRelativeError: number | null;
+    /**
+     * Wet frequencies with that error carried through, per mode (present when a section solve gave an
+     * estimate): the added mass of the solved sections raised / lowered by the relative error.
+     */
+    wetFrequencyBand?: { lowHz: number[]; highHz: number[]; largestRelativeHalfWidth: number };
   } | null;
   mesh: MeshReport;
   warnings: string[];

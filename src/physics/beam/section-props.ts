@@ -5,7 +5,7 @@
  */
 import type { MemberSection, MemberSegment } from './model';
 import { shapeOf } from '../shapes/registry';
-import type { SectionAt } from '../shapes/types';
+import type { SectionAt, SectionMaterial } from '../shapes/types';
 
 export type { SectionAt } from '../shapes/types';
 export { cowperCircle, cowperRectangle } from '../shapes/shear';
@@ -21,20 +21,32 @@ export function interpolateSection(seg: MemberSegment, t: number): MemberSection
   return shapeOf(s).lerp(s, e, t);
 }
 
+// One material record reused for every station (sectionAt runs per Gauss point in the hot loops, and the shape's
+// `props` reads it synchronously without keeping it), so a station allocates only its result.
+const MATERIAL: SectionMaterial = {
+  youngsModulusPa: 0,
+  densityKgPerM3: 0,
+  poissonRatio: 0,
+  shearModulusPa: 0,
+  coatingM: 0,
+  coatingDensityKgPerM3: 0,
+  contentsDensityKgPerM3: 0,
+};
+
 /** Properties of a segment at fraction t ∈ [0, 1] of its length. */
 export function sectionAt(seg: MemberSegment, t: number): SectionAt {
   const sec = interpolateSection(seg, t);
   const e = seg.youngsModulusPa;
   const nu = seg.poissonRatio ?? DEFAULT_POISSON_RATIO;
-  return shapeOf(sec).props(sec, {
-    youngsModulusPa: e,
-    densityKgPerM3: seg.densityKgPerM3,
-    poissonRatio: nu,
-    shearModulusPa: e / (2 * (1 + nu)),
-    coatingM: seg.coating?.thicknessM ?? 0,
-    coatingDensityKgPerM3: seg.coating?.densityKgPerM3 ?? 0,
-    contentsDensityKgPerM3: seg.contentsDensityKgPerM3 ?? 0,
-  });
+  const m = MATERIAL;
+  m.youngsModulusPa = e;
+  m.densityKgPerM3 = seg.densityKgPerM3;
+  m.poissonRatio = nu;
+  m.shearModulusPa = e / (2 * (1 + nu));
+  m.coatingM = seg.coating?.thicknessM ?? 0;
+  m.coatingDensityKgPerM3 = seg.coating?.densityKgPerM3 ?? 0;
+  m.contentsDensityKgPerM3 = seg.contentsDensityKgPerM3 ?? 0;
+  return shapeOf(sec).props(sec, m);
 }
 
 /** Total dry mass per metre (structure + contents + coating), kg/m. */

@@ -5,12 +5,14 @@
  */
 import { type AddedMassPlan, planAddedMass, type SectionCache } from './added-mass';
 import { assembleMember, type MemberSystem } from './assemble';
-import { buildMesh, initialCounts, meshBreakpoints } from './mesh';
+import { breakpointsWithMerges, buildMesh, initialCounts, MIN_INTERVAL_FRACTION, refineCounts, roundingErrorEstimate } from './mesh';
+import { mergeEqualSegments } from './merge-segments';
+import { resultSanity } from './sanity';
 import type { MemberModel } from './model';
 import { checkStiffness, meshModes, modeResult, wetMass } from './modes';
 import { isMechanism, MECHANISM_MESSAGE } from './restraint';
 import type { MemberOutcome, MemberResult, ModeSetResult } from './result';
-import { defaultSectionSolver, type SectionSolver } from './section-bridge';
+import { defaultSectionSolver, SECTION_PANELS_MAX, type SectionSolver } from './section-bridge';
 import { parseMemberModel } from './validate';
 import { memberWarnings } from './warnings';
 import { massZones } from './zones';
@@ -23,6 +25,52 @@ export interface SolveMemberOptions {
 export const DEFAULT_MODES = 5;
 export const DEFAULT_RELATIVE_TOLERANCE = 5e-4;
 export const DEFAULT_MAX_ELEMENTS = 3200;
+/**
+ * Largest estimated relative rounding error of the frequencies a mesh may carry (0.01 %, a fifth of the
+ * default convergence tolerance): finer meshes are refused, and refinement stops before reaching them.
+ */
+export const PRECISION_LIMIT = 1e-4;
+
+/** Frequency error from the added mass above which the result warns (1 %). */
+const BAND_WARNING = 0.01;
+
+/**
+ * Wet frequencies with the added mass raised and lowered by its relative error δ. By the Rayleigh quotient
+ * (classical) ω² = K/(M_s + M_a) over the mode, so with the liquid's share s of the kinetic energy,
+ * ω scales by 1/√(1 ± s δ); s is taken over all added mass, which over-states the band when only part
+ * of it came from the section solver.
+ */
+function frequencyBand(wet: ModeSetResult, delta: number | null): { lowHz: number[]; highHz: number[]; largestRelativeHalfWidth: number } | null {
+  if (delta === null || !(delta > 0)) return null;
+  const lowHz: number[] = [];
+  const highHz: number[] = [];
+  let worst = 0;
+  wet.modes.forEach((m) => {
+    const s = m.liquidKineticEnergyShare ?? 0;
+    const lo = m.frequencyHz / Math.sqrt(1 + s * delta);
+    const hi = m.frequencyHz / Math.sqrt(Math.max(1 - s * delta, 1e-6));
+    lowHz.push(lo);
+    highHz.push(hi);
+    if (m.frequencyHz > 0) worst = Math.max(worst, (hi - lo) / (2 * m.frequencyHz));
+  });
+  return { lowHz, highHz, largestRelativeHalfWidth: worst };
+}
+
+function sum(counts: Int32Array): number {
+  let t = 0;
+  for (const c of counts) t += c;
+  return t;
+}
+
+function tooFine(what: string, estimate: number): MemberOutcome {
+  return {
+    ok: false,
+    reason: 'not-converged',
+    message:
+      `${what}: elements that short lose about ${(100 * estimate).toPrecision(2)} % of the frequencies to rounding in double precision ` +
+      `(limit ${100 * PRECISION_LIMIT} %); use fewer elements, or fewer mesh points close together`,
+  };
+}
 
 interface Level {
   system: MemberSystem;
@@ -45,14 +93,33 @@ function maxRelativeChange(a: Float64Array, b: Float64Array): number {
 }
 
 export function solveMember(input: MemberModel, options: SolveMemberOptions = {}): MemberOutcome {
-  const model = parseMemberModel(input);
+  const parsed = parseMemberModel(input);
+  const model = { ...parsed, segments: mergeEqualSegments(parsed.segments) };
   const count = model.modes ?? DEFAULT_MODES;
   const meshOpt = model.mesh ?? {};
   const tol = meshOpt.relativeTolerance ?? DEFAULT_RELATIVE_TOLERANCE;
   const maxElements = meshOpt.maxElements ?? DEFAULT_MAX_ELEMENTS;
   const refine = meshOpt.refine ?? true;
-  const breaks = meshBreakpoints(model);
+  const { breaks, merged, largestMoveM } = breakpointsWithMerges(model);
+  const intervals = breaks.length - 1;
+  if (intervals > maxElements) {
+    return {
+      ok: false,
+      reason: 'not-converged',
+      message:
+        `the member needs at least ${intervals} elements (one between each pair of neighbouring mesh points: segment ends, supports, ` +
+        `masses, soil and liquid range ends), more than mesh.maxElements = ${maxElements}; describe it with fewer segments or points`,
+    };
+  }
   let counts = initialCounts(breaks, meshOpt.initialElements ?? Math.max(12, 3 * count));
+  if (sum(counts) > maxElements) {
+    return { ok: false, reason: 'not-converged', message: `the first mesh has ${sum(counts)} elements, more than mesh.maxElements = ${maxElements}; lower mesh.initialElements` };
+  }
+  const firstError = roundingErrorEstimate(breaks, counts);
+  if (firstError > PRECISION_LIMIT) {
+    const what = meshOpt.initialElements !== undefined ? `mesh.initialElements = ${meshOpt.initialElements} is too fine for this member` : `the member's ${intervals} mesh intervals make too fine a mesh`;
+    return tooFine(what, firstError);
+  }
 
   let plan: AddedMassPlan | null = null;
   if (model.liquid) {
@@ -66,6 +133,7 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
   let prev: Level | null = null;
   let lastChange: number | null = null;
   let converged = !refine;
+  let precisionStop = false;
   for (;;) {
     const mesh = buildMesh(model, breaks, counts);
     const system = assembleMember(model, mesh, plan);
@@ -89,9 +157,13 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
     }
     prev = level;
     if (!refine || converged) break;
-    const total = history[history.length - 1];
-    if (2 * total > maxElements) break;
-    counts = counts.map((c) => 2 * c);
+    const next = refineCounts(breaks, counts);
+    if (sum(next) > maxElements) break;
+    if (roundingErrorEstimate(breaks, next) > PRECISION_LIMIT) {
+      precisionStop = true;
+      break;
+    }
+    counts = next;
   }
 
   const final = prev!;
@@ -130,5 +202,24 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
     },
     warnings: memberWarnings(model, plan, converged, history[history.length - 1], tol),
   };
+  if (precisionStop && !converged) {
+    result.warnings.push(`Finer meshes than ${history[history.length - 1]} elements would lose more than ${100 * PRECISION_LIMIT} % of the frequencies to rounding in double precision, so refinement stopped there.`);
+  }
+  if (merged > 0) {
+    result.warnings.push(`${merged} mesh point(s) closer than ${(MIN_INTERVAL_FRACTION * model.lengthM).toPrecision(2)} m (length / 5000) to another were merged into it (moved by up to ${largestMoveM.toPrecision(2)} m).`);
+  }
+  const band = plan && wet ? frequencyBand(wet, plan.sectionRelativeError) : null;
+  if (band && result.addedMass) {
+    result.addedMass.wetFrequencyBand = band;
+    if (band.largestRelativeHalfWidth > BAND_WARNING) {
+      result.warnings.push(
+        `The section solver's added mass carries an estimated error of ${(100 * plan!.sectionRelativeError!).toPrecision(2)} % ` +
+          `(panels capped at ${SECTION_PANELS_MAX} per body), so the wet frequencies may be off by up to ${(100 * band.largestRelativeHalfWidth).toPrecision(2)} %; ` +
+          'the band is in the results. A gap much narrower than the section is the usual cause.',
+      );
+    }
+  }
+  const bad = resultSanity(result);
+  if (bad) return { ok: false, reason: 'not-converged', message: bad };
   return { ok: true, result };
 }

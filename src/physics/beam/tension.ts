@@ -8,7 +8,8 @@
 import { GAUSS_N, GAUSS_W, GAUSS_XI } from './element';
 import type { Mesh } from './mesh';
 import type { MemberModel } from './model';
-import { dryMassPerM, sectionAt } from './section-props';
+import { type PrismaticCache, prismaticCache, sectionAtCached } from './gauss-props';
+import { dryMassPerM } from './section-props';
 
 /** Standard gravity, m/s². */
 export const GRAVITY = 9.80665;
@@ -28,9 +29,10 @@ export interface TensionField {
 }
 
 /** Effective weight per metre at fraction t of element e's segment, N/m. */
-function weightPerM(model: MemberModel, mesh: Mesh, e: number, z: number): number {
-  const seg = model.segments[mesh.segmentOf[e]];
-  const p = sectionAt(seg, (z - seg.fromM) / (seg.toM - seg.fromM));
+function weightPerM(model: MemberModel, mesh: Mesh, cache: PrismaticCache, e: number, z: number): number {
+  const si = mesh.segmentOf[e];
+  const seg = model.segments[si];
+  const p = sectionAtCached(cache, seg, si, (z - seg.fromM) / (seg.toM - seg.fromM));
   const buoyancy = mesh.submerged[e] ? model.liquid!.densityKgPerM3 * p.displacedAreaM2 : 0;
   return GRAVITY * (dryMassPerM(p) - buoyancy);
 }
@@ -39,13 +41,13 @@ function weightPerM(model: MemberModel, mesh: Mesh, e: number, z: number): numbe
 const G3X = [0.5 - 0.5 * Math.sqrt(0.6), 0.5, 0.5 + 0.5 * Math.sqrt(0.6)];
 const G3W = [5 / 18, 8 / 18, 5 / 18];
 
-function weightBetween(model: MemberModel, mesh: Mesh, e: number, a: number, b: number): number {
+function weightBetween(model: MemberModel, mesh: Mesh, cache: PrismaticCache, e: number, a: number, b: number): number {
   let s = 0;
-  for (let i = 0; i < 3; i++) s += G3W[i] * weightPerM(model, mesh, e, a + (b - a) * G3X[i]);
+  for (let i = 0; i < 3; i++) s += G3W[i] * weightPerM(model, mesh, cache, e, a + (b - a) * G3X[i]);
   return s * (b - a);
 }
 
-export function tensionField(model: MemberModel, mesh: Mesh): TensionField {
+export function tensionField(model: MemberModel, mesh: Mesh, cache: PrismaticCache = prismaticCache(model)): TensionField {
   const ne = mesh.z.length - 1;
   const at = new Float64Array(ne * GAUSS_N);
   const top = model.tensionN ?? 0;
@@ -57,24 +59,25 @@ export function tensionField(model: MemberModel, mesh: Mesh): TensionField {
   const masses = model.masses ?? [];
   // Walk down from the top, accumulating the weight above each element's upper node.
   let above = 0;
-  let massIdx = masses.map((_, i) => i).sort((i, j) => masses[j].atM - masses[i].atM);
+  const massIdx = masses.map((_, i) => i).sort((i, j) => masses[j].atM - masses[i].atM);
+  let next = 0;
   let min = top;
   let max = top;
   let integral = 0;
   const tol = 1e-9 * model.lengthM;
   for (let e = ne - 1; e >= 0; e--) {
     const zTop = z[e + 1];
-    while (massIdx.length > 0 && masses[massIdx[0]].atM >= zTop - tol) {
-      above += GRAVITY * masses[massIdx[0]].massKg;
-      massIdx = massIdx.slice(1);
+    while (next < massIdx.length && masses[massIdx[next]].atM >= zTop - tol) {
+      above += GRAVITY * masses[massIdx[next]].massKg;
+      next++;
     }
     const h = zTop - z[e];
     for (let g = 0; g < GAUSS_N; g++) {
       const zg = z[e] + GAUSS_XI[g] * h;
-      const t = top - above - weightBetween(model, mesh, e, zg, zTop);
+      const t = top - above - weightBetween(model, mesh, cache, e, zg, zTop);
       at[e * GAUSS_N + g] = t;
     }
-    const wElem = weightBetween(model, mesh, e, z[e], zTop);
+    const wElem = weightBetween(model, mesh, cache, e, z[e], zTop);
     // Tension at both ends of the element, for the extremes.
     const tTop = top - above;
     const tBottom = tTop - wElem;

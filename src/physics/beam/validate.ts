@@ -16,9 +16,19 @@ import type {
 } from './model';
 import type { BoundarySpec } from '../section/types';
 import { findShape, SHAPE_IDS, shapeOf } from '../shapes/registry';
+import { checkingKit } from '../check/kit';
+import { MAX_BOUNDARIES } from '../section/validate';
 
 const SUPPORT_KINDS: readonly SupportKind[] = ['clamped', 'pinned', 'guided', 'free', 'spring'];
 export const MAX_MODES = 50;
+/**
+ * Most entries of each list, so every input bounds its work before any is done (equal neighbouring
+ * segments are merged by the solver, so a member cut into many equal pieces still solves quickly).
+ */
+export const MAX_SEGMENTS = 10000;
+export const MAX_SUPPORTS = 100;
+export const MAX_SOIL_RANGES = 1000;
+export const MAX_MASSES = 1000;
 
 /** How a received value is shown in a message. */
 function show(v: unknown): string {
@@ -30,13 +40,16 @@ function show(v: unknown): string {
   return typeof v === 'object' ? 'an object' : String(v);
 }
 
+// The core's checking kit; a failed check is a RangeError carrying the field path.
+const KIT = checkingKit(show);
+
 function fail(path: string, expected: string, got: unknown): never {
-  throw new RangeError(`${path} must be ${expected}, got ${show(got)}`);
+  return KIT.fail(path, expected, got);
 }
 
 /** Same, with the received value already described in words. */
 function failDescribed(path: string, expected: string, gotText: string): never {
-  throw new RangeError(`${path} must be ${expected}, got ${gotText}`);
+  return KIT.failText(path, expected, gotText);
 }
 
 type Obj = Record<string, unknown>;
@@ -71,9 +84,10 @@ function optBool(o: Obj, key: string, path: string): boolean | undefined {
   return v;
 }
 
-function array(v: unknown, path: string, nonEmpty: boolean): unknown[] {
+function array(v: unknown, path: string, nonEmpty: boolean, max: number): unknown[] {
   if (!Array.isArray(v)) fail(path, nonEmpty ? 'a non-empty array' : 'an array', v);
   if (nonEmpty && v.length === 0) failDescribed(path, 'a non-empty array', 'an empty array');
+  if (v.length > max) failDescribed(path, `an array of at most ${max} entries`, `${v.length} entries`);
   return v;
 }
 
@@ -202,7 +216,7 @@ function liquid(v: unknown, lengthM: number): MemberLiquid {
   if (!(toM > 0 && fromM < lengthM)) failDescribed(path, `a range overlapping the member [0, ${lengthM}] m`, `[${fromM}, ${toM}]`);
   const liq: MemberLiquid = { densityKgPerM3: num(o, 'densityKgPerM3', path, 'a finite number > 0', positive), fromM, toM };
   if (o.boundaries !== undefined) {
-    const b = array(o.boundaries, at(path, 'boundaries'), false);
+    const b = array(o.boundaries, at(path, 'boundaries'), false, MAX_BOUNDARIES);
     b.forEach((x, i) => {
       if (typeof x !== 'object' || x === null || Array.isArray(x)) fail(`liquid.boundaries[${i}]`, 'an object', x);
     });
@@ -238,15 +252,15 @@ export function parseMemberModel(raw: unknown): MemberModel {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) fail('the member input', 'a JSON object', raw);
   const o = object(raw, '', TOP_FIELDS);
   const lengthM = num(o, 'lengthM', '', 'a finite number > 0', positive);
-  const segments = array(o.segments, 'segments', true).map((s, i) => segment(s, i, lengthM));
+  const segments = array(o.segments, 'segments', true, MAX_SEGMENTS).map((s, i) => segment(s, i, lengthM));
   checkLayout(segments, lengthM);
   const model: MemberModel = {
     lengthM,
     segments,
-    supports: array(o.supports, 'supports', false).map((s, i) => support(s, i, lengthM)),
+    supports: array(o.supports, 'supports', false, MAX_SUPPORTS).map((s, i) => support(s, i, lengthM)),
   };
-  if (o.soilSprings !== undefined) model.soilSprings = array(o.soilSprings, 'soilSprings', false).map((s, i) => soilRange(s, i, lengthM));
-  if (o.masses !== undefined) model.masses = array(o.masses, 'masses', false).map((m, i) => lumpedMass(m, i, lengthM));
+  if (o.soilSprings !== undefined) model.soilSprings = array(o.soilSprings, 'soilSprings', false, MAX_SOIL_RANGES).map((s, i) => soilRange(s, i, lengthM));
+  if (o.masses !== undefined) model.masses = array(o.masses, 'masses', false, MAX_MASSES).map((m, i) => lumpedMass(m, i, lengthM));
   if (o.liquid !== undefined && o.liquid !== null) model.liquid = liquid(o.liquid, lengthM);
   const t = optNum(o, 'tensionN', '', 'a finite number (negative = compression)', () => true);
   if (t !== undefined) model.tensionN = t;

@@ -1,7 +1,7 @@
 /**
- * Machinery orders: shaft orders f = k · rpm / 60 and blade-pass orders f = j · blades · rpm / 60 (classical),
+ * Machinery orders: shaft orders f = k · n and blade-pass orders f = j · blades · n, n the shaft speed in Hz (classical),
  * each screened with the frequency separation margin (±20 % by default, common practice).
- * A variable-speed machine (shaftSpeedMaxRpm given) drives a band per order instead of a line.
+ * A variable-speed machine (shaftSpeedMaxHz given) drives a band per order instead of a line.
  */
 import { sig } from './format';
 import type { CheckResult } from './results';
@@ -23,11 +23,11 @@ export interface MachineryLine {
 /** The forcing lines of a machine, shaft orders first, then blade-pass orders. */
 export function machineryLines(machine: Machine, index: number): MachineryLine[] {
   const name = machine.label ?? `machine ${index + 1}`;
-  const rpmLow = machine.shaftSpeedRpm;
-  const rpmHigh = machine.shaftSpeedMaxRpm ?? machine.shaftSpeedRpm;
+  const hzLow = machine.shaftSpeedHz;
+  const hzHigh = machine.shaftSpeedMaxHz ?? machine.shaftSpeedHz;
   const lines: MachineryLine[] = [];
   const add = (label: string, multiple: number): void => {
-    lines.push({ label, multipleOfShaft: multiple, lowHz: (multiple * rpmLow) / 60, highHz: (multiple * rpmHigh) / 60 });
+    lines.push({ label, multipleOfShaft: multiple, lowHz: multiple * hzLow, highHz: multiple * hzHigh });
   };
   for (const k of machine.shaftOrders ?? DEFAULT_SHAFT_ORDERS) add(`${name} ${sig(k)}× shaft`, k);
   if (machine.bladeCount !== undefined) {
@@ -57,7 +57,7 @@ export function machineryCheck(
     marginPercent,
     bandHz: { lowHz: line.lowHz, highHz: line.highHz },
     criticalSpeedMPerS: null,
-    resonantShaftRpm: (60 * frequencyHz) / line.multipleOfShaft,
+    resonantShaftHz: frequencyHz / line.multipleOfShaft,
     reason: `${frequencyBasis} f_n = ${sig(frequencyHz)} Hz ${side} forcing ${forcing}${pct}; ±${sig(100 * margin.value)} % required`,
     source: margin.source,
   };

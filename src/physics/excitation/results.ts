@@ -31,8 +31,8 @@ export interface CheckResult {
    * null for machinery and waves, and when no flow speed can start it.
    */
   criticalSpeedMPerS: number | null;
-  /** Machinery only: shaft speed at which this order hits the mode frequency exactly, rpm. */
-  resonantShaftRpm?: number;
+  /** Machinery only: shaft speed at which this order hits the mode frequency exactly, Hz (revolutions per second). */
+  resonantShaftHz?: number;
   /** Why the verdict is what it is, in words a surveyor can read. */
   reason: string;
   /** Source of the limit or range used. */

@@ -64,10 +64,10 @@ export interface WaveBand {
 /** A rotating machine near the member (pump, fan, agitator, propeller). */
 export interface Machine {
   label?: string;
-  /** Shaft speed, rpm; for a variable-speed drive, the lowest running speed. */
-  shaftSpeedRpm: number;
-  /** Variable-speed drive: highest running speed, rpm (each order then forces a band, not a line). */
-  shaftSpeedMaxRpm?: number;
+  /** Shaft speed, Hz (revolutions per second; rpm / 60); for a variable-speed drive, the lowest running speed. */
+  shaftSpeedHz: number;
+  /** Variable-speed drive: highest running speed, Hz (each order then forces a band, not a line). */
+  shaftSpeedMaxHz?: number;
   /** Blades or vanes; needed for blade-pass orders. */
   bladeCount?: number;
   /** Multiples of shaft frequency to check; default [1, 2]. */

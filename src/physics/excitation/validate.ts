@@ -2,39 +2,23 @@
  * Validation of a screening input, once, at the public entry. Throws ScreeningInputError naming the field,
  * what was expected and what was got. Everything past this point may assume valid input.
  */
-import { ScreeningInputError } from './input-error';
+import { checkingKit, isRecord } from '../check/kit';
+import { describe, ScreeningInputError } from './input-error';
 import type { LimitOverrides, ScreeningInput, ZoneSection } from './types';
 
+// The core's checking kit, with this entry's error (ScreeningInputError, which carries the field for forms).
+const KIT = checkingKit(describe, (field, expected, _gotText, value) => new ScreeningInputError(field, expected, value));
+const { positive, nonNegative, finite } = KIT;
+
 function fail(field: string, expected: string, got: unknown): never {
-  throw new ScreeningInputError(field, expected, got);
+  return KIT.fail(field, expected, got);
 }
 
-function isObject(v: unknown): v is Record<string, unknown> {
-  return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-
-function positive(field: string, v: unknown): number {
-  if (typeof v !== 'number' || !Number.isFinite(v) || !(v > 0)) fail(field, 'a finite number > 0', v);
-  return v;
-}
-
-function nonNegative(field: string, v: unknown): number {
-  if (typeof v !== 'number' || !Number.isFinite(v) || !(v >= 0)) fail(field, 'a finite number ≥ 0', v);
-  return v;
-}
-
-function finite(field: string, v: unknown): number {
-  if (typeof v !== 'number' || !Number.isFinite(v)) fail(field, 'a finite number', v);
-  return v;
-}
+const isObject = isRecord;
 
 function arrayLike(field: string, v: unknown, minLength: number): ArrayLike<unknown> {
-  const ok = Array.isArray(v) || (ArrayBuffer.isView(v) && !(v instanceof DataView));
   const expected = minLength > 0 ? `an array with at least ${minLength} ${minLength === 1 ? 'entry' : 'entries'}` : 'an array';
-  if (!ok) fail(field, expected, v);
-  const a = v as ArrayLike<unknown>;
-  if (a.length < minLength) fail(field, expected, v);
-  return a;
+  return KIT.arrayOf(field, v, minLength, expected);
 }
 
 function validateModes(modes: unknown): void {
@@ -140,10 +124,10 @@ function validateMachinery(machinery: unknown): void {
     const f = `machinery[${i}]`;
     const m = list[i];
     if (!isObject(m)) fail(f, 'an object', m);
-    const rpm = positive(`${f}.shaftSpeedRpm`, m.shaftSpeedRpm);
-    if (m.shaftSpeedMaxRpm !== undefined) {
-      const max = finite(`${f}.shaftSpeedMaxRpm`, m.shaftSpeedMaxRpm);
-      if (!(max >= rpm)) fail(`${f}.shaftSpeedMaxRpm`, `≥ ${f}.shaftSpeedRpm = ${rpm}`, max);
+    const hz = positive(`${f}.shaftSpeedHz`, m.shaftSpeedHz);
+    if (m.shaftSpeedMaxHz !== undefined) {
+      const max = finite(`${f}.shaftSpeedMaxHz`, m.shaftSpeedMaxHz);
+      if (!(max >= hz)) fail(`${f}.shaftSpeedMaxHz`, `≥ ${f}.shaftSpeedHz = ${hz}`, max);
     }
     if (m.bladeCount !== undefined) {
       const b = m.bladeCount;

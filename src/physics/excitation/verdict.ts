@@ -2,7 +2,7 @@
  * The verdict rule, one for every excitation.
  *
  * Every excitation is expressed as a band of mode frequencies [lowHz, highHz] that it can drive:
- * - a machinery order: the line f = order × rpm / 60 (low = high), or a range for a variable-speed drive;
+ * - a machinery order: the line f = order × shaft speed in Hz (low = high), or a range for a variable-speed drive;
  * - the wave band: 1/T_max … 1/T_min;
  * - a V_R range [V_min, V_max] at flow speed U and size D: f_n from U/(V_max·D) to U/(V_min·D);
  * - the stem screen f_s/f_n ≤ r_max: f_n below f_s / r_max (low = 0, upper edge excluded, since

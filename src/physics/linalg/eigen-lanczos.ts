@@ -1,11 +1,16 @@
 /**
  * Lowest eigenpairs of the banded generalized problem K x = λ M x (K symmetric positive semi-definite,
- * M positive definite) by shift-invert Lanczos with full reorthogonalisation
- * (T. Ericsson & A. Ruhe, Math. Comp. 35 (1980) 1251; B.N. Parlett, The Symmetric Eigenvalue Problem, ch. 13).
+ * M positive definite) by shift-invert Lanczos with partial reorthogonalisation
+ * (T. Ericsson & A. Ruhe, Math. Comp. 35 (1980) 1251; B.N. Parlett, The Symmetric Eigenvalue Problem, ch. 13;
+ * H.D. Simon, "The Lanczos algorithm with partial reorthogonalization", Math. Comp. 42 (1984) 115).
  *
  * The operator OP = (K − σM)⁻¹ M is self-adjoint in the M inner product; its eigenvalues θ = 1/(λ − σ)
- * are largest for the λ nearest above σ, which Lanczos finds first. Every Lanczos vector is
- * M-orthogonalised twice against all earlier ones ("twice is enough"), so no spurious copies appear.
+ * are largest for the λ nearest above σ, which Lanczos finds first. The loss of orthogonality of the
+ * Lanczos vectors is tracked by Simon's ω-recurrence (no inner products needed); only when it passes √ε
+ * is the new vector (and the next one) M-orthogonalised against all earlier ones. Semi-orthogonality
+ * (|q_iᵀMq_j| ≤ √ε) keeps the tridiagonal's eigenvalues accurate to rounding and prevents spurious copies
+ * (Simon, Theorem 4). The eigenvalues reported are the Ritz values σ + 1/θ: they carry the accuracy
+ * of the solves, where a Rayleigh quotient xᵀKx on a fine mesh cancels terms of size ‖K‖.
  * A Krylov space holds one vector per eigenvalue, so a repeated eigenvalue (the two rigid-body modes
  * of a free–free beam) could be missed: after convergence a Sturm count (inertia of K − μM) checks that
  * every eigenvalue below the highest one found is accounted for; if not, the found pairs are locked and
@@ -14,7 +19,7 @@
 import { seededUniform01 } from './seeded';
 import { type SymBanded, symBandedGet, symBandedMulInto } from './banded';
 import { createLdltFactor, factorLdltInto, type LdltFactor, solveLdltInto } from './banded-ldlt';
-import { rayleighRitz } from './eigen-rayleigh-ritz';
+import { inverseRayleighRitz } from './eigen-rayleigh-ritz';
 import { tridiagonalEigenInPlace } from './tridiagonal';
 
 export interface LowestModesOptions {
@@ -49,6 +54,10 @@ interface RitzPair {
 }
 
 const MAX_RESTARTS = 8;
+const EPS = 2.220446049250313e-16;
+const SQRT_EPS = Math.sqrt(EPS);
+/** ω above which an earlier vector is included in a reorthogonalisation (ε^¾, Simon 1984 §5). */
+const ETA = EPS ** 0.75;
 
 function dot(a: Float64Array, b: Float64Array, n: number): number {
   let s = 0;
@@ -135,14 +144,48 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     if (below <= found || locked.length >= n) break;
     if (++restarts > MAX_RESTARTS) return { ok: false, reason: 'not-converged', message: `Sturm count ${below} below ${mu} but ${found} eigenvalues found` };
   }
-  const refined = rayleighRitz(k, m, locked);
   const values = new Float64Array(want);
   const vectors = new Float64Array(want * n);
-  for (let i = 0; i < want; i++) {
-    values[i] = refined.values[i];
-    vectors.set(refined.vectors.subarray(i * n, (i + 1) * n), i * n);
+  if (restarts > 0) {
+    // Pairs from separate runs: one Rayleigh–Ritz step on their span couples them and squares their error.
+    const refined = inverseRayleighRitz(factor, m, sigma, locked);
+    values.set(refined.values.subarray(0, want));
+    vectors.set(refined.vectors.subarray(0, want * n));
+  } else {
+    for (let i = 0; i < want; i++) {
+      values[i] = locked[i].lambda;
+      vectors.set(locked[i].x, i * n);
+    }
+    mOrthonormalise(m, vectors, want, n);
   }
   return { ok: true, values, vectors, shift: sigma, steps, restarts };
+}
+
+/**
+ * Modified Gram–Schmidt in the M inner product, twice ("twice is enough"): the Ritz vectors of a
+ * semi-orthogonal basis are orthogonal only to about √ε; this makes them M-orthonormal to rounding.
+ */
+function mOrthonormalise(m: SymBanded, vectors: Float64Array, count: number, n: number): void {
+  const mv = new Float64Array(count * n);
+  for (let pass = 0; pass < 2; pass++) {
+    for (let a = 0; a < count; a++) {
+      const va = vectors.subarray(a * n, (a + 1) * n);
+      for (let b = 0; b < a; b++) {
+        const c = dot(mv.subarray(b * n, (b + 1) * n), va, n);
+        const vb = vectors.subarray(b * n, (b + 1) * n);
+        for (let i = 0; i < n; i++) va[i] -= c * vb[i];
+      }
+      const ma = mv.subarray(a * n, (a + 1) * n);
+      symBandedMulInto(m, va, ma);
+      const norm = Math.sqrt(Math.max(dot(va, ma, n), 0));
+      if (norm > 0) {
+        for (let i = 0; i < n; i++) {
+          va[i] /= norm;
+          ma[i] /= norm;
+        }
+      }
+    }
+  }
 }
 
 interface RunOutcome {
@@ -153,134 +196,258 @@ interface RunOutcome {
 }
 
 /**
+ * Krylov basis and its M-images, one flat Float64Array each: vector j at `[j·n … (j+1)·n)`; the
+ * tridiagonal's α_j and β_j (β_j couples vectors j − 1 and j; 0 at a block start) and the ω estimates
+ * of |q_jᵀ M q_k| for the current and previous vectors. Grown by doubling, never per step.
+ */
+class Workspace {
+  q: Float64Array;
+  mq: Float64Array;
+  alpha: Float64Array;
+  beta: Float64Array;
+  omPrev: Float64Array;
+  omCur: Float64Array;
+  omNext: Float64Array;
+  cap: number;
+  constructor(
+    readonly n: number,
+    cap: number,
+  ) {
+    this.cap = cap;
+    this.q = new Float64Array(cap * n);
+    this.mq = new Float64Array(cap * n);
+    this.alpha = new Float64Array(cap);
+    this.beta = new Float64Array(cap + 1);
+    this.omPrev = new Float64Array(cap + 1);
+    this.omCur = new Float64Array(cap + 1);
+    this.omNext = new Float64Array(cap + 1);
+  }
+  grow(limit: number): void {
+    const cap = Math.min(limit, 2 * this.cap);
+    const n = this.n;
+    const more = (a: Float64Array, len: number) => {
+      const b = new Float64Array(len);
+      b.set(a.subarray(0, Math.min(a.length, len)));
+      return b;
+    };
+    this.q = more(this.q, cap * n);
+    this.mq = more(this.mq, cap * n);
+    this.alpha = more(this.alpha, cap);
+    this.beta = more(this.beta, cap + 1);
+    this.omPrev = more(this.omPrev, cap + 1);
+    this.omCur = more(this.omCur, cap + 1);
+    this.omNext = more(this.omNext, cap + 1);
+    this.cap = cap;
+  }
+}
+
+/**
  * One Lanczos run, M-orthogonal to the locked pairs, until the `want` largest Ritz values θ
- * have relative residual ≤ tol (|β_j s_ji| ≤ tol·θ_i, Parlett §13.2) or the space is exhausted.
+ * have relative residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) or the space is exhausted.
  */
 function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tol: number, rand: () => number): RunOutcome {
   const n = f.n;
   const maxSteps = n - locked.length;
-  const q: Float64Array[] = [];
-  const mq: Float64Array[] = [];
-  const alpha: number[] = [];
-  const beta: number[] = []; // beta[j]: coupling of q[j−1] and q[j] (0 at a block start)
-  let w: Float64Array = new Float64Array(n);
-  let mw: Float64Array = new Float64Array(n);
+  const ws = new Workspace(n, Math.min(maxSteps, Math.max(2 * want + 16, 32)));
+  const r = new Float64Array(n);
+  const mr = new Float64Array(n);
+  const ritz = new RitzWork();
 
-  const orthogonalise = (v: Float64Array): void => {
-    for (let pass = 0; pass < 2; pass++) {
-      for (const p of locked) {
-        const c = dot(p.mx, v, n);
-        for (let i = 0; i < n; i++) v[i] -= c * p.x[i];
-      }
-      for (let j = 0; j < q.length; j++) {
-        const c = dot(mq[j], v, n);
-        const qj = q[j];
-        for (let i = 0; i < n; i++) v[i] -= c * qj[i];
-      }
+  const orthLocked = (v: Float64Array): void => {
+    for (const p of locked) {
+      const c = dot(p.mx, v, n);
+      for (let i = 0; i < n; i++) v[i] -= c * p.x[i];
     }
   };
-  /** Fresh random start, orthogonal to everything so far; returns its M-norm. */
-  const randomStart = (): number => {
+  /** One modified Gram–Schmidt pass of v against basis vectors 0 … count−1 (only those marked, if a mask is given). */
+  const orthBasis = (v: Float64Array, count: number, mask?: Uint8Array): void => {
+    const { q, mq } = ws;
+    for (let k = 0; k < count; k++) {
+      if (mask && mask[k] === 0) continue;
+      const off = k * n;
+      let c = 0;
+      for (let i = 0; i < n; i++) c += mq[off + i] * v[i];
+      for (let i = 0; i < n; i++) v[i] -= c * q[off + i];
+    }
+  };
+  const mNorm = (): number => {
+    symBandedMulInto(m, r, mr);
+    return Math.sqrt(Math.max(dot(r, mr, n), 0));
+  };
+  /** Fresh random start in r, orthogonal to everything so far; returns its M-norm. */
+  const randomStart = (count: number): number => {
     for (let attempt = 0; attempt < 5; attempt++) {
-      for (let i = 0; i < n; i++) w[i] = rand();
-      orthogonalise(w);
-      symBandedMulInto(m, w, mw);
-      const b = Math.sqrt(Math.max(dot(w, mw, n), 0));
+      for (let i = 0; i < n; i++) r[i] = rand();
+      for (let pass = 0; pass < 2; pass++) {
+        orthLocked(r);
+        orthBasis(r, count);
+      }
+      const b = mNorm();
       if (b > 1e-8) return b;
     }
     return 0;
   };
 
-  let b = randomStart();
-  let coupling = 0;
-  let lastCheck = 0;
-  let maxAlpha = 0;
-  while (q.length < maxSteps) {
+  let b = randomStart(0);
+  let j = 0;
+  let tnorm = 0;
+  let forceNext = false;
+  let mask = new Uint8Array(ws.cap + 1);
+  ws.beta[0] = 0;
+  ws.omCur[0] = 1;
+  while (j < maxSteps) {
     if (b === 0) break;
-    const qj = w.map((v) => v / b);
-    const mqj = mw.map((v) => v / b);
-    q.push(qj);
-    mq.push(mqj);
-    beta.push(coupling);
-    const j = q.length - 1;
-    // w = OP q_j = (K − σM)⁻¹ M q_j, then the three-term recurrence and full reorthogonalisation.
-    w = solveLdltInto(f, mqj, new Float64Array(n));
-    const aj = dot(mqj, w, n);
-    alpha.push(aj);
-    maxAlpha = Math.max(maxAlpha, Math.abs(aj));
-    for (let i = 0; i < n; i++) w[i] -= aj * qj[i];
-    if (coupling !== 0) {
-      const qp = q[j - 1];
-      for (let i = 0; i < n; i++) w[i] -= coupling * qp[i];
+    if (j === ws.cap) ws.grow(maxSteps);
+    const { q, mq, alpha, beta } = ws;
+    const off = j * n;
+    const inv = 1 / b;
+    for (let i = 0; i < n; i++) {
+      q[off + i] = r[i] * inv;
+      mq[off + i] = mr[i] * inv;
     }
-    orthogonalise(w);
-    mw = new Float64Array(n);
-    symBandedMulInto(m, w, mw);
-    b = Math.sqrt(Math.max(dot(w, mw, n), 0));
-    const breakdown = b <= 1e-12 * maxAlpha;
-    const steps = q.length;
-    const exhausted = steps >= maxSteps;
-    if (steps >= want && (steps - lastCheck >= 3 || breakdown || exhausted)) {
-      lastCheck = steps;
-      const ritz = ritzPairs(alpha, beta, breakdown ? 0 : b, want, tol, exhausted);
-      if (!ritz) return { ok: false, steps, pairs: [] };
-      if (ritz.converged) {
-        const pairs = ritz.selected.map(({ theta, s }) => {
-          const x = new Float64Array(n);
-          const mx = new Float64Array(n);
-          for (let r = 0; r < steps; r++) {
-            const c = s[r];
-            if (c === 0) continue;
-            const qr = q[r];
-            const mqr = mq[r];
-            for (let i = 0; i < n; i++) {
-              x[i] += c * qr[i];
-              mx[i] += c * mqr[i];
-            }
-          }
-          return { theta, x, mx };
-        });
-        return { ok: true, steps, pairs };
+    // r = OP q_j = (K − σM)⁻¹ M q_j, then the three-term recurrence.
+    solveLdltInto(f, mq.subarray(off, off + n), r);
+    if (j > 0) {
+      const bj = beta[j];
+      const po = off - n;
+      for (let i = 0; i < n; i++) r[i] -= bj * q[po + i];
+    }
+    let aj = 0;
+    for (let i = 0; i < n; i++) aj += mq[off + i] * r[i];
+    alpha[j] = aj;
+    for (let i = 0; i < n; i++) r[i] -= aj * q[off + i];
+    if (locked.length > 0) orthLocked(r);
+    b = mNorm();
+    tnorm = Math.max(tnorm, Math.abs(aj) + b + beta[j]);
+
+    // Simon's ω-recurrence: estimated |q_{j+1}ᵀ M q_k| from the tridiagonal alone, with a rounding term.
+    const { omPrev, omCur, omNext } = ws;
+    let worst = 0;
+    if (b > 0) {
+      for (let k = 0; k < j; k++) {
+        let t = beta[k + 1] * omCur[k + 1] + (alpha[k] - aj) * omCur[k] - beta[j] * omPrev[k];
+        if (k > 0) t += beta[k] * omCur[k - 1];
+        t = (t + Math.sign(t || 1) * EPS * tnorm) / b;
+        omNext[k] = t;
+        worst = Math.max(worst, Math.abs(t));
       }
+      omNext[j] = (EPS * tnorm) / b;
     }
-    if (breakdown) {
-      // Invariant subspace found: continue from a fresh vector with no coupling.
-      b = randomStart();
-      coupling = 0;
-    } else {
-      coupling = b;
+    if (forceNext || worst > SQRT_EPS) {
+      // Reorthogonalise this vector and the next one (Simon §4) against the earlier vectors whose ω has
+      // grown past ε^¾ (and those chosen for the previous vector): together they restore semi-orthogonality
+      // at a fraction of the cost of a sweep over the whole basis.
+      if (mask.length < j + 1) {
+        const wider = new Uint8Array(ws.cap + 1);
+        wider.set(mask);
+        mask = wider;
+      }
+      for (let k = 0; k <= j; k++) if (Math.abs(omNext[k]) >= ETA) mask[k] = 1;
+      orthBasis(r, j + 1, mask);
+      const before = b;
+      b = mNorm();
+      if (b < 0.5 * before) {
+        orthBasis(r, j + 1, mask);
+        b = mNorm();
+      }
+      for (let k = 0; k <= j; k++) if (mask[k] === 1) omNext[k] = EPS;
+      forceNext = !forceNext;
+      if (!forceNext) mask.fill(0);
+    }
+    omNext[j + 1] = 1;
+    beta[j + 1] = b;
+    j++;
+    const breakdown = b <= 1e-12 * tnorm;
+    const exhausted = j >= maxSteps;
+    if (j >= want) {
+      const check = ritz.check(ws, j, breakdown ? 0 : b, want, tol, exhausted);
+      if (!check) return { ok: false, steps: j, pairs: [] };
+      if (check.converged) return { ok: true, steps: j, pairs: ritz.pairs(ws, j, want) };
+    }
+    // Rotate the ω rows: the new vector becomes the current one.
+    ws.omPrev = omCur;
+    ws.omCur = omNext;
+    ws.omNext = omPrev;
+    if (breakdown && !exhausted) {
+      // Invariant subspace found: continue from a fresh vector, fully orthogonal, with no coupling.
+      b = randomStart(j);
+      ws.beta[j] = 0;
+      for (let k = 0; k < j; k++) ws.omCur[k] = EPS;
+      ws.omCur[j] = 1;
+      forceNext = false;
+      mask.fill(0);
     }
   }
-  return { ok: false, steps: q.length, pairs: [] };
+  return { ok: false, steps: j, pairs: [] };
 }
 
-/** Eigen-decomposes the Lanczos tridiagonal; returns the `want` largest θ if all have converged. */
-function ritzPairs(
-  alpha: number[],
-  beta: number[],
-  bNext: number,
-  want: number,
-  tol: number,
-  exhausted: boolean,
-): { converged: boolean; selected: { theta: number; s: Float64Array }[] } | null {
-  const j = alpha.length;
-  const d = Float64Array.from(alpha);
-  const e = new Float64Array(j);
-  for (let i = 0; i < j - 1; i++) e[i] = beta[i + 1];
-  const z = new Float64Array(j * j);
-  for (let i = 0; i < j; i++) z[i * j + i] = 1;
-  if (!tridiagonalEigenInPlace(j, d, e, z, j).ok) return null;
-  const order = Array.from({ length: j }, (_, i) => i).sort((p, r) => d[r] - d[p]);
-  const selected: { theta: number; s: Float64Array }[] = [];
-  let converged = true;
-  for (let t = 0; t < Math.min(want, j); t++) {
-    const col = order[t];
-    const theta = d[col];
-    const residual = Math.abs(bNext * z[(j - 1) * j + col]);
-    if (!exhausted && !(theta > 0 && residual <= tol * theta)) converged = false;
-    const s = new Float64Array(j);
-    for (let r = 0; r < j; r++) s[r] = z[r * j + col];
-    selected.push({ theta, s });
+/** The tridiagonal's eigen-decomposition, with buffers reused from check to check. */
+class RitzWork {
+  private d = new Float64Array(0);
+  private e = new Float64Array(0);
+  private z = new Float64Array(0);
+  private order: number[] = [];
+
+  private load(ws: Workspace, j: number): void {
+    if (this.d.length < j) {
+      this.d = new Float64Array(2 * j);
+      this.e = new Float64Array(2 * j);
+      this.z = new Float64Array(2 * j);
+    }
+    for (let i = 0; i < j; i++) {
+      this.d[i] = ws.alpha[i];
+      this.e[i] = i + 1 < j ? ws.beta[i + 1] : 0;
+    }
   }
-  return { converged, selected };
+
+  private sortDescending(j: number): void {
+    const d = this.d;
+    this.order = Array.from({ length: j }, (_, i) => i).sort((p, r) => d[r] - d[p]);
+  }
+
+  /**
+   * Ritz values and their residual estimates, rotating only the last row of the eigenvector matrix
+   * (the residual of pair i is |β_{j+1} s_{j,i}|): O(j²) per check instead of O(j³), so it can run every step.
+   */
+  check(ws: Workspace, j: number, bNext: number, want: number, tol: number, exhausted: boolean): { converged: boolean } | null {
+    this.load(ws, j);
+    const z = this.z.subarray(0, j);
+    z.fill(0);
+    z[j - 1] = 1;
+    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
+    this.sortDescending(j);
+    for (let t = 0; t < Math.min(want, j); t++) {
+      const col = this.order[t];
+      const theta = this.d[col];
+      if (!exhausted && !(theta > 0 && Math.abs(bNext * z[col]) <= tol * theta)) return { converged: false };
+    }
+    return { converged: true };
+  }
+
+  /** The `want` largest Ritz pairs of the converged run: full eigenvectors of T once, then x = Q s. */
+  pairs(ws: Workspace, j: number, want: number): { theta: number; x: Float64Array; mx: Float64Array }[] {
+    const n = ws.n;
+    this.load(ws, j);
+    const s = new Float64Array(j * j);
+    for (let i = 0; i < j; i++) s[i * j + i] = 1;
+    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
+    this.sortDescending(j);
+    const out: { theta: number; x: Float64Array; mx: Float64Array }[] = [];
+    for (let t = 0; t < Math.min(want, j); t++) {
+      const col = this.order[t];
+      const x = new Float64Array(n);
+      const mx = new Float64Array(n);
+      for (let r = 0; r < j; r++) {
+        const c = s[r * j + col];
+        if (c === 0) continue;
+        const off = r * n;
+        for (let i = 0; i < n; i++) {
+          x[i] += c * ws.q[off + i];
+          mx[i] += c * ws.mq[off + i];
+        }
+      }
+      out.push({ theta: this.d[col], x, mx });
+    }
+    return out;
+  }
 }

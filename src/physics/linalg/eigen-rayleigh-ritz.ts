@@ -1,5 +1,6 @@
-/** Rayleigh–Ritz refinement of approximate eigenpairs of K x = λ M x on the span of their vectors. */
+/** Rayleigh–Ritz refinement of approximate eigenpairs on the span of their vectors, for the shift-inverted operator. */
 import { type SymBanded, symBandedMulInto } from './banded';
+import { type LdltFactor, solveLdltInto } from './banded-ldlt';
 import { denseGeneralizedEigen } from './eigen-dense';
 
 function dot(a: Float64Array, b: Float64Array, n: number): number {
@@ -9,30 +10,39 @@ function dot(a: Float64Array, b: Float64Array, n: number): number {
 }
 
 /**
- * Final Rayleigh–Ritz step on the span of all pairs found: projects K and M (products only, no solves)
- * and solves the small dense problem. With a nearly singular K − σM (rigid-body modes) each solve
- * carries a relative error of about ε·λmax/|σ|; the Rayleigh quotient squares that error, and the
- * projection restores exact M-orthonormality of the vectors.
+ * Rayleigh–Ritz on the span of the pairs found (from several Lanczos runs after a Sturm restart), for the
+ * operator (K − σM)⁻¹M that Lanczos itself used: G = Xᵀ M (K − σM)⁻¹ M X and P = Xᵀ M X, then
+ * P s = μ G s with λ = σ + μ. Working with the inverse keeps the accuracy of the Lanczos values: a
+ * Rayleigh quotient xᵀKx / xᵀMx on a fine mesh cancels terms of size ‖K‖ (ε λmax/λ relative error), the
+ * solves do not. The error of the vectors is squared in the values, and the vectors come out exactly
+ * M-orthonormal (B.N. Parlett, The Symmetric Eigenvalue Problem, §11.3).
  */
-export function rayleighRitz(k: SymBanded, m: SymBanded, pairs: readonly { lambda: number; x: Float64Array; mx: Float64Array }[]): { values: Float64Array; vectors: Float64Array } {
-  const n = k.n;
+export function inverseRayleighRitz(
+  f: LdltFactor,
+  m: SymBanded,
+  sigma: number,
+  pairs: readonly { lambda: number; x: Float64Array; mx: Float64Array }[],
+): { values: Float64Array; vectors: Float64Array } {
+  const n = f.n;
   const p = pairs.length;
-  const kx = pairs.map((q) => symBandedMulInto(k, q.x, new Float64Array(n)));
-  const kp = new Float64Array(p * p);
+  const y = new Float64Array(n);
+  const g = new Float64Array(p * p);
   const mp = new Float64Array(p * p);
+  const ys: Float64Array[] = [];
+  for (let i = 0; i < p; i++) ys.push(solveLdltInto(f, pairs[i].mx, new Float64Array(n)));
   for (let i = 0; i < p; i++) {
     for (let j = 0; j <= i; j++) {
-      kp[i * p + j] = kp[j * p + i] = 0.5 * (dot(pairs[i].x, kx[j], n) + dot(pairs[j].x, kx[i], n));
+      g[i * p + j] = g[j * p + i] = 0.5 * (dot(pairs[i].mx, ys[j], n) + dot(pairs[j].mx, ys[i], n));
       mp[i * p + j] = mp[j * p + i] = 0.5 * (dot(pairs[i].x, pairs[j].mx, n) + dot(pairs[j].x, pairs[i].mx, n));
     }
   }
-  const small = denseGeneralizedEigen(kp, mp, p);
+  const small = denseGeneralizedEigen(mp, g, p);
   const vectors = new Float64Array(p * n);
   if (!small.ok) {
-    // Cannot happen for M-orthonormal pairs (Mp ≈ I); keep the Lanczos values if it does.
     pairs.forEach((q, i) => vectors.set(q.x, i * n));
     return { values: Float64Array.from(pairs, (q) => q.lambda), vectors };
   }
+  // Eigenvectors of P s = μ G s are G-orthonormal; rescale each combination to unit M-norm.
   for (let a = 0; a < p; a++) {
     const out = vectors.subarray(a * n, (a + 1) * n);
     for (let b = 0; b < p; b++) {
@@ -40,6 +50,9 @@ export function rayleighRitz(k: SymBanded, m: SymBanded, pairs: readonly { lambd
       const xb = pairs[b].x;
       for (let i = 0; i < n; i++) out[i] += c * xb[i];
     }
+    symBandedMulInto(m, out, y);
+    const norm = Math.sqrt(Math.max(dot(out, y, n), 0));
+    if (norm > 0) for (let i = 0; i < n; i++) out[i] /= norm;
   }
-  return { values: small.values, vectors };
+  return { values: Float64Array.from(small.values, (mu) => sigma + mu), vectors };
 }

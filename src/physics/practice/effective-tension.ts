@@ -2,7 +2,7 @@
  * Effective tension of a pipe or riser under internal and external pressure:
  *   T_eff = T_wall − p_i·A_i + p_e·A_e
  * R. Sparks, "The influence of tension, pressure and weight on pipe and riser deformations and stresses",
- * ASME J. Energy Resources Technology 106 (1984) 46. Bending frequencies (geometric stiffness) use T_eff;
+ * ASME J. Energy Resources Technology 106 (1984) 46 (docs/sources.md §S10). Bending frequencies (geometric stiffness) use T_eff;
  * a load cell on the wall reads T_wall. A_i = π D_i²/4 and A_e = π D_o²/4 are the bore and the outside areas.
  */
 

@@ -1,7 +1,7 @@
 /**
  * Depth to effective fixity of a laterally loaded pile below the mudline, from the soil's subgrade modulus:
  * M.T. Davisson and K.E. Robinson, "Bending and buckling of partially embedded piles", Proc. 6th Int. Conf. Soil
- * Mechanics and Foundation Engineering, Montreal (1965), vol. 2, 243–246.
+ * Mechanics and Foundation Engineering, Montreal (1965), vol. 2, 243–246 (docs/sources.md §S9).
  *   - modulus constant with depth (stiff over-consolidated clay), k in N/m²:  R = (EI/k)^(1/4),  L_f ≈ 1.4 R
  *   - modulus rising linearly with depth (sand, normally consolidated clay), k = n_h·z:  T = (EI/n_h)^(1/5),
  *     L_f ≈ 1.8 T

@@ -1,7 +1,7 @@
 /**
  * Density and kinematic viscosity of fresh water against temperature, for Reynolds numbers and added mass when a
  * surveyor knows the liquid's temperature. Table values at 10, 20, 40 and 60 °C from standard tables (CRC
- * Handbook of Chemistry and Physics, "Properties of water"); linear interpolation between them, the ends held
+ * Handbook of Chemistry and Physics, "Properties of water"; docs/sources.md §S7.1); linear interpolation between them, the ends held
  * outside 10–60 °C would be extrapolation, which is refused.
  */
 

@@ -7,7 +7,7 @@
  * Sc = 2 m_e δ / (ρ D²) with δ = 2π ζ the logarithmic decrement equals K_S.
  *
  * Cross-flow amplitude at lock-in: R.D. Blevins, Flow-Induced Vibration, 2nd ed. (Van Nostrand Reinhold, 1990),
- * §3.4, fit to measured peak amplitudes of elastically mounted and flexible cylinders:
+ * §3.4 (docs/sources.md §S6.6), fit to measured peak amplitudes of elastically mounted and flexible cylinders:
  *   A/D = 0.07 γ / ((δ_r + 1.9) St²) · [0.3 + 0.72 / ((δ_r + 1.9) St)]^½,   δ_r = 2 m (2π ζ) / (ρ D²)
  * with the mode factor γ (1 for a rigid cylinder on springs, 1.155 for a pinned–pinned sine mode, 1.305 for a
  * cantilever's first mode).

@@ -5,7 +5,8 @@
  * Throws TypeError / RangeError with a message naming the field, what was expected and what was got.
  */
 import type { BodySpec, BoundarySpec, SectionInput, Vec2 } from './types';
-import { validateSectionInput } from './validate';
+import { MAX_BODIES, MAX_BOUNDARIES, MAX_POLYGON_POINTS, validateSectionInput } from './validate';
+import { checkingKit, mustBe } from '../check/kit';
 
 type Obj = Record<string, unknown>;
 
@@ -19,9 +20,11 @@ const show = (v: unknown): string => {
   }
 };
 
+// The core's checking kit; every failure here is a value of the wrong kind (TypeError).
+const KIT = checkingKit(show, (field, expected, gotText) => new TypeError(mustBe(field, expected, gotText)));
+
 function obj(where: string, v: unknown): Obj {
-  if (typeof v !== 'object' || v === null || Array.isArray(v)) throw new TypeError(`${where} must be an object, got ${show(v)}`);
-  return v as Obj;
+  return KIT.record(where, v);
 }
 
 function onlyKeys(where: string, o: Obj, allowed: readonly string[]): void {
@@ -31,8 +34,8 @@ function onlyKeys(where: string, o: Obj, allowed: readonly string[]): void {
 }
 
 function num(where: string, v: unknown): number {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${show(v)}`);
-  return v;
+  if (typeof v !== 'number') KIT.fail(where, 'a number', v);
+  return v as number;
 }
 
 function optNum(where: string, v: unknown): number | undefined {
@@ -50,6 +53,7 @@ function optPair(where: string, v: unknown): Vec2 | undefined {
 
 function points(where: string, v: unknown): Vec2[] {
   if (!Array.isArray(v)) throw new TypeError(`${where} must be an array of points [x, y], got ${show(v)}`);
+  if (v.length > MAX_POLYGON_POINTS) throw new RangeError(`${where} must list from 3 to ${MAX_POLYGON_POINTS} points [x, y], got ${v.length} points`);
   return v.map((p, k) => pair(`${where}[${k}]`, p));
 }
 
@@ -129,6 +133,9 @@ export function parseSectionInput(raw: unknown): SectionInput {
   onlyKeys('section input', o, ['liquidDensityKgPerM3', 'bodies', 'boundaries', 'panelsPerBody']);
   if (!Array.isArray(o.bodies)) throw new TypeError(`bodies must be an array of bodies, got ${show(o.bodies)}`);
   if (o.boundaries !== undefined && !Array.isArray(o.boundaries)) throw new TypeError(`boundaries must be an array, got ${show(o.boundaries)}`);
+  // Counts first, so a huge input is refused before any work on its entries.
+  if (o.bodies.length > MAX_BODIES) throw new RangeError(`bodies may hold at most ${MAX_BODIES} bodies, got ${o.bodies.length}`);
+  if (Array.isArray(o.boundaries) && o.boundaries.length > MAX_BOUNDARIES) throw new RangeError(`boundaries may hold at most ${MAX_BOUNDARIES} boundaries, got ${o.boundaries.length}`);
   const input: SectionInput = {
     liquidDensityKgPerM3: num('liquidDensityKgPerM3', o.liquidDensityKgPerM3),
     bodies: o.bodies.map(parseBody),

@@ -39,8 +39,16 @@ export interface SectionInput {
 // ---------------------------------------------------------------------------
 
 export interface SolveOptions {
-  /** Nominal panels per body at the finest resolution (overrides `SectionInput.panelsPerBody`), 16–4096. Default 128; thin bodies get up to twice as many. */
+  /**
+   * Nominal panels per body at the finest resolution (overrides `SectionInput.panelsPerBody`), 16–1024; thin
+   * bodies get up to twice as many. Default 128.
+   */
   panelsPerBody?: number;
+  /**
+   * Report Richardson-extrapolated values where the three levels are in the asymptotic range (default true);
+   * false reports the finest level's values (studies of the discretisation itself).
+   */
+  extrapolate?: boolean;
   /** Run the kinetic-energy cross-check on a field grid (slower: ~0.1 s for one body). Default false. */
   energyCheck?: boolean;
   /** Cells across the liquid region for the energy cross-check. Default 96. */
@@ -96,7 +104,10 @@ export interface ErrorEstimate {
   extrapolated: number;
   /** Order used: observed from the N/4, N/2 and N values, bounded to [1, 2] (1 if not monotone). */
   order: number;
-  /** Estimated absolute error of the reported (fine) value: |fine − extrapolated|. */
+  /**
+   * Estimated absolute error of the reported (fine) value, which also bounds the extrapolated value's:
+   * |fine − extrapolated|, widened to the change from the coarsest level when the observed order is below 1.5.
+   */
   absoluteError: number;
   /** absoluteError / |fine|. */
   relativeError: number;

@@ -10,9 +10,16 @@ import { sampleChain } from './pieces';
 import { inputLines } from './model';
 import { lineDistance, perpendicular, type Line } from './lines';
 import { bbox, pointInPolygon, segmentsTouch, selfIntersection, signedArea, type Polygon } from './polygon';
+import { checkingKit, mustBe } from '../check/kit';
 
 /** Most bodies in one section (the dense solve grows as (K·N)³). */
 export const MAX_BODIES = 24;
+/** Most points of one polygon (the self-intersection check grows as n², and every edge takes panels). */
+export const MAX_POLYGON_POINTS = 256;
+/** Most boundaries (walls, free surfaces, one enclosure). */
+export const MAX_BOUNDARIES = 16;
+/** Largest nominal panels per body. */
+export const MAX_PANELS_PER_BODY = 1024;
 
 const fmt = (v: unknown): string => {
   if (typeof v === 'number') return String(v);
@@ -24,14 +31,23 @@ const fmt = (v: unknown): string => {
   }
 };
 
+// The core's checking kit: a value of the wrong kind is a TypeError, a number out of range a RangeError.
+const KIT = checkingKit(fmt, (field, expected, gotText, value) =>
+  typeof value === 'number' ? new RangeError(mustBe(field, expected, gotText)) : new TypeError(mustBe(field, expected, gotText)),
+);
+
+function number(where: string, v: unknown): void {
+  if (typeof v !== 'number') KIT.fail(where, 'a number', v);
+}
+
 function positive(where: string, v: unknown): void {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${fmt(v)}`);
-  if (!(Number.isFinite(v) && v > 0)) throw new RangeError(`${where} must be a finite number > 0, got ${fmt(v)}`);
+  number(where, v);
+  KIT.positive(where, v);
 }
 
 function finite(where: string, v: unknown): void {
-  if (typeof v !== 'number') throw new TypeError(`${where} must be a number, got ${fmt(v)}`);
-  if (!Number.isFinite(v)) throw new RangeError(`${where} must be a finite number, got ${fmt(v)}`);
+  number(where, v);
+  KIT.finite(where, v);
 }
 
 function vec(where: string, v: unknown): void {
@@ -49,8 +65,8 @@ function optionalFinite(where: string, v: unknown): void {
 }
 
 function polygonPoints(where: string, pts: unknown): void {
-  if (!Array.isArray(pts) || pts.length < 3) {
-    throw new RangeError(`${where} must list at least 3 points [x, y], got ${Array.isArray(pts) ? `${pts.length} points` : fmt(pts)}`);
+  if (!Array.isArray(pts) || pts.length < 3 || pts.length > MAX_POLYGON_POINTS) {
+    throw new RangeError(`${where} must list from 3 to ${MAX_POLYGON_POINTS} points [x, y], got ${Array.isArray(pts) ? `${pts.length} points` : fmt(pts)}`);
   }
   pts.forEach((p, k) => vec(`${where}[${k}]`, p));
   const flat = new Float64Array(pts.length * 2);
@@ -158,18 +174,49 @@ function edgeOnLine(p: Polygon, e: number, lines: readonly Line[], tol: number):
   );
 }
 
-/** True when outlines p and q cross or touch anywhere except along a common straight boundary. */
+/** Edges of p lying on one of the lines, as flags (computed once per outline, not per pair of edges). */
+function edgesOnLines(p: Polygon, lines: readonly Line[], tol: number): Uint8Array {
+  const n = p.length / 2;
+  const out = new Uint8Array(n);
+  if (lines.length > 0) for (let e = 0; e < n; e++) out[e] = edgeOnLine(p, e, lines, tol) ? 1 : 0;
+  return out;
+}
+
+/** Indices of the edges of p whose bounding box meets the box b widened by tol. */
+function edgesNear(p: Polygon, b: readonly number[], tol: number): number[] {
+  const n = p.length / 2;
+  const out: number[] = [];
+  for (let e = 0; e < n; e++) {
+    const e1 = (e + 1) % n;
+    const x0 = Math.min(p[2 * e], p[2 * e1]);
+    const x1 = Math.max(p[2 * e], p[2 * e1]);
+    const y0 = Math.min(p[2 * e + 1], p[2 * e1 + 1]);
+    const y1 = Math.max(p[2 * e + 1], p[2 * e1 + 1]);
+    if (x1 >= b[0] - tol && x0 <= b[2] + tol && y1 >= b[1] - tol && y0 <= b[3] + tol) out.push(e);
+  }
+  return out;
+}
+
+/**
+ * True when outlines p and q cross or touch anywhere except along a common straight boundary. Only edges
+ * inside the other outline's bounding box are compared (a pile in the middle of its caisson compares none).
+ */
 function outlinesTouch(p: Polygon, q: Polygon, lines: readonly Line[], tol: number): boolean {
   const n = p.length / 2;
   const m = q.length / 2;
   const bp = bbox(p);
   const bq = bbox(q);
   if (bp[2] < bq[0] - tol || bq[2] < bp[0] - tol || bp[3] < bq[1] - tol || bq[3] < bp[1] - tol) return false;
-  for (let i = 0; i < n; i++) {
-    if (edgeOnLine(p, i, lines, tol)) continue;
+  const pe = edgesNear(p, bq, tol);
+  const qe = edgesNear(q, bp, tol);
+  if (pe.length === 0 || qe.length === 0) return false;
+  const pOn = edgesOnLines(p, lines, tol);
+  const qOn = edgesOnLines(q, lines, tol);
+  for (const i of pe) {
+    if (pOn[i]) continue;
     const i1 = (i + 1) % n;
-    for (let j = 0; j < m; j++) {
-      if (edgeOnLine(q, j, lines, tol)) continue;
+    for (const j of qe) {
+      if (qOn[j]) continue;
       const j1 = (j + 1) % m;
       if (segmentsTouch(p[2 * i], p[2 * i + 1], p[2 * i1], p[2 * i1 + 1], q[2 * j], q[2 * j + 1], q[2 * j1], q[2 * j1 + 1])) {
         // A touch exactly on a straight boundary (a body and the tank floor meeting on a wall line) is allowed.
@@ -195,6 +242,13 @@ function segmentsCross(p: Polygon, i: number, q: Polygon, j: number): boolean {
   return d1 * d2 < 0 && d3 * d4 < 0;
 }
 
+/** Nominal panels per body: an integer from 16 to MAX_PANELS_PER_BODY (absent = the default). */
+export function checkPanelsPerBody(n: unknown): void {
+  if (n !== undefined && !(typeof n === 'number' && Number.isInteger(n) && n >= 16 && n <= MAX_PANELS_PER_BODY)) {
+    throw new RangeError(`panelsPerBody must be an integer from 16 to ${MAX_PANELS_PER_BODY}, got ${fmt(n)}`);
+  }
+}
+
 /** Validates a section input; throws with a clear message on the first problem found. */
 export function validateSectionInput(input: SectionInput): void {
   if (typeof input !== 'object' || input === null) throw new TypeError(`section input must be an object, got ${fmt(input)}`);
@@ -204,9 +258,10 @@ export function validateSectionInput(input: SectionInput): void {
   }
   if (input.bodies.length > MAX_BODIES) throw new RangeError(`bodies may hold at most ${MAX_BODIES} bodies, got ${input.bodies.length}`);
   if (input.boundaries !== undefined && !Array.isArray(input.boundaries)) throw new TypeError(`boundaries must be an array, got ${fmt(input.boundaries)}`);
-  if (input.panelsPerBody !== undefined && !(Number.isInteger(input.panelsPerBody) && input.panelsPerBody >= 16 && input.panelsPerBody <= 4096)) {
-    throw new RangeError(`panelsPerBody must be an integer from 16 to 4096, got ${fmt(input.panelsPerBody)}`);
+  if (input.boundaries !== undefined && input.boundaries.length > MAX_BOUNDARIES) {
+    throw new RangeError(`boundaries may hold at most ${MAX_BOUNDARIES} boundaries, got ${input.boundaries.length}`);
   }
+  checkPanelsPerBody(input.panelsPerBody);
   input.bodies.forEach(checkBody);
   const boundaries = input.boundaries ?? [];
   boundaries.forEach(checkBoundary);
@@ -269,10 +324,13 @@ export function validateSectionInput(input: SectionInput): void {
           `bodies[${b}] touches or crosses the enclosure boundaries[${k}]; a body standing on the tank floor needs a wall boundary along the floor`,
         );
       }
+      // The outlines neither cross nor touch, so without straight boundaries (whose edges may be shared) the
+      // body lies wholly inside or wholly outside: one point decides. With them, every wetted point is checked.
       for (let q = 0; q < p.length; q += 2) {
         if (wetted(p[q], p[q + 1]) && !pointInPolygon(enc, p[q], p[q + 1])) {
           throw new RangeError(`bodies[${b}] lies (partly) outside the enclosure boundaries[${k}]`);
         }
+        if (lines.length === 0) break;
       }
     });
   }

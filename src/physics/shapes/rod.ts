@@ -1,5 +1,5 @@
 /** Rod: a solid circular bar of diameter D. */
-import { roundFlowSection, roundProps, ROUND_CA_REFERENCE } from './round';
+import { roundProps, ROUND_TRAITS } from './round';
 import { lerp } from './shear';
 import type { ShapeDescription } from './types';
 
@@ -22,10 +22,5 @@ export const ROD: ShapeDescription<RodSection> = {
   lerp: (a, b, t) => rodSection(lerp(a.diameterM, b.diameterM, t)),
   depthM: (s) => s.diameterM,
   solverBody: (s, c) => ({ shape: 'circle', diameterM: s.diameterM + 2 * c }),
-  flowSection: roundFlowSection,
-  closedForm: 'circle closed form (Lamb)',
-  perforable: false,
-  endEffectBasis: 'circular cylinder',
-  caReferenceArea: ROUND_CA_REFERENCE,
-  wetWarning: () => null,
+  ...ROUND_TRAITS,
 };

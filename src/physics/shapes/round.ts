@@ -34,4 +34,12 @@ export function roundFlowSection(p: SectionAt): FlowSection {
   return { kind: 'circle', outerDiameterM: p.outerWidthM };
 }
 
-export const ROUND_CA_REFERENCE = 'π D²/4, D = outer diameter including coating';
+/** What tube and rod describe alike: a circle to the flow, Lamb's closed form in open liquid (Ca = 1). */
+export const ROUND_TRAITS = {
+  flowSection: roundFlowSection,
+  closedForm: 'circle closed form (Lamb)',
+  perforable: false,
+  endEffectBasis: 'circular cylinder',
+  caReferenceArea: 'π D²/4, D = outer diameter including coating',
+  wetWarning: () => null,
+} as const;

@@ -1,5 +1,5 @@
 /** Tube: a circular hollow section, outer diameter D and wall t (0 < t < D/2); may hold contents. */
-import { roundFlowSection, roundProps, ROUND_CA_REFERENCE } from './round';
+import { roundProps, ROUND_TRAITS } from './round';
 import { lerp } from './shear';
 import type { ShapeDescription } from './types';
 
@@ -26,10 +26,5 @@ export const TUBE: ShapeDescription<TubeSection> = {
   lerp: (a, b, t) => tubeSection(lerp(a.outerDiameterM, b.outerDiameterM, t), lerp(a.wallThicknessM, b.wallThicknessM, t)),
   depthM: (s) => s.outerDiameterM,
   solverBody: (s, c) => ({ shape: 'circle', diameterM: s.outerDiameterM + 2 * c }),
-  flowSection: roundFlowSection,
-  closedForm: 'circle closed form (Lamb)',
-  perforable: false,
-  endEffectBasis: 'circular cylinder',
-  caReferenceArea: ROUND_CA_REFERENCE,
-  wetWarning: () => null,
+  ...ROUND_TRAITS,
 };

@@ -3,6 +3,8 @@ import type { Case, MemberKind, UnitSystem } from '../../case';
 import type { DemoCase } from '../../forms';
 import { useModel, useServices } from '../state/context';
 import { blankCase, caseFromDemo } from '../../app/create-case';
+import type { Draft } from '../../store';
+import { DraftsPanel } from './DraftsPanel';
 import { FilePanel } from './FilePanel';
 import { NewCasePanel } from './NewCasePanel';
 import { OpenCaseBar } from './OpenCaseBar';
@@ -11,6 +13,7 @@ import { SavedList } from './SavedList';
 import { StatusLine, type Status } from './StatusLine';
 import { PersistenceNote, QuotaLine, StorageBanner } from './StorageStatus';
 import { useCaseList } from './use-case-list';
+import { sentence } from './words';
 import './cases.css';
 
 /**
@@ -37,6 +40,16 @@ export function CasesScreen() {
   }
 
   const openSaved = (c: Case) => open(c, 'editing', true, '#/member');
+  // Taken as this tab's own only once the user has decided about the open case (taking it replaces this tab's draft).
+  const openDraft = (d: Draft) =>
+    guard(() => {
+      if (!store) return;
+      void store.adoptDraft(d.key).then((r) => {
+        if (!r.ok) return setStatus({ text: sentence(r.message), tone: 'error' });
+        model.open(r.value.case, r.value.received ? 'received' : 'editing', false, r.value.baseRevision);
+        location.hash = r.value.received ? '#/results' : '#/member';
+      });
+    });
   const openNew = (kind: MemberKind, system: UnitSystem) => open(blankCase(kind, system), 'editing', false, '#/member');
   const openDemo = (demo: DemoCase) => open(caseFromDemo(demo), 'editing', false, '#/results');
   const openImported = (c: Case, message: string) => {
@@ -57,6 +70,7 @@ export function CasesScreen() {
       <OpenCaseBar state={state} model={model} store={store} setStatus={setStatus} onSaved={() => void afterChange()} />
       <StatusLine status={status} onDismiss={() => setStatus(null)} focusRef={statusRef} />
       <NewCasePanel onNew={openNew} onDemo={openDemo} />
+      {store && <DraftsPanel store={store} onOpen={openDraft} setError={(text) => setStatus({ text, tone: 'error' })} />}
       {store && (
         <section class="saved" aria-labelledby="saved-h">
           <h2 id="saved-h">Saved on this device</h2>

@@ -2,8 +2,10 @@
  * Saving and exporting the open case (the one in the model). Used by the Cases screen (before another case
  * replaces an unsaved one), by the received banner, and available to the Member screen's Save button.
  */
-import { sameCaseContent, type Case } from '../../case';
-import type { CaseStore, StoreErrorKind } from '../../store';
+import { CASE_LIMITS, cutText, sameCaseContent, type Case } from '../../case';
+import { newCaseId, revisionOf, type CaseStore, type StoreErrorKind } from '../../store';
+import { clearFallback } from '../state/draft-fallback';
+import { tabIdentity } from '../state/tab';
 import { CASE_FILE_MIME, caseFileName, caseToFileText } from '../../share/file';
 import { keyResultOf, type AppModel } from '../state/app-model';
 import { downloadText } from './download';
@@ -47,15 +49,61 @@ export async function saveOpenCase(store: CaseStore, model: AppModel): Promise<S
     void askPersistenceOnce(store);
     return { ok: true, saved: r.value.case, text: receivedOutcomeWords(r.value) };
   }
-  const r = await store.saveCase(doc);
-  if (!r.ok) return { ok: false, text: sentence(r.message), kind: r.kind };
+  // Based on the saved revision the edits started from: if another tab saved since, the store refuses and the
+  // user chooses (ConflictPrompt); nothing is overwritten silently.
+  const r = await store.saveCase(doc, { baseRevision: model.get().baseRevision });
+  if (!r.ok) {
+    if (r.kind === 'conflict' && model.get().doc === opened) model.setConflict({ theirs: r.theirs?.case ?? null, revision: r.theirs?.revision ?? 0 });
+    return { ok: false, text: sentence(r.message), kind: r.kind };
+  }
+  afterOwnSave(store, model, opened, r.value);
+  return { ok: true, saved: r.value, text: `Saved ${quoted(r.value)}.` };
+}
+
+function afterOwnSave(store: CaseStore, model: AppModel, opened: Case | null, saved: Case): void {
   if (model.get().doc === opened) {
-    model.markSaved(r.value);
+    model.markSaved(saved);
     // The draft held these same edits; a failure to clear it only means it is offered again later.
     void store.clearDraft();
+    clearFallback(tabIdentity().id);
   }
   void askPersistenceOnce(store);
-  return { ok: true, saved: r.value, text: `Saved ${quoted(r.value)}.` };
+}
+
+/** "Pile P7 (my version, 2026-12-03 09:12)": the name of the copy "Keep both" saves, within the name limit. */
+export function conflictCopyName(name: string, at: Date): string {
+  const two = (n: number) => String(n).padStart(2, '0');
+  const when = `${at.getFullYear()}-${two(at.getMonth() + 1)}-${two(at.getDate())} ${two(at.getHours())}:${two(at.getMinutes())}`;
+  const suffix = ` (my version, ${when})`;
+  return cutText(name === '' ? 'Case' : name, CASE_LIMITS.nameChars - suffix.length) + suffix;
+}
+
+/**
+ * The user's answer to a save conflict: 'mine' saves over the other version, 'theirs' opens the saved version
+ * (the edits here are dropped), 'both' saves the edits here as a copy with a new id and a name that says so,
+ * and leaves the other version as it is.
+ */
+export async function resolveConflict(store: CaseStore, model: AppModel, choice: 'mine' | 'theirs' | 'both'): Promise<SaveOutcome> {
+  const { conflict } = model.get();
+  const doc = docForSaving(model);
+  if (!doc || !conflict) return { ok: false, text: 'There is no save waiting for a choice.' };
+  const opened = model.get().doc;
+  if (choice === 'theirs') {
+    if (!conflict.theirs) return { ok: false, text: 'The other version cannot be read; keep yours, or keep both.' };
+    model.open(conflict.theirs, 'editing', true, conflict.revision);
+    void store.clearDraft();
+    clearFallback(tabIdentity().id);
+    return { ok: true, saved: conflict.theirs, text: `Opened the version saved elsewhere, ${quoted(conflict.theirs)}; your changes were dropped.` };
+  }
+  const toSave = choice === 'mine' ? doc : { ...doc, id: newCaseId(), name: conflictCopyName(doc.name, new Date()) };
+  const r = choice === 'mine' ? await store.saveCase(toSave) : await store.saveCase(toSave, { baseRevision: null });
+  if (!r.ok) return { ok: false, text: sentence(r.message), kind: r.kind };
+  afterOwnSave(store, model, opened, r.value);
+  return {
+    ok: true,
+    saved: r.value,
+    text: choice === 'mine' ? `Saved your version of ${quoted(r.value)} over the other one.` : `Kept both: yours is saved as ${quoted(r.value)}; the other version is unchanged.`,
+  };
 }
 
 /** Downloads a case as a `.wetmode.json` file; the message says what happened. */
@@ -92,6 +140,10 @@ export function afterRestored(model: AppModel, restored: Case): void {
 export function afterRenamed(model: AppModel, renamed: Case): void {
   const { doc, mode } = model.get();
   if (!doc || doc.id !== renamed.id || mode !== 'editing') return;
-  if (!model.unsaved()) model.markSaved({ ...doc, name: renamed.name, updatedAt: renamed.updatedAt });
-  else model.edit((d) => ({ ...d, name: renamed.name }));
+  if (!model.unsaved()) model.markSaved({ ...doc, name: renamed.name, updatedAt: renamed.updatedAt }, revisionOf(renamed));
+  else {
+    model.edit((d) => ({ ...d, name: renamed.name }));
+    // The rename was made here: the open edits now start from the renamed revision (no conflict with itself).
+    model.setBaseRevision(revisionOf(renamed));
+  }
 }

@@ -1,4 +1,4 @@
-/** Loads the saved list from the store and reloads it on demand (after every change made on this screen). */
+/** Loads the saved list from the store and reloads it on demand (after every change made on this screen) and when another tab changes it. */
 import { useCallback, useEffect, useRef, useState } from 'preact/hooks';
 import type { CaseList, CaseStore } from '../../store';
 import { sentence } from './words';
@@ -21,6 +21,10 @@ export function useCaseList(store: CaseStore | null): [ListState, () => Promise<
   }, [store]);
   useEffect(() => {
     void reload();
-  }, [reload]);
+    // Another tab saved, deleted or restored a case: read the list again.
+    return store?.onChange((c) => {
+      if (c.type !== 'drafts') void reload();
+    });
+  }, [reload, store]);
   return [state, reload];
 }

@@ -4,7 +4,7 @@ import { convertExcitationValues } from '../../forms/excitation';
 import { convertRangeTexts } from '../../forms/ranges';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
-import { saveOpenCase } from '../cases';
+import { saveOpenCase } from '../cases/open-case';
 import { kindOf } from '../../kinds/registry';
 
 /** Unit system toggle and Save, with what happened in words. */

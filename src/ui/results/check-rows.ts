@@ -55,8 +55,8 @@ export function checkRows(s: ScreeningResult, units: DisplayUnits, sources: Sour
       const critical =
         u !== null && Number.isFinite(u)
           ? qty(u, units.speed)
-          : c.resonantShaftRpm !== undefined
-            ? `${plain(c.resonantShaftRpm, "", 3)} rpm shaft`
+          : c.resonantShaftHz !== undefined
+            ? `${plain(c.resonantShaftHz * 60, "", 3)} rpm shaft`
             : '—';
       rows.push({
         mode: m.modeIndex + 1,

@@ -4,6 +4,9 @@ import { runBeforeUpdate } from './before-update';
 
 const OFFLINE_SHOWN_KEY = 'wetmode.offlineReadyShown';
 
+/** True once the user of this tab tapped "Update now": only then does this tab reload when the new version takes over. */
+let acceptedHere = false;
+
 /**
  * Service-worker status, quietly: "ready to work offline" once after the first install, and a prompt
  * when a new version is waiting. The update happens only when the user accepts, after drafts are saved.
@@ -14,7 +17,14 @@ export function UpdatePrompt() {
     offlineReady: [offlineReady, setOfflineReady],
     needRefresh: [needRefresh, setNeedRefresh],
     updateServiceWorker,
-  } = useRegisterSW({ immediate: import.meta.env.PROD });
+  } = useRegisterSW({
+    immediate: import.meta.env.PROD,
+    // When the new version takes control (after "Update now" in any tab), only the tab where the user accepted
+    // reloads. The others keep their prompt and their open case until their user says so (see acceptedHere).
+    onNeedReload: () => {
+      if (acceptedHere) location.reload();
+    },
+  });
   const [showOffline, setShowOffline] = useState(false);
   const [error, setError] = useState<string | null>(null);
 
@@ -38,12 +48,14 @@ export function UpdatePrompt() {
   async function accept() {
     try {
       await runBeforeUpdate();
-      // On the very first visit the page is not yet controlled: the new worker is already active (nothing
-      // waits), so a plain reload is what brings the new version in.
-      if (!navigator.serviceWorker?.controller) {
+      // Nothing waits when the page is not yet controlled (the very first visit: the new worker is already
+      // active) or when another tab already let the new version in: a plain reload brings it in.
+      const waiting = (await navigator.serviceWorker?.getRegistration())?.waiting;
+      if (!navigator.serviceWorker?.controller || !waiting) {
         location.reload();
         return;
       }
+      acceptedHere = true;
       await updateServiceWorker(true);
     } catch (e) {
       setError(`Update not applied: your work could not be saved first (${e instanceof Error ? e.message : String(e)}).`);

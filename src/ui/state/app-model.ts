@@ -11,7 +11,8 @@ import type { Case, KeyResult } from '../../case';
 import { sameCaseContent } from '../../case';
 import type { MemberBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
-import { readCase } from '../../app/read-case';
+import { readCaseOnDemand } from './read-on-demand';
+import { revisionOf } from '../../store';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
 import { CASE_ADVICE, solverFailureWords } from './solver-words';
@@ -38,6 +39,18 @@ export interface ModelState {
   solverMessage: string | null;
   /** Draft or save problem in words, if any. */
   storageMessage: string | null;
+  /** Revision of the saved copy the open case started from (null: never saved on this device, as far as we know). */
+  baseRevision: number | null;
+  /** A save refused because another tab or window saved the case meanwhile: the choice waiting for the user. */
+  conflict: Conflict | null;
+  /** What another tab did to the open case's saved copy, in words (null when nothing). */
+  elsewhere: string | null;
+}
+
+/** The saved version found when a save was refused (null when that record cannot be read) and its revision. */
+export interface Conflict {
+  theirs: Case | null;
+  revision: number;
 }
 
 export interface Solver {
@@ -45,7 +58,7 @@ export interface Solver {
 }
 
 export interface DraftSink {
-  saveDraft(c: Case): Promise<{ ok: boolean; message?: string }>;
+  saveDraft(c: Case, baseRevision: number | null, received: boolean): Promise<{ ok: boolean; message?: string }>;
 }
 
 /** What decides the results: the member and resonance inputs and the unit system (not name, tag or note). */
@@ -73,6 +86,9 @@ export class AppModel {
     computing: false,
     solverMessage: null,
     storageMessage: null,
+    baseRevision: null,
+    conflict: null,
+    elsewhere: null,
   };
   private listeners = new Set<() => void>();
   private draftTimer: ReturnType<typeof setTimeout> | null = null;
@@ -101,10 +117,28 @@ export class AppModel {
     for (const fn of this.listeners) fn();
   }
 
-  /** Opens a case: `saved` says whether this exact content is already on the device. */
-  open(doc: Case, mode: CaseMode, saved: boolean): void {
-    this.set({ doc, mode, saved: saved ? doc : null, results: null, solverMessage: null, storageMessage: null });
+  /**
+   * Opens a case: `saved` says whether this exact content is already on the device; `baseRevision` is the
+   * revision of the saved copy it starts from (by default the one the store read it at, when saved).
+   */
+  open(doc: Case, mode: CaseMode, saved: boolean, baseRevision: number | null = saved ? revisionOf(doc) : null): void {
+    this.set({ doc, mode, saved: saved ? doc : null, results: null, solverMessage: null, storageMessage: null, baseRevision, conflict: null, elsewhere: null });
     this.recompute();
+  }
+
+  /** A save was refused because the case was saved elsewhere meanwhile (null: the choice was made). */
+  setConflict(conflict: Conflict | null): void {
+    this.set({ conflict });
+  }
+
+  /** Says what another tab did to the open case (null to clear). */
+  setElsewhere(text: string | null): void {
+    this.set({ elsewhere: text });
+  }
+
+  /** The open case's edits now start from this saved revision (its own rename made on the Cases list). */
+  setBaseRevision(revision: number | null): void {
+    this.set({ baseRevision: revision });
   }
 
   /** True when the open case has changes not saved as a case (name, note and inputs all count). */
@@ -113,8 +147,8 @@ export class AppModel {
     return !!doc && (!saved || !sameCaseContent(doc, saved));
   }
 
-  markSaved(doc: Case): void {
-    this.set({ doc, saved: doc, mode: 'editing' });
+  markSaved(doc: Case, revision: number | null = revisionOf(doc)): void {
+    this.set({ doc, saved: doc, mode: 'editing', baseRevision: revision ?? this.state.baseRevision, conflict: null, elsewhere: null });
   }
 
   /** Applies an edit to the open case; a received case becomes editable only through saving. */
@@ -142,13 +176,17 @@ export class AppModel {
     return !!doc && !!results && !computing && results.forKey === contentKey(doc);
   }
 
-  /** Saves the draft now (before an app update, or when the page is hidden). */
-  async flushDraft(): Promise<void> {
+  /**
+   * Saves the draft now (when the page is hidden). `everyCase`: before an app update, any open case is kept —
+   * a received or imported one too, marked so it reopens as received — so the update reopens it.
+   */
+  async flushDraft(options: { everyCase?: boolean } = {}): Promise<void> {
     if (this.draftTimer !== null) clearTimeout(this.draftTimer);
     this.draftTimer = null;
-    const { doc, mode } = this.state;
-    if (!doc || mode !== 'editing' || !this.drafts) return;
-    const r = await this.drafts.saveDraft(doc);
+    const { doc, mode, baseRevision } = this.state;
+    if (!doc || !this.drafts || (mode !== 'editing' && !options.everyCase)) return;
+    const r = await this.drafts.saveDraft(doc, baseRevision, mode === 'received');
+    if (!r.ok && options.everyCase) throw new Error(r.message ?? 'storage refused it');
     if (!r.ok) this.set({ storageMessage: `Draft not saved: ${r.message ?? 'storage refused it'}` });
     else if (this.state.storageMessage?.startsWith('Draft not saved')) this.set({ storageMessage: null });
   }
@@ -162,13 +200,17 @@ export class AppModel {
   private recompute(): void {
     const { doc } = this.state;
     if (!doc) return;
-    const reading = readCase(doc);
+    const reading = readCaseOnDemand(doc, () => this.recompute(), (m) => this.set({ solverMessage: m }));
+    if (!reading) return; // read again once the unit reader has loaded
     this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors });
     if (!reading.ok) return; // last good results stay, marked out of date
     const key = contentKey(doc);
     const build = reading.build;
     this.set({ computing: true });
-    void this.solver.request({ op: 'case', model: build.model, excitation: reading.excitation }).then((ans) => {
+    void this.solver
+      .request({ op: 'case', model: build.model, excitation: reading.excitation })
+      .catch((e: unknown): Answer<CaseAnswer> => ({ status: 'crashed', message: e instanceof Error ? e.message : String(e) }))
+      .then((ans) => {
       if (ans.status === 'superseded') return;
       if (ans.status === 'done') {
         const current = this.state.doc && contentKey(this.state.doc) === key;

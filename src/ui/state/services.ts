@@ -4,7 +4,8 @@
  */
 import { SolverClient, type WorkerLike } from '../../worker/solver-client';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
-import { openStore, type CaseStore } from '../../store';
+import { openStore, revisionOf, SET_ASIDE_TAB, type CaseStore, type Draft } from '../../store';
+import type { FallbackDraft } from './draft-fallback';
 import { caseFromDemo } from '../../app/create-case';
 import { sameCaseContent, type Case } from '../../case';
 import { AppModel } from './app-model';
@@ -12,12 +13,16 @@ import type { SectionAnswer, SectionRequest } from '../../worker/solve-section';
 import { SectionModel } from '../section/section-model';
 import type { SectionSolver } from '../section/section-solves';
 import { DEMO_CASES } from '../../kinds/registry';
+import { loadUnitReaderAfterFirstAnswer } from './read-on-demand';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
     () => new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
   );
-  return new AppModel(client);
+  client.start(); // the worker loads while the device store opens
+  const model = new AppModel(client);
+  loadUnitReaderAfterFirstAnswer(model);
+  return model;
 }
 
 /** The energy check of eight bodies takes about 9 s on the development machine; allow a slow tablet well beyond that. */
@@ -39,27 +44,63 @@ export function createSectionModel(solver: SectionSolver): SectionModel {
 
 export type StoreOpening = { store: CaseStore; message: null; retryable: false } | { store: null; message: string; retryable: boolean };
 
-export async function openDeviceStore(): Promise<StoreOpening> {
+export async function openDeviceStore(tabId?: string): Promise<StoreOpening> {
   if (typeof indexedDB === 'undefined') return { store: null, message: 'This browser offers no storage for cases here. Links and files still work.', retryable: false };
-  const r = await openStore();
+  const r = await openStore(undefined, { tabId });
   // Blocked by another tab, closed under us, or upgraded by a newer Wetmode: a reload (after closing other tabs) fixes it.
   return r.ok ? { store: r.value, message: null, retryable: false } : { store: null, message: r.message, retryable: r.kind === 'blocked' || r.kind === 'closed' || r.kind === 'newer-database' };
 }
 
+/** Merges the drafts tabs left in localStorage as they closed into the store (newer wins), then removes them. */
+export async function mergeFallbacks(store: CaseStore, fallbacks: readonly FallbackDraft[], clear: (tab: string) => void): Promise<void> {
+  for (const f of fallbacks) {
+    const r = await store.mergeDraft(f.tab, f.case as Case, f.savedAt, f.baseRevision, f.received);
+    // Written or older than the database's: either way the copy has done its work. A copy the store refuses
+    // (not a readable case) is dropped too; it can only come from a damaged localStorage entry.
+    if (r.ok || r.kind === 'invalid-case') clear(f.tab);
+  }
+}
+
+export interface FirstCase {
+  doc: Case;
+  mode: 'editing' | 'received';
+  saved: boolean;
+  baseRevision: number | null;
+}
+
+async function fromDraft(store: CaseStore, draft: Draft): Promise<FirstCase> {
+  const mode = draft.received ? 'received' : 'editing';
+  const saved = await store.getCase(draft.case.id);
+  const same = mode === 'editing' && saved.ok && sameCaseContent(saved.value, draft.case);
+  return { doc: draft.case, mode, saved: same, baseRevision: same && saved.ok ? revisionOf(saved.value) : draft.baseRevision };
+}
+
 /**
- * What to open at start: the draft if there is one (never lose work), else — on a device with no saved
- * cases — the demo pile, so a first look shows a real answer; else nothing (the Cases list).
+ * What to open at start. This tab's own draft first (a reload or an update in this tab). A new tab takes the
+ * newest draft of a tab that was closed — a surveyor who closed the tab and opens the app again expects to find
+ * the work where they left it; other closed tabs' drafts are offered on the Cases screen. Else, on a device with
+ * no saved cases, the demo pile (a first look shows a real answer); else nothing (the Cases list).
+ * Never throws: a draft or list that cannot be read is passed over (and listed on the Cases screen).
  */
-export async function firstCase(store: CaseStore | null): Promise<{ doc: Case; saved: boolean } | null> {
-  if (store) {
-    const draft = await store.loadDraft();
-    if (draft.ok && draft.value) {
-      const saved = await store.getCase(draft.value.case.id);
-      const same = saved.ok && sameCaseContent(saved.value, draft.value.case);
-      return { doc: draft.value.case, saved: same };
+export async function firstCase(store: CaseStore | null, fresh = false, liveTabs: Set<string> | null = null): Promise<FirstCase | null> {
+  const demo = (): FirstCase => ({ doc: caseFromDemo(DEMO_CASES[0]), mode: 'editing', saved: false, baseRevision: null });
+  if (!store) return demo();
+  try {
+    const own = await store.loadDraft();
+    if (own.ok && own.value) return await fromDraft(store, own.value);
+    if (fresh && liveTabs) {
+      const all = await store.listDrafts();
+      for (const d of all.ok ? all.value.drafts : []) {
+        // Set-aside drafts were left on purpose (or by a link opened over them): offered on the Cases screen only.
+        if (liveTabs.has(d.tab) || d.tab === SET_ASIDE_TAB) continue;
+        const taken = await store.adoptDraft(d.key);
+        if (taken.ok) return await fromDraft(store, taken.value);
+      }
     }
     const list = await store.listCases();
     if (list.ok && (list.value.cases.length > 0 || list.value.unreadable.length > 0)) return null;
+    return demo();
+  } catch {
+    return null;
   }
-  return { doc: caseFromDemo(DEMO_CASES[0]), saved: false };
 }

@@ -12,7 +12,7 @@ describe('case verdict and result contents', () => {
     // Mode 2 at 0.1 Hz with U = 0.5, D = 1: V_R = 5, inside cross-flow 3–16 (DNV-RP-C205 §9).
     const input = pileCase(3, 0.5, {
       modes: [linearMode(3), linearMode(11), linearMode(0.1)],
-      machinery: [{ label: 'fan F-2', shaftSpeedRpm: 600, shaftOrders: [1] }],
+      machinery: [{ label: 'fan F-2', shaftSpeedHz: 10, shaftOrders: [1] }],
     });
     const r = screenResonance(input);
     expect(r.modes.map((m) => m.verdict)).toEqual(['clear', 'close', 'inside-band']);
@@ -25,10 +25,10 @@ describe('case verdict and result contents', () => {
     // Mode 0: 5 % from the 10 Hz line; mode 1: 15 % from it; both close.
     const twoClose = pileCase(10.5, 0, {
       modes: [linearMode(11.5), linearMode(10.5)],
-      machinery: [{ shaftSpeedRpm: 600, shaftOrders: [1] }],
+      machinery: [{ shaftSpeedHz: 10, shaftOrders: [1] }],
     });
     expect(screenResonance(twoClose).driver).toMatchObject({ modeIndex: 1 });
-    const same = pileCase(10.5, 0, { modes: [linearMode(10.5), linearMode(10.5)], machinery: [{ shaftSpeedRpm: 600, shaftOrders: [1] }] });
+    const same = pileCase(10.5, 0, { modes: [linearMode(10.5), linearMode(10.5)], machinery: [{ shaftSpeedHz: 10, shaftOrders: [1] }] });
     expect(screenResonance(same).driver).toMatchObject({ modeIndex: 0 });
   });
 
@@ -92,7 +92,7 @@ describe('case verdict and result contents', () => {
         dampingRatio: rnd() < 0.2 ? 0 : 0.02 * rnd(),
         stemFrequencyRatioScreen: rnd() < 0.5,
         waves: { periodMinS: 2 + 3 * rnd(), periodMaxS: 6 + 10 * rnd() },
-        machinery: [{ shaftSpeedRpm: 100 + 3000 * rnd(), bladeCount: 3 + Math.floor(5 * rnd()) }],
+        machinery: [{ shaftSpeedHz: (100 + 3000 * rnd()) / 60, bladeCount: 3 + Math.floor(5 * rnd()) }],
       };
       walk(screenResonance(input), `case ${t}`);
     }
@@ -100,7 +100,7 @@ describe('case verdict and result contents', () => {
   });
 
   it('does not change its input (the UI keeps the case object)', () => {
-    const input = pileCase(0.5, 1.0, { machinery: [{ shaftSpeedRpm: 600 }], limits: { separationMargin: { value: 0.15 } } });
+    const input = pileCase(0.5, 1.0, { machinery: [{ shaftSpeedHz: 10 }], limits: { separationMargin: { value: 0.15 } } });
     const before = JSON.stringify(input);
     screenResonance(input);
     expect(JSON.stringify(input)).toBe(before);

@@ -12,7 +12,7 @@ describe('validation of typed input', () => {
     ['non-finite density', base({ liquidDensityKgPerM3: NaN }), RangeError, 'liquidDensityKgPerM3 must be a finite number > 0, got NaN'],
     ['no bodies', base({ bodies: [] }), RangeError, 'bodies must be a non-empty array, got an empty array'],
     ['too many bodies', base({ bodies: Array.from({ length: 25 }, (_, k) => circle(0.1, [k, 0])) }), RangeError, 'bodies may hold at most 24 bodies, got 25'],
-    ['bad panel count', base({ panelsPerBody: 10 }), RangeError, 'panelsPerBody must be an integer from 16 to 4096, got 10'],
+    ['bad panel count', base({ panelsPerBody: 10 }), RangeError, 'panelsPerBody must be an integer from 16 to 1024, got 10'],
     ['zero diameter', base({ bodies: [circle(0)] }), RangeError, 'bodies[0].diameterM must be a finite number > 0, got 0'],
     ['infinite centre', base({ bodies: [circle(0.5, [Infinity, 0])] }), RangeError, 'bodies[0].centerM[0] must be a finite number, got Infinity'],
     ['negative rectangle width', base({ bodies: [{ shape: 'rectangle', widthM: -0.2, heightM: 0.1 }] }), RangeError, 'bodies[0].widthM must be a finite number > 0, got -0.2'],
@@ -25,7 +25,7 @@ describe('validation of typed input', () => {
     ['zero plate thickness', base({ bodies: [{ shape: 'plate', widthM: 1, thicknessM: 0 }] }), RangeError, 'bodies[0].thicknessM must be a finite number > 0, got 0'],
     ['non-finite ellipse angle', base({ bodies: [{ shape: 'ellipse', widthM: 1, heightM: 0.5, angleDeg: NaN }] }), RangeError, 'bodies[0].angleDeg must be a finite number, got NaN'],
     ['unknown shape', base({ bodies: [{ shape: 'hexagon' } as never] }), TypeError, 'bodies[0].shape must be one of circle, rectangle, ellipse, plate, polygon, got "hexagon"'],
-    ['polygon of two points', base({ bodies: [{ shape: 'polygon', pointsM: [[0, 0], [1, 0]] }] }), RangeError, 'bodies[0].pointsM must list at least 3 points [x, y], got 2 points'],
+    ['polygon of two points', base({ bodies: [{ shape: 'polygon', pointsM: [[0, 0], [1, 0]] }] }), RangeError, 'bodies[0].pointsM must list from 3 to 256 points [x, y], got 2 points'],
     [
       'polygon with a repeated point',
       base({ bodies: [{ shape: 'polygon', pointsM: [[0, 0], [1, 0], [1, 0], [0, 1]] }] }),

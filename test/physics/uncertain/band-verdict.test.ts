@@ -14,7 +14,7 @@ function screenAt(fHz: number) {
     zones: [],
     flowSpeedMPerS: 0,
     effectiveMassKgPerM: 100,
-    machinery: [{ label: 'pump', shaftSpeedRpm: 600, shaftOrders: [1] }],
+    machinery: [{ label: 'pump', shaftSpeedHz: 10, shaftOrders: [1] }],
   };
   return screenResonance(input);
 }
@@ -53,7 +53,7 @@ describe('verdict over the band', () => {
     if (!out.ok) throw new Error(out.message);
     const f1 = out.band.likely.dry.frequenciesHz[0];
     const lineHz = f1 / 1.25;
-    const s = screenBand(model, out.band, { flowSpeedMPerS: 0, machinery: [{ label: 'fan', shaftSpeedRpm: 60 * lineHz, shaftOrders: [1] }] });
+    const s = screenBand(model, out.band, { flowSpeedMPerS: 0, machinery: [{ label: 'fan', shaftSpeedHz: lineHz, shaftOrders: [1] }] });
     if (!s.ok) throw new Error(s.message);
     const c = machineCheck(s.verdict);
     expect(c.modeIndex).toBe(0);

@@ -63,7 +63,7 @@ describe('results as CSV rows', () => {
 
   it('keep a name that looks like a formula from running in a spreadsheet', () => {
     const csv = resultsToCsv(resultCsvRows({ ...pile, name: '=HYPERLINK("http://x")' }, null, AT));
-    expect(csv).toContain(`Case,"'=HYPERLINK(""http://x"")"\r\n`);
+    expect(csv).toContain(`"Case","'=HYPERLINK(""http://x"")"\r\n`);
   });
 
   it('round numbers to six significant figures and leave non-finite values empty', () => {

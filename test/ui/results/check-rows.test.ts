@@ -11,7 +11,7 @@ const si = displayUnits('si');
 
 // Standard pile, f = 0.5 Hz, U = 1.5 m/s, D = 1 m; waves 4–12 s; a pump at 1200 rpm, 1× only.
 const withWavesAndPump = () =>
-  pileScreening({ waves: { periodMinS: 4, periodMaxS: 12 }, machinery: [{ label: 'pump', shaftSpeedRpm: 1200, shaftOrders: [1] }] });
+  pileScreening({ waves: { periodMinS: 4, periodMaxS: 12 }, machinery: [{ label: 'pump', shaftSpeedHz: 20, shaftOrders: [1] }] });
 
 describe('resonance checks as a table', () => {
   it('gives each check its compared frequency, band, signed margin and critical speed', () => {

@@ -48,7 +48,7 @@ describe('results summary in words', () => {
 
   it('falls back to the lowest onset of any shedding check when a machine drives the verdict', () => {
     // No flow: shedding cannot reach the mode (margin null, clear); a pump at 30 rpm, 1× = 0.5 Hz = f, is on its line.
-    const scr = pileScreening({ flowSpeedMPerS: 0, machinery: [{ label: 'pump', shaftSpeedRpm: 30, shaftOrders: [1] }] });
+    const scr = pileScreening({ flowSpeedMPerS: 0, machinery: [{ label: 'pump', shaftSpeedHz: 0.5, shaftOrders: [1] }] });
     const d = drivingCheck(scr)!;
     expect(d.check.kind).toBe('machinery');
     const low = lowestOnset(scr)!;
