@@ -4,6 +4,7 @@ import { kindOf } from '../../kinds/registry';
 import { rangesOf } from '../../kinds/ranges-registry';
 import type { AppModel } from '../state/app-model';
 import { allRangesOff, withDefaultRanges } from './ranges-edit';
+import { withUnitReader } from './with-units';
 
 /**
  * Ranges on the uncertain inputs in one line: how many are on, the trade's default ranges in one tap, and all
@@ -19,7 +20,7 @@ export function RangesBar({ doc, model, disabled }: { doc: Case; model: AppModel
         <strong>Ranges on uncertain inputs</strong>: {on === 0 ? 'none yet' : `${on} on`}. Give a low and a high value beside the likely one to see the frequency band, what drives it and the verdict over the band.
       </p>
       <div class="toolbar">
-        <button type="button" class="btn" disabled={disabled} onClick={() => model.edit(withDefaultRanges)}>Use the default ranges</button>
+        <button type="button" class="btn" disabled={disabled} onClick={() => withUnitReader(() => model.edit(withDefaultRanges))}>Use the default ranges</button>
         {on > 0 && <button type="button" class="btn" disabled={disabled} onClick={() => model.edit(allRangesOff)}>Switch all ranges off</button>}
       </div>
     </div>
