@@ -2,7 +2,7 @@
  * "Same case" for received links: what the user entered (name, tag, note, kind, units and every value as typed).
  * Times, the app version and the key result are left out: they change on save or are worked out from the rest.
  */
-import type { Case, EnteredValues } from './types';
+import type { Case, EnteredRanges, EnteredValues } from './types';
 
 function sameValues(a: EnteredValues, b: EnteredValues): boolean {
   const ka = Object.keys(a);
@@ -11,11 +11,18 @@ function sameValues(a: EnteredValues, b: EnteredValues): boolean {
   return ka.every((k) => Object.prototype.hasOwnProperty.call(b, k) && a[k] === b[k]);
 }
 
+/** Ranges compare as entered; absent and empty are the same. */
+function sameRanges(a: EnteredRanges | undefined, b: EnteredRanges | undefined): boolean {
+  const flat = (r: EnteredRanges | undefined): EnteredValues =>
+    Object.fromEntries(Object.entries(r ?? {}).map(([k, v]) => [k, JSON.stringify([v.low, v.high, v.on])]));
+  return sameValues(flat(a), flat(b));
+}
+
 /** True when two cases hold the same entered content (ids are not compared: the caller decides on identity). */
 export function sameCaseContent(a: Case, b: Case): boolean {
   return (
     a.name === b.name && a.tag === b.tag && a.note === b.note && a.kind === b.kind && a.unitSystem === b.unitSystem &&
-    sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation)
+    sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation) && sameRanges(a.ranges, b.ranges)
   );
 }
 

@@ -20,6 +20,10 @@
  *   builtWith?: string }              // -> appVersion (absent in the earliest builds -> '0.0.0')
  * ```
  * Version 0 had no key result.
+ *
+ * Version 1 — as version 2 without `ranges` (ranges on uncertain inputs). Version 2 is version 1 plus an
+ * optional `ranges` field, so a version-1 case opens unchanged; the version moved so that an older app, which
+ * would silently drop the ranges, refuses a version-2 case instead ("made with a newer Wetmode").
  */
 import { fail, oneOf, own } from './fields';
 import { CASE_FORMAT, type MemberKind, type UnitSystem } from './types';
@@ -54,5 +58,10 @@ export function caseV0toV1(raw: Record<string, unknown>): Record<string, unknown
   };
 }
 
+/** Version 1 -> 2: nothing moves; version 2 only adds the optional `ranges`. */
+export function caseV1toV2(raw: Record<string, unknown>): Record<string, unknown> {
+  return { ...raw, schemaVersion: 2 };
+}
+
 /** The ladder: index n takes version n to n + 1. Its length is the current schema version. */
-export const CASE_STEPS: readonly CaseStep[] = [caseV0toV1];
+export const CASE_STEPS: readonly CaseStep[] = [caseV0toV1, caseV1toV2];

@@ -1,5 +1,5 @@
 /**
- * The Wetmode case, schema version 1: one shape for the app, the device store, links, files and the command line.
+ * The Wetmode case, schema version 2 (version 2 added `ranges`): one shape for the app, the device store, links, files and the command line.
  * Everything from outside (a record read back, a link, a file) reaches the app only through `parseCase`.
  * The schema is ours; its field list and limits are documented here and in `limits.ts`.
  */
@@ -11,7 +11,7 @@ import type { KindId as MemberKind } from '../kinds/registry-pure';
 export const CASE_FORMAT = 'wetmode-case';
 
 /** The schema version this build writes. Older versions are migrated step by step (`migrations.ts`). */
-export const CASE_SCHEMA_VERSION = 1;
+export const CASE_SCHEMA_VERSION = 2;
 
 /** The member kinds a case may hold: the registry's ids (src/kinds/registry-pure.ts). */
 export { KIND_IDS as MEMBER_KINDS, type KindId as MemberKind } from '../kinds/registry-pure';
@@ -25,6 +25,8 @@ export interface KeyResult {
   /** Lowest wet natural frequency, Hz (finite, > 0). */
   lowestWetFrequencyHz?: number;
   verdict?: Verdict;
+  /** The verdict over the band of the ranges on uncertain inputs, when ranges were on (schema version 2). */
+  bandVerdict?: Verdict;
 }
 
 /**
@@ -34,7 +36,19 @@ export interface KeyResult {
  */
 export type EnteredValues = Record<string, string>;
 
-/** A saved, shared or exported case (schema version 1). */
+/**
+ * A range on one uncertain input, as entered: low and high in the field's unit entry ("3.5 m", "50"), and
+ * whether it is used. Keys are member field names, as in `inputs`.
+ */
+export interface EnteredRange {
+  low: string;
+  high: string;
+  on: boolean;
+}
+
+export type EnteredRanges = Record<string, EnteredRange>;
+
+/** A saved, shared or exported case (schema version 2). */
 export interface Case {
   format: typeof CASE_FORMAT;
   schemaVersion: typeof CASE_SCHEMA_VERSION;
@@ -52,6 +66,8 @@ export interface Case {
   inputs: EnteredValues;
   /** Resonance-screening inputs as entered; may be empty. */
   excitation: EnteredValues;
+  /** Ranges on uncertain member inputs as entered (absent: none). */
+  ranges?: EnteredRanges;
   /** ISO 8601 date and time, e.g. "2026-03-14T09:21:05.123Z". */
   createdAt: string;
   /** ISO 8601 date and time of the last change. */

@@ -1,8 +1,9 @@
 /**
- * Checks a schema-version-1 object field by field and builds a fresh case from the checked values only:
+ * Checks a case object of the current schema (version 2: version 1 plus `ranges`) field by field and builds a fresh case from the checked values only:
  * unknown fields are dropped, nothing is shared with the input, keys come out in schema order.
  */
 import { CASE_LIMITS } from './limits';
+import { enteredRanges } from './ranges';
 import { CaseFieldError, enteredValues, fail, isPlainObject, isoDateTime, oneOf, own, text, uuid } from './fields';
 import { CASE_FORMAT, CASE_SCHEMA_VERSION, MEMBER_KINDS, UNIT_SYSTEMS, VERDICTS, type Case, type KeyResult } from './types';
 
@@ -24,7 +25,9 @@ function keyResult(value: unknown): KeyResult | undefined {
   }
   const v = own(value, 'verdict');
   if (v !== undefined) out.verdict = oneOf('keyResult.verdict', v, VERDICTS);
-  return out.lowestWetFrequencyHz === undefined && out.verdict === undefined ? undefined : out;
+  const bv = own(value, 'bandVerdict');
+  if (bv !== undefined) out.bandVerdict = oneOf('keyResult.bandVerdict', bv, VERDICTS);
+  return out.lowestWetFrequencyHz === undefined && out.verdict === undefined && out.bandVerdict === undefined ? undefined : out;
 }
 
 /** Validates a version-1 case object (format and version already checked by the caller). Throws CaseFieldError. */
@@ -48,6 +51,8 @@ export function validateV1(raw: Record<string, unknown>): Case {
         ? appVersion
         : fail('appVersion', `a version such as "0.1.0" (letters, digits, ".", "+", "-"; at most ${CASE_LIMITS.appVersionChars} characters)`, appVersion),
   };
+  const ranges = enteredRanges('ranges', own(raw, 'ranges'), ENTERED);
+  if (ranges) c.ranges = ranges;
   const kr = keyResult(own(raw, 'keyResult'));
   if (kr) c.keyResult = kr;
   return c;

@@ -13,7 +13,7 @@ export function splitRanges(raw: unknown): { member: unknown; ranges: unknown } 
   return { member, ranges };
 }
 
-function state(s: StateBand) {
+export function state(s: StateBand) {
   return {
     likelyHz: s.likelyHz,
     lowHz: s.lowHz,

@@ -1,7 +1,8 @@
 /**
  * `wetmode case FILE`: a saved or exported case file (our `.wetmode.json`), read through the same forms as
  * the app (units as typed), solved dry and wet, screened for resonance. Prints one JSON object: the case
- * name and tag, the member model used, frequencies, the verdict with every check, and the cautions.
+ * name and tag, the member model used, frequencies, the verdict with every check, the band over the ranges
+ * entered in the app (null when none is on) and the cautions.
  */
 import { caseFromFileText } from '../share';
 import { readCase, requestOf } from '../app/read-case';
@@ -9,6 +10,7 @@ import { solveCase } from '../app/solve-case';
 import { cautionLines } from '../text/cautions';
 import { toJson } from './json-out';
 import { plateCaseJson } from './plate-case-json';
+import { caseBandJson } from './case-band';
 
 function fieldMessages(errors: Record<string, string>): string {
   return Object.entries(errors)
@@ -52,6 +54,7 @@ export function runCaseCommand(inputText: string): string {
         }
       : null,
     resonanceNotRunBecause: answer.screening ? null : (answer.screeningError ?? (fieldMessages(reading.excitationErrors) || 'no resonance inputs')),
+    band: caseBandJson(c),
     model: reading.build.model,
     modelNotes: reading.build.notes,
     warnings: m.warnings,

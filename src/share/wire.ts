@@ -4,16 +4,20 @@
  *
  *   [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion]
  *
+ * Case schema 2 adds the ranges as a 13th element (an empty object when there are none); links written in the
+ * schema-1 layout (12 elements) still open.
+ *
  * Left out: `format` (implied by the link) and `keyResult` (the receiving app works the results out again, from
  * its own physics). The id travels so a received case can be recognised as one already saved.
  * A future case schema gets its own layout, told apart by the first element.
  */
-import { CASE_FORMAT, NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../case';
+import { CASE_FORMAT, CASE_SCHEMA_VERSION, NEWER_VERSION_MESSAGE, parseCase, type Case, type ParseCaseResult } from '../case';
 
 export const WIRE_LENGTH_V1 = 12;
+export const WIRE_LENGTH_V2 = 13;
 
 export function caseToWire(c: Case): unknown[] {
-  return [c.schemaVersion, c.id, c.name, c.tag, c.note, c.kind, c.unitSystem, c.inputs, c.excitation, c.createdAt, c.updatedAt, c.appVersion];
+  return [c.schemaVersion, c.id, c.name, c.tag, c.note, c.kind, c.unitSystem, c.inputs, c.excitation, c.createdAt, c.updatedAt, c.appVersion, c.ranges ?? {}];
 }
 
 /** What a case looks like after a trip through a link: the same, less `keyResult`. */
@@ -28,10 +32,10 @@ export function wireToCase(wire: unknown): ParseCaseResult {
     return { ok: false, message: 'it does not hold a case in the form Wetmode writes' };
   }
   const version = wire[0];
-  if (typeof version === 'number' && Number.isInteger(version) && version > 1) return { ok: false, message: NEWER_VERSION_MESSAGE };
-  if (version !== 1 || wire.length !== WIRE_LENGTH_V1) {
+  if (typeof version === 'number' && Number.isInteger(version) && version > CASE_SCHEMA_VERSION) return { ok: false, message: NEWER_VERSION_MESSAGE };
+  if (!((version === 1 && wire.length === WIRE_LENGTH_V1) || (version === 2 && wire.length === WIRE_LENGTH_V2))) {
     return { ok: false, message: 'it does not hold a case in the form Wetmode writes' };
   }
-  const [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion] = wire;
-  return parseCase({ format: CASE_FORMAT, schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion });
+  const [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges] = wire;
+  return parseCase({ format: CASE_FORMAT, schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges });
 }

@@ -8,7 +8,7 @@ import type { Case } from '../../src/case';
 export function demoCase(): Case {
   return {
     format: 'wetmode-case',
-    schemaVersion: 1,
+    schemaVersion: 2,
     id: '3f6c2a9e-8b41-4d7a-9c15-2e0b7d4f6a81',
     name: 'Pile B7 — east berth',
     tag: 'FH-JTY-B7',
@@ -41,7 +41,7 @@ export function demoCase(): Case {
 export function baffleCase(): Case {
   return {
     format: 'wetmode-case',
-    schemaVersion: 1,
+    schemaVersion: 2,
     id: '9b2d4e61-0c7f-4a38-b5e2-61d0f3a9c7b4',
     name: 'Baffle 2, day tank',
     tag: 'GRV-TK-02',

@@ -43,4 +43,20 @@ describe('wetmode case', () => {
     expect(code).toBe(1);
     expect(err.join('')).toContain('no such file');
   });
+
+  it('prints the band over the ranges entered in the app, by field and label, and refuses a range that does not read', () => {
+    const c = JSON.parse(readFileSync(EXAMPLE, 'utf8'));
+    expect(JSON.parse(runCaseCommand(JSON.stringify(c))).band).toBeNull();
+    c.ranges = { topMass: { low: '9', high: '15', on: true } };
+    const out = JSON.parse(runCaseCommand(JSON.stringify(c)));
+    expect(out.band.ok).toBe(true);
+    expect(out.band.ranges).toEqual([{ field: 'topMass', label: 'Top mass', low: 9000, likely: 12000, high: 15000 }]);
+    // A heavier top mass lowers the first mode (classical): the band holds the likely value and runs below it at 15 t.
+    expect(out.band.wet.lowHz[0]).toBeLessThan(out.wet.frequenciesHz[0]);
+    expect(out.band.wet.highHz[0]).toBeGreaterThan(out.wet.frequenciesHz[0]);
+    expect(out.band.sensitivity[0]).toMatchObject({ field: 'topMass', label: 'Top mass', direction: 'down' });
+    expect(['clear', 'close', 'inside-band']).toContain(out.band.resonance.bandVerdict);
+    c.ranges.topMass.low = '13';
+    expect(() => runCaseCommand(JSON.stringify(c))).toThrow(/topMass: top mass \(12 t\) lies outside its range 13 t to 15 t/);
+  });
 });

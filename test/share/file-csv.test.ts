@@ -10,7 +10,7 @@ describe('case files', () => {
 
   it('are indented JSON in our own schema, ending with a line break', () => {
     const text = caseToFileText(demoCase());
-    expect(text.startsWith('{\n  "format": "wetmode-case",\n  "schemaVersion": 1,')).toBe(true);
+    expect(text.startsWith('{\n  "format": "wetmode-case",\n  "schemaVersion": 2,')).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
   });
 

@@ -172,7 +172,7 @@ describe('broken links get a clear message and no case', () => {
 
   it('a link from a newer case schema asks for an update', async () => {
     const wire = caseToWire(demoCase());
-    wire[0] = 2;
+    wire[0] = 3;
     expect(await decodeCasePayload(jsonPayload(wire))).toEqual({ ok: false, message: NEWER_VERSION_MESSAGE });
   });
 
@@ -219,5 +219,21 @@ describe('broken links get a clear message and no case', () => {
       ok: false,
       message: 'this link holds a case this Wetmode cannot read: it does not hold a case in the form Wetmode writes',
     });
+  });
+});
+
+describe('ranges travel in a link', () => {
+  it('a case with ranges comes back with the same ranges, and a schema-1 link (12 elements) still opens', async () => {
+    const withRanges = { ...demoCase(), ranges: { fixityDepth: { low: '2.1', high: '4.9', on: true }, topMass: { low: '2', high: '3', on: false } } };
+    const back = await decodeCasePayload(await encodeCasePayload(withRanges));
+    if (!back.ok) throw new Error(back.message);
+    expect(back.value.ranges).toEqual(withRanges.ranges);
+    const { ranges: _r, ...plain } = withRanges;
+    const v1 = caseToWire(plain).slice(0, 12);
+    v1[0] = 1;
+    const old = await decodeCasePayload(jsonPayload(v1));
+    if (!old.ok) throw new Error(old.message);
+    expect(old.value.ranges).toBeUndefined();
+    expect(old.value.inputs).toEqual(plain.inputs);
   });
 });

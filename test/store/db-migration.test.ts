@@ -35,7 +35,7 @@ const v1: PastLayout = {
     const migratedId = (v0Case().id as string).toLowerCase();
     expect(list.cases.map((c) => c.id).sort()).toEqual([demoCase().id, migratedId].sort());
     expect(list.cases.find((c) => c.id === demoCase().id)).toEqual(demoCase());
-    expect(list.cases.find((c) => c.id === migratedId)).toMatchObject({ schemaVersion: 1, name: 'Level probe, settling tank', kind: 'stem', unitSystem: 'us' });
+    expect(list.cases.find((c) => c.id === migratedId)).toMatchObject({ schemaVersion: 2, name: 'Level probe, settling tank', kind: 'stem', unitSystem: 'us' });
     expect(list.unreadable.map((u) => u.key)).toEqual(['junk-7']);
     // The one draft of old versions is kept for the tab "earlier" (offered in the Cases screen, not this tab's own).
     expect(unwrap(await store.loadDraft())).toBeNull();
@@ -46,11 +46,11 @@ const v1: PastLayout = {
     const token = unwrap(await store.deleteCase(demoCase().id));
     expect(unwrap(await store.undoDelete(token))?.id).toBe(demoCase().id);
     store.close();
-    // On disk: the old record was rewritten at schema 1 under the lower-case key; the unreadable one kept as it was.
+    // On disk: the old record was rewritten at the current case schema under the lower-case key; the unreadable one kept as it was.
     const raw = await rawRecords(h.factory, 'cases');
     expect(raw.keys).not.toContain(v0Case().id);
     expect(raw.values).toContainEqual(junk);
-    expect(raw.values.find((v) => (v as { id: string }).id === migratedId)).toMatchObject({ schemaVersion: 1 });
+    expect(raw.values.find((v) => (v as { id: string }).id === migratedId)).toMatchObject({ schemaVersion: 2 });
   },
 };
 

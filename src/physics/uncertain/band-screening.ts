@@ -16,7 +16,7 @@ import type { Verdict } from '../excitation/verdict';
 import type { BandResult } from './band-types';
 import { type BandVerdict, judgeOverBand, type VerdictSwitch } from './band-verdict';
 import { brentZero } from './brent';
-import { rememberingSectionSolver } from './evaluate';
+import { type ModelAt, rememberingSectionSolver } from './evaluate';
 import { withNumbersAt } from './paths';
 
 export type BandScreeningOutcome = { ok: true; verdict: BandVerdict; screenings: number } | { ok: false; message: string };
@@ -26,7 +26,18 @@ function marginOf(c: CheckResult | null): number {
   return c === null || c.marginPercent === null ? 1e6 : c.marginPercent / 100;
 }
 
-export function screenBand(model: MemberModel, band: BandResult, excitation: CaseExcitation, options: { sectionSolver?: SectionSolver } = {}): BandScreeningOutcome {
+/**
+ * `modelAt` and `excitationAt` (optional) rebuild the member and its excitation at a setting of the ranged
+ * inputs, for a band from `parametricBand` whose inputs are not single model numbers; by default the numbers
+ * at the ranges' paths are set and the excitation is the same everywhere.
+ */
+export interface BandScreeningOptions {
+  sectionSolver?: SectionSolver;
+  modelAt?: ModelAt;
+  excitationAt?: (x: ArrayLike<number>) => CaseExcitation;
+}
+
+export function screenBand(model: MemberModel, band: BandResult, excitation: CaseExcitation, options: BandScreeningOptions = {}): BandScreeningOutcome {
   const solver = options.sectionSolver ?? rememberingSectionSolver();
   const paths = band.ranges.map((r) => r.path);
   const cache = new Map<string, ScreeningResult | string>();
@@ -36,11 +47,12 @@ export function screenBand(model: MemberModel, band: BandResult, excitation: Cas
     const hit = cache.get(key);
     if (hit !== undefined) return hit;
     screenings++;
-    const m = withNumbersAt(model, paths, x);
     let out: ScreeningResult | string;
     try {
+      const m = options.modelAt ? options.modelAt(x) : withNumbersAt(model, paths, x);
+      const ex = options.excitationAt ? options.excitationAt(x) : excitation;
       const solved = solveMember(m, { sectionSolver: solver });
-      out = solved.ok ? screenResonance(screeningInputFor(m, solved.result, excitation)) : solved.message;
+      out = solved.ok ? screenResonance(screeningInputFor(m, solved.result, ex)) : solved.message;
     } catch (e) {
       out = e instanceof Error ? e.message : String(e);
     }

@@ -16,9 +16,9 @@ import type { SectionSolver } from '../beam/section-bridge';
 import { solveMember } from '../beam/solve-member';
 import { parseMemberModel } from '../beam/validate';
 import type { AxisResult, BandMethod, BandOutcome, ModeBand, StateBand } from './band-types';
-import { type EvalFailure, gridShapes, MemberEvaluator, rememberingSectionSolver } from './evaluate';
+import { type EvalFailure, gridShapes, MemberEvaluator, type ModelAt, rememberingSectionSolver } from './evaluate';
 import { type Axis, axisValues, cornerDirections, crossedModes, type Direction, directionOf, disagree, FLAT_RTOL } from './monotone';
-import { type ResolvedRange, resolveRanges } from './ranges';
+import { checkParametricInputs, type ResolvedRange, resolveRanges } from './ranges';
 import { refineExtreme, sampleBox, type SearchTarget } from './search';
 import { sensitivityFromAxes } from './sensitivity';
 
@@ -43,7 +43,7 @@ export const ALL_CORNERS_UP_TO = 4;
 type State = 'dry' | 'wet';
 
 /** Solves along each input's axis through the likely setting. */
-function scanAxes(ev: MemberEvaluator, ranges: readonly ResolvedRange[], x0: number[], p0: number, shapes0: { dry: Float64Array; wet: Float64Array | null }, lengthM: number): Axis[] | EvalFailure {
+function scanAxes(ev: MemberEvaluator, ranges: readonly ResolvedRange[], x0: number[], p0: number, shapes0: { dry: Float64Array; wet: Float64Array | null }): Axis[] | EvalFailure {
   const modes = ev.store.modes;
   const hasWet = ev.store.hasWet;
   const axes: Axis[] = [];
@@ -63,7 +63,7 @@ function scanAxes(ev: MemberEvaluator, ranges: readonly ResolvedRange[], x0: num
       const e = ev.solve(x);
       if (!e.ok) return e;
       points.push(e.index);
-      shapes.push({ dry: gridShapes(e.result.dry, lengthM), wet: e.result.wet ? gridShapes(e.result.wet, lengthM) : null });
+      shapes.push(shapesOf(e.result));
     }
     const dirs = (state: State): Direction[] =>
       Array.from({ length: modes }, (_, j) => directionOf(points.map((p) => ev.store.frequency(p, state, j))));
@@ -84,6 +84,21 @@ function scanAxes(ev: MemberEvaluator, ranges: readonly ResolvedRange[], x0: num
     });
   }
   return axes;
+}
+
+/** Length of the member a result belongs to: its shapes run from z = 0 to the length. */
+function resultLengthM(r: MemberResult): number {
+  const z = r.dry.modes[0]?.shape.zM;
+  return z && z.length > 0 ? z[z.length - 1] : 1;
+}
+
+/**
+ * Mode shapes on the common grid along each setting's own length, so shapes compare by place along the member
+ * even where a ranged input (a fixity depth) changes the length.
+ */
+function shapesOf(r: MemberResult): { dry: Float64Array; wet: Float64Array | null } {
+  const L = resultLengthM(r);
+  return { dry: gridShapes(r.dry, L), wet: r.wet ? gridShapes(r.wet, L) : null };
 }
 
 /** Corner method or not, and why, for one mode of one state. */
@@ -112,6 +127,23 @@ function modeList(list: number[]): string {
 export function memberBand(input: MemberModel, rawRanges: unknown, options: BandOptions = {}): BandOutcome {
   const model = parseMemberModel(input);
   const ranges = resolveRanges(model, rawRanges);
+  return bandOver(model, ranges, undefined, options);
+}
+
+/**
+ * The band over inputs that are not single numbers of the model: each ranged input (named by `path`, any
+ * label) may drive several model numbers, and `modelAt(x)` builds the whole member at a setting x (values in
+ * range order). `model` is the member at the likely values (`modelAt` of the likely values). Throws RangeError
+ * naming the input for a non-finite end, low above high, a likely value outside its range, more than
+ * MAX_RANGED_INPUTS inputs, or an end at which the member is invalid.
+ */
+export function parametricBand(input: MemberModel, inputs: readonly ResolvedRange[], modelAt: ModelAt, options: BandOptions = {}): BandOutcome {
+  const model = parseMemberModel(input);
+  checkParametricInputs(inputs, modelAt);
+  return bandOver(model, inputs, modelAt, options);
+}
+
+function bandOver(model: MemberModel, ranges: readonly ResolvedRange[], modelAt: ModelAt | undefined, options: BandOptions): BandOutcome {
   const k = ranges.length;
   const maxSolves = options.maxSolves ?? DEFAULT_MAX_SOLVES;
   const needed = 1 + 4 * k + 2 ** k;
@@ -123,7 +155,7 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
     if (!out.ok) return out;
     likely = out.result;
   }
-  const ev = new MemberEvaluator(model, ranges.map((r) => r.path), likely, maxSolves, solver);
+  const ev = new MemberEvaluator(model, ranges.map((r) => r.path), likely, maxSolves, solver, modelAt);
   const modes = ev.store.modes;
   const hasWet = ev.store.hasWet;
   const states: State[] = hasWet ? ['dry', 'wet'] : ['dry'];
@@ -131,8 +163,7 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
   const x0 = ranges.map((r) => r.likely);
   const e0 = ev.solve(x0);
   if (!e0.ok) return e0;
-  const shapes0 = { dry: gridShapes(e0.result.dry, model.lengthM), wet: e0.result.wet ? gridShapes(e0.result.wet, model.lengthM) : null };
-  const axes = scanAxes(ev, ranges, x0, e0.index, shapes0, model.lengthM);
+  const axes = scanAxes(ev, ranges, x0, e0.index, shapesOf(e0.result));
   if (!Array.isArray(axes)) return axes;
 
   // Extremes over every stored setting so far, per state and mode.
@@ -272,7 +303,7 @@ export function memberBand(input: MemberModel, rawRanges: unknown, options: Band
   return {
     ok: true,
     band: {
-      ranges,
+      ranges: ranges.slice(),
       dry: stateBand('dry'),
       wet: hasWet ? stateBand('wet') : null,
       method: noneSampled ? 'corners' : allSampled ? 'sampled' : 'mixed',

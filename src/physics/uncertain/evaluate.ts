@@ -115,12 +115,25 @@ export function gridShapes(set: ModeSetResult, lengthM: number): Float64Array {
   return out;
 }
 
+/**
+ * The member at a setting of the ranged inputs (values in range order, SI). The default sets the numbers at
+ * the ranges' paths; a caller whose inputs each drive several model numbers (a form field such as a fixity
+ * depth, which moves the length and every landmark) rebuilds the whole model instead.
+ */
+export type ModelAt = (x: ArrayLike<number>) => MemberModel;
+
+/** The model with its mesh held at `elements` without refinement (a model that turns refinement off keeps its own). */
+export function withFixedMesh(model: MemberModel, elements: number): MemberModel {
+  const own = model.mesh;
+  return own?.refine === false ? model : { ...model, mesh: { ...own, initialElements: elements, refine: false } };
+}
+
 /** Solves the member at settings of the ranged inputs, within a budget of solves. */
 export class MemberEvaluator {
   readonly store: EvaluationStore;
   solves = 0;
   private readonly solver: SectionSolver;
-  private readonly fixed: MemberModel;
+  private readonly modelAt: ModelAt;
 
   constructor(
     model: MemberModel,
@@ -128,10 +141,16 @@ export class MemberEvaluator {
     likely: MemberResult,
     readonly maxSolves: number,
     sectionSolver?: SectionSolver,
+    modelAt?: ModelAt,
   ) {
     this.solver = sectionSolver ?? rememberingSectionSolver();
-    const own = model.mesh;
-    this.fixed = own?.refine === false ? model : { ...model, mesh: { ...own, initialElements: likely.mesh.elements, refine: false } };
+    const elements = likely.mesh.elements;
+    if (modelAt) {
+      this.modelAt = (x) => withFixedMesh(modelAt(x), elements);
+    } else {
+      const fixed = withFixedMesh(model, elements);
+      this.modelAt = (x) => withNumbersAt(fixed, paths, x);
+    }
     this.store = new EvaluationStore(paths.length, likely.modesRequested, likely.wet !== null);
   }
 
@@ -144,7 +163,7 @@ export class MemberEvaluator {
     this.solves++;
     let out;
     try {
-      out = solveMember(withNumbersAt(this.fixed, this.paths, x), { sectionSolver: this.solver });
+      out = solveMember(this.modelAt(x), { sectionSolver: this.solver });
     } catch (e) {
       return { ok: false, reason: 'invalid-input', message: this.where(x, e instanceof Error ? e.message : String(e)) };
     }

@@ -70,3 +70,34 @@ export function resolveRanges(model: MemberModel, raw: unknown): ResolvedRange[]
     return { path, low, high, likely };
   });
 }
+
+/**
+ * Checks inputs of a parametric band (`parametricBand`): names are labels, not paths, and `modelAt` builds the
+ * member at a setting. Throws RangeError naming the input.
+ */
+export function checkParametricInputs(inputs: readonly ResolvedRange[], modelAt: (x: ArrayLike<number>) => MemberModel): void {
+  if (inputs.length > MAX_RANGED_INPUTS) {
+    throw new RangeError(`ranges: at most ${MAX_RANGED_INPUTS} ranged inputs (2^${MAX_RANGED_INPUTS} = ${2 ** MAX_RANGED_INPUTS} corners), got ${inputs.length}; keep the ones that matter most`);
+  }
+  const seen = new Set<string>();
+  const likely = inputs.map((r) => r.likely);
+  inputs.forEach((r, i) => {
+    const name = `ranges[${i}] (${r.path})`;
+    for (const end of ['low', 'likely', 'high'] as const) {
+      if (!Number.isFinite(r[end])) throw new RangeError(`${name}: ${end} must be a finite number, got ${describe(r[end])}`);
+    }
+    if (r.low > r.high) throw new RangeError(`${name}: low ${r.low} is above high ${r.high}`);
+    if (r.likely < r.low || r.likely > r.high) throw new RangeError(`${name}: the likely value ${r.likely} lies outside [${r.low}, ${r.high}]`);
+    if (seen.has(r.path)) throw new RangeError(`${name}: this input is ranged twice`);
+    seen.add(r.path);
+    for (const end of ['low', 'high'] as const) {
+      const x = likely.slice();
+      x[i] = r[end];
+      try {
+        parseMemberModel(modelAt(x));
+      } catch (e) {
+        throw new RangeError(`${name} ${end} ${r[end]} makes the member invalid: ${e instanceof Error ? e.message : String(e)}`);
+      }
+    }
+  });
+}

@@ -50,6 +50,11 @@ export function CaseRow({ c, isOpen, edit, onEdit, onOpen, onDelete, onRename, o
               <VerdictBadge verdict={v.verdict} />
             </span>
           )}
+          {v.bandVerdict && (
+            <span class="case-verdict" data-testid="case-band-verdict">
+              <span class="case-result-label">over the ranges:</span> <VerdictBadge verdict={v.bandVerdict} />
+            </span>
+          )}
         </p>
       </div>
       <div class="case-actions">

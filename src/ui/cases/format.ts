@@ -71,6 +71,8 @@ export interface CaseRowView {
   /** "1.23 Hz", or null when the case was saved without results. */
   frequency: string | null;
   verdict: Verdict | null;
+  /** The verdict over the ranges on uncertain inputs, when one was kept. */
+  bandVerdict: Verdict | null;
   /** The frequency, "not computed" when no result was kept, "not kept" when only a verdict was. */
   resultText: string;
 }
@@ -87,6 +89,7 @@ export function caseRowView(c: Case): CaseRowView {
     updated: formatCaseDate(c.updatedAt),
     frequency,
     verdict,
+    bandVerdict: c.keyResult?.bandVerdict ?? null,
     resultText: frequency ?? (verdict === null ? 'not computed' : 'not kept'),
   };
 }

@@ -9,6 +9,7 @@ import { tabIdentity } from '../state/tab';
 import { CASE_FILE_MIME, caseFileName, caseToFileText } from '../../share/file';
 import { keyResultOf, type AppModel } from '../state/app-model';
 import { downloadText } from './download';
+import { existingBandModel } from '../state/band-context';
 import { askPersistenceOnce } from './persistence';
 import { quoted, receivedOutcomeWords, sentence } from './words';
 
@@ -20,7 +21,9 @@ export function docForSaving(model: Pick<AppModel, 'get' | 'resultsCurrent'>): C
   const { doc, results } = model.get();
   if (!doc) return null;
   const { keyResult: _old, ...rest } = doc;
-  const keyResult = model.resultsCurrent() ? keyResultOf(results) : undefined;
+  const kr = model.resultsCurrent() ? keyResultOf(results) : undefined;
+  const bandVerdict = kr ? existingBandModel(model)?.currentVerdict() : undefined;
+  const keyResult = kr && bandVerdict ? { ...kr, bandVerdict } : kr;
   return keyResult ? { ...rest, keyResult } : rest;
 }
 

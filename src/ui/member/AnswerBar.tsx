@@ -2,6 +2,7 @@ import type { ModelState } from '../state/app-model';
 import { answerFigures } from '../../app/answer-figures';
 import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
+import { AnswerBarBand } from './AnswerBarBand';
 
 /**
  * The answer in one line, kept in view at the bottom of the screen while the surveyor types (portrait and
@@ -25,6 +26,7 @@ export function AnswerBar({ state, stale }: { state: ModelState; stale: boolean 
             </span>
           )}
           {fig.verdict && <VerdictBadge verdict={fig.verdict} />}
+          <AnswerBarBand />
         </>
       ) : (
         <span>{a && !a.ok ? 'No answer: see the message above' : 'Fill in the member to see its frequencies'}</span>

@@ -11,6 +11,8 @@ import { MemberToolbar } from './MemberToolbar';
 import { QuickResults } from './QuickResults';
 import { AnswerBar } from './AnswerBar';
 import { kindOf } from '../../kinds/registry';
+import { MemberRange } from './MemberRange';
+import { RangesBar } from './RangesBar';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -50,7 +52,9 @@ export function MemberScreen() {
               onInput={(k, t) => model.setField(k, t)}
               idPrefix="m"
               moreLabel="More member details"
+              after={(f) => <MemberRange field={f} doc={doc} model={model} disabled={received} />}
             />
+            <RangesBar doc={doc} model={model} disabled={received} />
           </fieldset>
           <fieldset disabled={received}>
             <legend>What can drive it</legend>

@@ -1,6 +1,7 @@
 import { useState } from 'preact/hooks';
 import type { UnitSystem } from '../../forms';
 import { convertExcitationValues } from '../../forms/excitation';
+import { convertRangeTexts } from '../../forms/ranges';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
 import { saveOpenCase } from '../cases/open-case';
@@ -18,6 +19,7 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
       unitSystem: to,
       inputs: kindOf(d.kind).form.convertValues(d.inputs, d.unitSystem, to),
       excitation: convertExcitationValues(kindOf(d.kind).resonance, d.excitation, d.unitSystem, to),
+      ...(d.ranges ? { ranges: convertRangeTexts(kindOf(d.kind).form.fields, d.ranges, d.unitSystem, to) } : {}),
     }));
   };
   const save = async () => {

@@ -4,6 +4,7 @@ import { formatHz } from '../format/numbers';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { hashFor } from '../shell/router';
 import { MemberSectionLink } from '../section/MemberSectionLink';
+import { QuickBand } from './QuickBand';
 
 /** The answer beside the form: lowest dry and wet frequency and the verdict, marked when out of date. */
 export function QuickResults({ state, stale }: { state: ModelState; stale: boolean }) {
@@ -41,6 +42,7 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
           </div>
         </dl>
       )}
+      <QuickBand />
       <div class="quick-links">
         <a class="btn" href={hashFor('results')}>All results</a>
         {build?.engine !== 'plate' && <MemberSectionLink model={build?.model ?? null} label="Section and flow" />}

@@ -1,3 +1,4 @@
+import type { ComponentChildren } from 'preact';
 import { useEffect } from 'preact/hooks';
 import type { Case } from '../../case';
 import { contentKey, type Results } from '../state/app-model';
@@ -20,6 +21,8 @@ export interface ReportViewProps {
   /** The case link to print as text; null when none could be made. */
   link: string | null;
   appVersion: string;
+  /** The band over the ranges on uncertain inputs, printed after the inputs (none when no range is on). */
+  band?: ComponentChildren;
 }
 
 /**
@@ -28,7 +31,7 @@ export interface ReportViewProps {
  * default), shapes, resonance, method and sources, and the case link as text and QR code. A running header and
  * page numbers on every page. A white sheet on screen in either theme, A4 or Letter on paper.
  */
-export function ReportView({ doc, results, link, appVersion }: ReportViewProps) {
+export function ReportView({ doc, results, link, appVersion, band }: ReportViewProps) {
   const printedAt = new Date().toISOString();
   const kind = kindOf(doc.kind);
   const memberRows = inputRows(kind.form.fields, doc.inputs, doc.unitSystem, kind.form.defaults(doc.unitSystem));
@@ -58,6 +61,7 @@ export function ReportView({ doc, results, link, appVersion }: ReportViewProps) 
             <InputsTable caption="Resonance inputs" rows={excitationRows} />
           </div>
         </section>
+        {band}
         <ReportDetails doc={doc} results={results} current={current}>
         <section class="report-section report-link" aria-labelledby="report-link-title">
           <h2 id="report-link-title">Case link</h2>

@@ -23,13 +23,15 @@ export interface ResultsViewProps {
   errorsCount: number;
   /** Shown after the mass table (the submerged section and its flow map). */
   sectionPanel?: ComponentChildren;
+  /** Shown after the modes table (the band over the ranges on uncertain inputs). */
+  bandPanel?: ComponentChildren;
 }
 
 /**
  * The Results screen body: summary, modes, mode shapes, mass by zone, resonance, warnings, assumptions and
  * cautions. Last results stay on screen when the inputs change, marked out of date.
  */
-export function ResultsView({ doc, results, stale, computing, errorsCount, sectionPanel }: ResultsViewProps) {
+export function ResultsView({ doc, results, stale, computing, errorsCount, sectionPanel, bandPanel }: ResultsViewProps) {
   const banner = <StatusBanner hasResults={results !== null} stale={stale} computing={computing} errorsCount={errorsCount} />;
   const answer = results?.answer;
   if (!results || !answer) {
@@ -67,6 +69,7 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
       <div class="results-body">
         <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
         <ModesTable member={member} />
+        {bandPanel}
         <ModeShapePanel build={build} member={member} units={units} />
         <MassTable member={member} units={units} />
         {member.wet && sectionPanel}

@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'preact/hooks';
 import { useModel } from '../state/context';
 import { ReportView } from '../report/ReportView';
+import { ReportBand } from '../report/ReportBand';
 import { encodeCaseLink } from '../../share';
 import { hashFor } from '../shell/router';
 
@@ -27,5 +28,5 @@ export function ReportScreen() {
       </section>
     );
   }
-  return <ReportView doc={doc} results={state.results} link={link} appVersion={__APP_VERSION__} />;
+  return <ReportView doc={doc} results={state.results} link={link} appVersion={__APP_VERSION__} band={<ReportBand />} />;
 }

@@ -4,6 +4,7 @@ import { hashFor } from '../shell/router';
 import type { ComponentChildren } from 'preact';
 import { MemberSectionPanel } from '../section/MemberSectionPanel';
 import { kindOf } from '../../kinds/registry';
+import { LiveBandPanel } from '../results/LiveBandPanel';
 
 /** The Results screen: the open case's results; `banner` is shown above them (a received case). */
 export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren; actions?: ComponentChildren }) {
@@ -28,6 +29,7 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
             computing={state.computing}
             errorsCount={Object.keys(state.errors).length}
             sectionPanel={state.results && state.results.build.engine !== 'plate' && <MemberSectionPanel model={state.results.build.model} system={doc.unitSystem} />}
+            bandPanel={<LiveBandPanel />}
           />
         </>
       )}
