@@ -40,7 +40,7 @@ describe('member inputs are checked once at the public entry, with the field, wh
     [{ liquidToM: -1 }, 'liquidToM must be more than liquidFromM (0 m), got -1'],
     [
       { caisson: { innerDiameterM: 0.4, offsetM: 0.05 } },
-      "caisson.innerDiameterM must be more than the riser's outer diameter with coating plus twice the offset (0.4299 m) so the riser fits with a gap, got 0.4",
+      "caisson.innerDiameterM must be more than the riser's outer diameter with coating and growth plus twice the offset (0.4299 m) so the riser fits with a gap, got 0.4",
     ],
     [
       { bottom: 'free', guideElevationsM: [10] },

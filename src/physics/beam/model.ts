@@ -49,6 +49,19 @@ export interface LumpedMass {
   rotaryInertiaKgM2?: number;
 }
 
+/**
+ * A stretch where the member is shielded from the open flow (a riser inside a caisson or conductor guide, a stem
+ * inside its nozzle): vortex-shedding screening uses `flowSpeedMPerS` there instead of the case's current or flow
+ * (0 = still water). Added mass is not affected (that is `boundaries`).
+ */
+export interface FlowShielding {
+  fromM: number;
+  toM: number;
+  flowSpeedMPerS: number;
+  /** Plain words for results: "inside the caisson", "inside the nozzle". */
+  label: string;
+}
+
 export interface MemberLiquid {
   densityKgPerM3: number;
   /** Submerged range along z. */
@@ -64,6 +77,8 @@ export interface MemberLiquid {
   perforationRatio?: number;
   /** Apply the DNV-RP-H103 Table A-2 3D end-effect reduction for short submerged lengths. Default false. */
   endEffect3d?: boolean;
+  /** Stretches shielded from the open flow; the screening uses their own flow speed (see FlowShielding). */
+  flowShielding?: FlowShielding[];
 }
 
 export interface MemberModel {

@@ -5,6 +5,7 @@
  */
 import type {
   LumpedMass,
+  FlowShielding,
   MemberLiquid,
   MemberModel,
   MemberSection,
@@ -194,9 +195,19 @@ function lumpedMass(v: unknown, i: number, lengthM: number): LumpedMass {
   return m;
 }
 
+function shielding(v: unknown, i: number): FlowShielding {
+  const path = `liquid.flowShielding[${i}]`;
+  const o = object(v, path, ['fromM', 'toM', 'flowSpeedMPerS', 'label']);
+  const fromM = num(o, 'fromM', path, 'a finite number', () => true);
+  const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
+  const flowSpeedMPerS = num(o, 'flowSpeedMPerS', path, 'a finite number ≥ 0', nonNegative);
+  if (typeof o.label !== 'string') fail(`${path}.label`, 'a string', o.label);
+  return { fromM, toM, flowSpeedMPerS, label: o.label as string };
+}
+
 function liquid(v: unknown, lengthM: number): MemberLiquid {
   const path = 'liquid';
-  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d']);
+  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding']);
   const fromM = num(o, 'fromM', path, 'a finite number', () => true);
   const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
   if (!(toM > 0 && fromM < lengthM)) failDescribed(path, `a range overlapping the member [0, ${lengthM}] m`, `[${fromM}, ${toM}]`);
@@ -212,6 +223,7 @@ function liquid(v: unknown, lengthM: number): MemberLiquid {
   if (p !== undefined) liq.perforationRatio = p;
   const ee = optBool(o, 'endEffect3d', path);
   if (ee !== undefined) liq.endEffect3d = ee;
+  if (o.flowShielding !== undefined) liq.flowShielding = array(o.flowShielding, at(path, 'flowShielding'), false).map((x, i) => shielding(x, i));
   return liq;
 }
 

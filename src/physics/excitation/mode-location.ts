@@ -86,7 +86,7 @@ export function locateModeInFlow(mode: ScreeningMode, zones: readonly SubmergedZ
         if (!(z > a && z < b)) continue;
         amp = Math.abs(mode.displacement[k]);
       }
-      const u = flowSpeedAt(profile, z);
+      const u = zone.flowSpeedMPerS ?? flowSpeedAt(profile, z);
       const tie = best !== null && Math.abs(amp - bestAmp) <= EDGE_RTOL * Math.max(amp, bestAmp);
       const better = best === null || (tie ? u / d > best.flowSpeedMPerS / best.sizeM : amp > bestAmp);
       if (better) {

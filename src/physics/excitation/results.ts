@@ -97,6 +97,8 @@ export interface ZoneShedding {
   /** Low edge: St_low at the lowest speed; high edge: St_high at the highest speed, Hz. */
   sheddingFrequencyLowHz: number;
   sheddingFrequencyHighHz: number;
+  /** Set when the zone is shielded from the open flow ("inside the caisson"); its speed is its own. */
+  shieldedBy?: string;
 }
 
 export interface CaseDriver {

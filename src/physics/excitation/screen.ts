@@ -4,6 +4,7 @@
  * a margin, a critical speed where one exists, and the source of the rule. The case verdict is the worst.
  */
 import { DEFAULT_DAMPING, mergeLimits, SEAWATER } from './defaults';
+import { sig } from './format';
 import { machineryCheck, machineryLines } from './machinery';
 import { locateModeInFlow } from './mode-location';
 import type { CaseDriver, CheckResult, ModeScreening, ScreeningResult } from './results';
@@ -93,6 +94,14 @@ export function screenResonance(input: ScreeningInput): ScreeningResult {
   ];
   if (inp.zones.some((z) => z.section.kind !== 'circle')) {
     notes.push('DNV-RP-C205 §9 V_R ranges are for circular cylinders; for rectangles they are applied as an indication (D = width across flow).');
+  }
+  for (const label of new Set(inp.zones.filter((z) => z.shieldedBy !== undefined).map((z) => z.shieldedBy!))) {
+    const z = inp.zones.filter((x) => x.shieldedBy === label);
+    const u = z[0].flowSpeedMPerS!;
+    notes.push(
+      `Shielded ${label} (z = ${sig(z[0].fromM)}–${sig(z[z.length - 1].toM)} m): shedding there is checked with the flow inside, ` +
+        `U = ${sig(u)} m/s${u === 0 ? ' (still water)' : ''}, not the open current.`,
+    );
   }
   if (inp.dampingRatio === undefined) notes.push(`Damping not given: ${DEFAULT_DAMPING.source}.`);
   if (inp.waves) notes.push('The wave check compares natural frequencies with wave frequencies only; it does not assess wave loads.');
