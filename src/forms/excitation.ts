@@ -74,6 +74,27 @@ function readLimits(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs:
   return Object.keys(out).length > 0 ? out : undefined;
 }
 
+/**
+ * One flow speed: as entered, or from a volume flow rate and the pipe bore, U = Q / (π d²/4) (the mean speed,
+ * classical), when the kind offers those fields (flowRate, pipeBore) and the speed is left empty; 0 when neither.
+ */
+function flowSpeedOrRate(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs: FieldErrors): number {
+  const u = r.opt('flowSpeed');
+  if (!spec.fields.some((f) => f.key === 'flowRate')) return u ?? 0;
+  const q = r.opt('flowRate');
+  if (q === undefined) return u ?? 0;
+  if (u !== undefined) {
+    errs.flowRate = 'enter either the flow speed or the flow rate: clear one of them';
+    return 0;
+  }
+  const bore = r.opt('pipeBore');
+  if (bore === undefined) {
+    errs.pipeBore = 'give the pipe bore to turn the flow rate into a flow speed';
+    return 0;
+  }
+  return q / ((Math.PI / 4) * bore * bore);
+}
+
 export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
 
 /** Reads the resonance inputs for a built member; messages by field key, in the user's units. */
@@ -87,7 +108,7 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
   const flowSpeedMPerS =
     spec.flow === 'current-profile'
       ? currentProfile(build, r.num('currentSurface'), r.opt('currentMid'), r.opt('currentBed'))
-      : (r.opt('flowSpeed') ?? 0);
+      : flowSpeedOrRate(spec, r, errs);
 
   let waves: CaseExcitation['waves'];
   if (spec.waves) {

@@ -77,6 +77,12 @@ export interface MemberLiquid {
   perforationRatio?: number;
   /** Apply the DNV-RP-H103 Table A-2 3D end-effect reduction for short submerged lengths. Default false. */
   endEffect3d?: boolean;
+  /**
+   * Kinematic viscosity, m²/s, when known from the liquid and its temperature, with where it comes from; the
+   * resonance screening then uses it (and this density) for the Reynolds number. Not used for added mass.
+   */
+  kinematicViscosityM2PerS?: number;
+  viscositySource?: string;
   /** Stretches shielded from the open flow; the screening uses their own flow speed (see FlowShielding). */
   flowShielding?: FlowShielding[];
 }

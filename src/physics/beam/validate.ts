@@ -207,7 +207,7 @@ function shielding(v: unknown, i: number): FlowShielding {
 
 function liquid(v: unknown, lengthM: number): MemberLiquid {
   const path = 'liquid';
-  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding']);
+  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding', 'kinematicViscosityM2PerS', 'viscositySource']);
   const fromM = num(o, 'fromM', path, 'a finite number', () => true);
   const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
   if (!(toM > 0 && fromM < lengthM)) failDescribed(path, `a range overlapping the member [0, ${lengthM}] m`, `[${fromM}, ${toM}]`);
@@ -223,6 +223,12 @@ function liquid(v: unknown, lengthM: number): MemberLiquid {
   if (p !== undefined) liq.perforationRatio = p;
   const ee = optBool(o, 'endEffect3d', path);
   if (ee !== undefined) liq.endEffect3d = ee;
+  const nu = optNum(o, 'kinematicViscosityM2PerS', path, 'a finite number > 0', positive);
+  if (nu !== undefined) liq.kinematicViscosityM2PerS = nu;
+  if (o.viscositySource !== undefined) {
+    if (typeof o.viscositySource !== 'string') fail(`${path}.viscositySource`, 'a string', o.viscositySource);
+    liq.viscositySource = o.viscositySource as string;
+  }
   if (o.flowShielding !== undefined) liq.flowShielding = array(o.flowShielding, at(path, 'flowShielding'), false).map((x, i) => shielding(x, i));
   return liq;
 }

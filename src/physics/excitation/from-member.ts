@@ -102,8 +102,15 @@ export function screeningInputFor(model: MemberModel, result: MemberResult, exci
     displacement: m.shape.displacement,
     effectiveMassKgPerM: effectiveMassKgPerM(result.zones, m.shape.zM, m.shape.displacement),
   }));
+  // A member whose liquid carries its own viscosity (a stem in water at a known temperature) is screened with it.
+  const liq = model.liquid;
+  const liquid =
+    liq?.kinematicViscosityM2PerS !== undefined
+      ? { densityKgPerM3: liq.densityKgPerM3, kinematicViscosityM2PerS: liq.kinematicViscosityM2PerS, source: liq.viscositySource ?? 'viscosity as given with the member' }
+      : excitation.liquid;
   return {
     ...excitation,
+    ...(liquid ? { liquid } : {}),
     modes,
     zones: result.wet ? submergedZones(model, result.zones) : [],
     effectiveMassKgPerM: modes[0]?.effectiveMassKgPerM ?? 0,
