@@ -5,6 +5,7 @@
  */
 import { DEFAULT_DAMPING, mergeLimits, SEAWATER } from './defaults';
 import { sig } from './format';
+import { severityOf } from './severity';
 import { machineryCheck, machineryLines } from './machinery';
 import { locateModeInFlow } from './mode-location';
 import type { CaseDriver, CheckResult, ModeScreening, ScreeningResult } from './results';
@@ -106,9 +107,14 @@ export function screenResonance(input: ScreeningInput): ScreeningResult {
   if (inp.dampingRatio === undefined) notes.push(`Damping not given: ${DEFAULT_DAMPING.source}.`);
   if (inp.waves) notes.push('The wave check compares natural frequencies with wave frequencies only; it does not assess wave loads.');
 
+  const shedding = driver !== null && (driver.kind === 'in-line-viv' || driver.kind === 'cross-flow-viv' || driver.kind === 'stem-frequency-ratio');
+  const drivingPoint = driver !== null ? modes[driver.modeIndex].shedding : null;
+  const severity = shedding && drivingPoint ? severityOf(driver!.modeIndex, inp.modes[driver!.modeIndex], drivingPoint, damping) : null;
+
   return {
     verdict: driverCheck ? driverCheck.verdict : 'clear',
     driver,
+    severity,
     modes,
     zones: inp.zones.map((z, i) => zoneShedding(z, i, inp.flowSpeedMPerS, cond)),
     limits,
