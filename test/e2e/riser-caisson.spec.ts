@@ -35,3 +35,14 @@ for (const caisson of ['34 in', '11.5 in']) {
     await page.screenshot({ path: `screenshots/riser-caisson-${caisson.replace(/\W+/g, '')}.png`, fullPage: true });
   });
 }
+
+test('an inside-band verdict shows an indicative cross-flow amplitude beside it, on Results and in the Report', async ({ page }) => {
+  await newRiser(page);
+  await setField(page, 'currentSurface', '1.5 m/s');
+  await expect(page.getByTestId('quick-verdict')).toHaveText(/inside band/);
+  await page.goto('/#/results');
+  await expect(page.getByTestId('severity')).toContainText(/Indicative cross-flow amplitude at lock-in, mode 1: A\/D ≈ [0-9.]+/);
+  await expect(page.getByTestId('severity')).toContainText('Scruton number K_S');
+  await page.goto('/#/report');
+  await expect(page.getByTestId('severity')).toContainText('Indicative only');
+});
