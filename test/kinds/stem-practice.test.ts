@@ -40,6 +40,23 @@ describe('a tapered stem sheds at its tip diameter', () => {
   });
 });
 
+describe('the stem screen where shedding is fastest', () => {
+  it('on a stem slimmer at its root (19 → 25 mm), the root governs the f_s/f_n screen', () => {
+    const { screening } = screen({ rootDiameter: '19 mm', tipDiameter: '25 mm' });
+    const check = screening.modes[0].checks.find((c) => c.kind === 'stem-frequency-ratio')!;
+    // f_s = St·U/D is highest where D is least (classical): the root, D = 19 mm, z = 0.
+    expect(check.reason).toMatch(/D = 0\.019 m, at z = 0 m where shedding is fastest, which governs/);
+    // The lock-in checks stay where the mode moves most: the tip piece, sized at its smaller end.
+    expect(screening.modes[0].shedding!.atZM).toBeCloseTo(0.18, 12);
+  });
+
+  it('on a stem tapering to its tip, the tip governs and nothing else is said', () => {
+    const check = screen().screening.modes[0].checks.find((c) => c.kind === 'stem-frequency-ratio')!;
+    expect(check.reason).toMatch(/D = 0\.019 m\)/);
+    expect(check.reason).not.toMatch(/fastest/);
+  });
+});
+
 describe('flow speed from a flow rate and the pipe bore', () => {
   it('50 m³/h in a 100 mm bore is U = Q/(π d²/4) = 1.76839 m/s at the stem', () => {
     // Hand-worked: 50/3600 = 0.0138889 m³/s; π/4 × 0.1² = 0.00785398 m²; U = 1.76839 m/s. rtol 1e-5 (6 figures).

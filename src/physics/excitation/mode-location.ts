@@ -112,3 +112,31 @@ export function locateModeInFlow(mode: ScreeningMode, zones: readonly SubmergedZ
   }
   return { ok: true, location: best };
 }
+
+/**
+ * Where shedding is fastest along the submerged zones the mode spans: the zone end with the highest U/D, hence
+ * the highest f_s = St·U/D (St taken as equal between candidates). For the stem screen f_s/f_n, which asks
+ * whether shedding anywhere on the stem reaches the natural frequency: on a stem that tapers to its tip this is
+ * the tip; where the root is slimmer (or the tip is shielded) the root governs. Null when no zone has flow.
+ */
+export function fastestSheddingLocation(mode: ScreeningMode, zones: readonly SubmergedZone[], profile: FlowProfile): ModeLocation | null {
+  const n = mode.zM.length;
+  let maxAll = 0;
+  for (let i = 0; i < n; i++) maxAll = Math.max(maxAll, Math.abs(mode.displacement[i]));
+  let best: ModeLocation | null = null;
+  for (let zi = 0; zi < zones.length; zi++) {
+    const zone = zones[zi];
+    const a = Math.max(zone.fromM, mode.zM[0]);
+    const b = Math.min(zone.toM, mode.zM[n - 1]);
+    if (!(b > a)) continue;
+    const d = characteristicSizeM(zone.section);
+    for (const z of [a, b]) {
+      const u = zone.flowSpeedMPerS ?? flowSpeedAt(profile, z);
+      if (!(u > 0)) continue;
+      if (best === null || u / d > (best.flowSpeedMPerS / best.sizeM) * (1 + EDGE_RTOL)) {
+        best = { atZM: z, zoneIndex: zi, relativeAmplitude: maxAll > 0 ? Math.abs(shapeAt(mode, z)) / maxAll : 0, flowSpeedMPerS: u, sizeM: d, section: zone.section };
+      }
+    }
+  }
+  return best;
+}

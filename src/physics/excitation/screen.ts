@@ -7,14 +7,14 @@ import { DEFAULT_DAMPING, mergeLimits, SEAWATER } from './defaults';
 import { sig } from './format';
 import { severityOf } from './severity';
 import { machineryCheck, machineryLines } from './machinery';
-import { locateModeInFlow } from './mode-location';
+import { fastestSheddingLocation, locateModeInFlow } from './mode-location';
 import type { CaseDriver, CheckResult, ModeScreening, ScreeningResult } from './results';
 import type { SheddingConditions } from './shedding-point';
 import { sheddingPoint } from './shedding-point';
 import { stemCheck } from './stem';
 import type { LiquidProperties, ScreeningInput } from './types';
 import { validateScreeningInput } from './validate';
-import { compareSeverity, worstIndex } from './verdict';
+import { compareSeverity, EDGE_RTOL, worstIndex } from './verdict';
 import { crossFlowCheck, inLineCheck } from './viv';
 import { waveCheck } from './waves';
 import { zoneShedding } from './zone-shedding';
@@ -46,12 +46,18 @@ export function screenResonance(input: ScreeningInput): ScreeningResult {
     const viv = { frequencyHz: f, point, notSubmergedReason, limits, nonCircular };
     const checks: CheckResult[] = [inLineCheck(viv), crossFlowCheck(viv)];
     if (inp.stemFrequencyRatioScreen) {
+      // The stem screen is taken where shedding is fastest, if that is not where the mode moves most
+      // (a slimmer root, a shielded tip): the higher f_s governs.
+      const fast = loc.ok ? fastestSheddingLocation(mode, inp.zones, inp.flowSpeedMPerS) : null;
+      const governs = fast !== null && point !== null && fast.flowSpeedMPerS / fast.sizeM > (point.flowSpeedMPerS / point.characteristicSizeM) * (1 + EDGE_RTOL);
+      const stemPoint = governs ? sheddingPoint(fast, f, me, cond) : point;
       checks.push(
         stemCheck({
           frequencyHz: f,
-          point,
+          point: stemPoint,
+          elsewhere: governs,
           notSubmergedReason,
-          section: loc.ok ? loc.location.section : null,
+          section: governs ? fast.section : loc.ok ? loc.location.section : null,
           kinematicViscosityM2PerS: liquid.kinematicViscosityM2PerS,
           strouhalOverrideValue: inp.strouhal?.value,
           limits,
