@@ -150,7 +150,7 @@ export function validateRiserInput(raw: RiserInput): RiserInput {
     };
   }
   const supports = riserSupports(input);
-  if (leavesRigidBodyMotion(supports, lengthM, input.topTensionN! > 0 && !input.tensionVariesWithWeight)) {
+  if (leavesRigidBodyMotion(supports, lengthM, riserTopTension(input).effectiveN > 0 && !input.tensionVariesWithWeight)) {
     failText('bottom, top and guideElevationsM', 'enough support to hold the riser: a clamped end, or two held points (guides or pinned ends)', `bottom "${input.bottom}", top "${input.top}" and ${guides.length} guide(s)`);
   }
   return input;

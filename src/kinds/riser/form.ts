@@ -1,6 +1,7 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
 import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
+import { riserTopTension } from './tension';
 import { commonInput, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import {
@@ -164,9 +165,6 @@ export const RISER_FORM = defineForm({
     const tension = r.num('topTension');
     const varies = r.choice('weightInTension') === 'yes';
     const supports = [...endSupports(bottom, 0), ...guides.map((atM) => ({ atM, kind: 'pinned' as const })), ...endSupports(top, length)];
-    if (leavesRigidBodyMotion(supports, length, tension > 0 && !varies)) {
-      err('bottomEnd', 'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned');
-    }
     const input: RiserInput = {
       ...tube,
       ...commonInput(r),
@@ -188,6 +186,10 @@ export const RISER_FORM = defineForm({
     if (r.choice('tensionBasis') === 'wall') {
       input.tensionBasis = 'wall';
       input.internalPressurePa = r.num('internalPressure');
+    }
+    // A constant tension holds rotation like a pendulum: the effective tension, as the build uses it.
+    if (leavesRigidBodyMotion(supports, length, riserTopTension(input).effectiveN > 0 && !varies)) {
+      err('bottomEnd', 'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned');
     }
     // The angle field reads in radians (SI); the input takes degrees.
     if (dc !== undefined) {
