@@ -94,6 +94,20 @@ describe('effective tension from a wall tension (Sparks)', () => {
   });
 });
 
+describe('the internal pressure field', () => {
+  it('reads psi and bar alike and names a pressure when something else is typed', () => {
+    const form = kindOf('riser').form;
+    const base = { ...form.defaults('si'), topTension: '600', tensionBasis: 'wall' };
+    const psi = form.toInput({ ...base, internalPressure: '1450.377 psi' }, 'si');
+    // 1 psi = 6894.757 Pa (NIST SP 811): 1450.377 psi = 100.000 bar; rtol 1e-6 for the 7 figures typed.
+    if (!psi.ok) throw new Error(JSON.stringify(psi.errors));
+    expectClose(psi.input.internalPressurePa!, 100e5, { rtol: 1e-6, label: 'psi → Pa' });
+    const wrong = form.toInput({ ...base, internalPressure: '3 m' }, 'si');
+    expect(wrong.ok).toBe(false);
+    if (!wrong.ok) expect(wrong.errors.internalPressure).toMatch(/a pressure such as 100 bar/);
+  });
+});
+
 describe('marine growth, top mass and the small-gap warning', () => {
   it('growth on the submerged length adds the hand-worked mass per metre over the coating', () => {
     const b = buildRiserModel({ ...RISER, caisson: undefined, marineGrowth: { thicknessM: 0.05, densityKgPerM3: 1325 } });

@@ -103,7 +103,7 @@ const FIELDS: readonly FieldDef[] = [
     key: 'internalPressure',
     label: 'Internal pressure at the top',
     type: 'quantity',
-    dimension: 'modulus',
+    dimension: 'pressure',
     units: { si: 'bar', us: 'psi' },
     default: '0',
     advanced: true,
