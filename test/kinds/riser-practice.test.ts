@@ -7,6 +7,7 @@ import { readCase, solveCase } from '../../src/app';
 import { excitationDefaults } from '../../src/forms/excitation';
 import { buildRiserModel } from '../../src/kinds/riser/build';
 import { riserTopTension } from '../../src/kinds/riser/tension';
+import { RISER_FORM } from '../../src/kinds/riser/form';
 import { kindOf } from '../../src/kinds/registry';
 import { expectClose } from '../helpers/expect-close';
 import { RISER } from './fixtures';
@@ -60,6 +61,27 @@ describe('a riser inside a caisson is screened with the flow inside it', () => {
   });
 });
 
+describe('a caisson that ends above the seabed', () => {
+  it('confines and shields only from its open bottom up; below it the riser is in open water and the current', () => {
+    const { build, screening, answer } = screen({ caissonDiameter: '11.5 in', caissonBottom: '15' });
+    expect(build.model.liquid!.boundariesFromM).toBe(15);
+    expect(build.model.liquid!.flowShielding).toEqual([{ fromM: 15, toM: 30, flowSpeedMPerS: 0, label: 'inside the caisson' }]);
+    expect(build.model.segments.map((s) => [s.fromM, s.toM])).toEqual([
+      [0, 15],
+      [15, 40],
+    ]);
+    // Open water below: Ca = 1 (circle, Lamb, classical); confined above: Ca > 1.
+    const zones = answer.member.zones.filter((z) => z.submerged);
+    expect(zones[0].addedMassCoefficientCa).toBeCloseTo(1, 12);
+    expect(zones[1].addedMassCoefficientCa!).toBeGreaterThan(1.5);
+    // The mode moves most inside the caisson, in still water; shedding is screened where it moves in the current.
+    const p = screening.modes[0].shedding!;
+    expect(p.atZM).toBeLessThanOrEqual(15);
+    expect(p.flowSpeedMPerS).toBe(1.5);
+    expect(p.relativeAmplitude).toBeLessThan(1);
+  });
+});
+
 describe('effective tension from a wall tension (Sparks)', () => {
   it('matches a hand-worked T_eff = T_wall − p_i·A_i + p_e·A_e at a top 5 m under water', () => {
     // R. Sparks, ASME J. Energy Resources Technology 106 (1984) 46. Hand-worked: D_o = 273.05 mm, t = 12.7 mm,
@@ -96,7 +118,7 @@ describe('effective tension from a wall tension (Sparks)', () => {
 
 describe('the internal pressure field', () => {
   it('reads psi and bar alike and names a pressure when something else is typed', () => {
-    const form = kindOf('riser').form;
+    const form = RISER_FORM;
     const base = { ...form.defaults('si'), topTension: '600', tensionBasis: 'wall' };
     const psi = form.toInput({ ...base, internalPressure: '1450.377 psi' }, 'si');
     // 1 psi = 6894.757 Pa (NIST SP 811): 1450.377 psi = 100.000 bar; rtol 1e-6 for the 7 figures typed.

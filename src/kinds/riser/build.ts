@@ -29,6 +29,11 @@ export interface RiserCaisson {
    * riser from the open current, so shedding inside it is screened with this speed (physics/beam FlowShielding).
    */
   innerFlowMPerS?: number;
+  /**
+   * Height of the caisson's open bottom above the riser's bottom end, m: the caisson surrounds the riser from
+   * here up. Default: the bottom of the water (the whole submerged length).
+   */
+  fromM?: number;
 }
 
 /** Marine growth on the riser's submerged length: adds mass and outer diameter (so added mass), no stiffness. */
@@ -148,6 +153,11 @@ export function validateRiserInput(raw: RiserInput): RiserInput {
       offsetAngleDeg: optional('caisson.offsetAngleDeg', c.offsetAngleDeg, finite) ?? 0,
       innerFlowMPerS: optional('caisson.innerFlowMPerS', c.innerFlowMPerS, nonNegative) ?? 0,
     };
+    const from = optional('caisson.fromM', c.fromM, finite);
+    if (from !== undefined) {
+      if (!(from < input.liquidToM)) fail('caisson.fromM', `below the water surface (liquidToM, ${num(input.liquidToM)} m)`, from);
+      input.caisson.fromM = from;
+    }
   }
   const supports = riserSupports(input);
   if (leavesRigidBodyMotion(supports, lengthM, riserTopTension(input).effectiveN > 0 && !input.tensionVariesWithWeight)) {
@@ -187,8 +197,13 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
   const wetFrom = Math.max(0, r.liquidFromM!);
   const wetTo = Math.min(L, r.liquidToM);
   const growth = r.marineGrowth && r.marineGrowth.thicknessM > 0 && wetTo > wetFrom ? r.marineGrowth : undefined;
-  // Growth lives on the submerged length only; elsewhere the coating alone.
-  const segments = cutSegments(L, growth ? [wetFrom, wetTo] : [], (fromM, toM, mid): MemberSegment => {
+  // The caisson surrounds the riser from its open bottom (default: the bottom of the water) up.
+  const c = r.caisson;
+  const caissonFrom = c ? Math.max(wetFrom, c.fromM ?? wetFrom) : wetTo;
+  const inCaisson = c !== undefined && wetTo > caissonFrom;
+  // Growth lives on the submerged length only; elsewhere the coating alone. Cut also where the caisson starts.
+  const cuts = [...(growth ? [wetFrom, wetTo] : []), ...(inCaisson && caissonFrom > wetFrom ? [caissonFrom] : [])];
+  const segments = cutSegments(L, cuts, (fromM, toM, mid): MemberSegment => {
     const segment: MemberSegment = {
       fromM,
       toM,
@@ -209,10 +224,9 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
   if (r.tensionVariesWithWeight) model.tensionVariesWithWeight = true;
   if (r.topMassKg! > 0) model.masses = [{ atM: L, massKg: r.topMassKg! }];
 
-  const c = r.caisson;
   if (wetTo > wetFrom) {
     model.liquid = { densityKgPerM3: r.liquidDensityKgPerM3, fromM: wetFrom, toM: wetTo };
-    if (c) {
+    if (c && inCaisson) {
       const th = (c.offsetAngleDeg! * Math.PI) / 180;
       const boundary: BoundarySpec = {
         kind: 'enclosure',
@@ -222,7 +236,8 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
         centerM: [-c.offsetM! * Math.cos(th) + 0, -c.offsetM! * Math.sin(th) + 0],
       };
       model.liquid.boundaries = [boundary];
-      model.liquid.flowShielding = [{ fromM: wetFrom, toM: wetTo, flowSpeedMPerS: c.innerFlowMPerS!, label: 'inside the caisson' }];
+      if (caissonFrom > wetFrom) model.liquid.boundariesFromM = caissonFrom;
+      model.liquid.flowShielding = [{ fromM: caissonFrom, toM: wetTo, flowSpeedMPerS: c.innerFlowMPerS!, label: 'inside the caisson' }];
     }
     if (r.endEffect3d) model.liquid.endEffect3d = true;
   }
@@ -244,8 +259,13 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
   notes.push(...theory.notes);
   if (growth) notes.push('Marine growth on the submerged length adds mass and outer diameter (so added mass) but no stiffness.');
   if (model.masses) notes.push('The top mass (wellhead, tensioner) moves with the top end; its weight hangs on the tension below it.');
-  if (c) {
-    notes.push('The caisson surrounds the riser over the whole submerged length and confines the water (2D section solver).');
+  if (c && !inCaisson) notes.push('The caisson starts above the water: it neither confines the water nor shields the riser.');
+  if (c && inCaisson) {
+    notes.push(
+      caissonFrom > wetFrom
+        ? 'The caisson surrounds the riser from its open bottom up and confines the water there (2D section solver); below it the riser is in open water and the current.'
+        : 'The caisson surrounds the riser over the whole submerged length and confines the water (2D section solver).',
+    );
     notes.push(
       c.innerFlowMPerS! > 0
         ? 'Inside the caisson the riser is shielded from the open current: shedding there is screened with the flow inside as entered.'
@@ -271,9 +291,9 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
       ...(growth ? band('marine-growth', 'Marine growth', wetFrom, wetTo, L) : []),
       ...(coat ? band('coating', 'Coating', 0, L, L) : []),
       ...(r.contentsDensityKgPerM3 > 0 ? band('contents', 'Contents', 0, L, L) : []),
-      ...(c ? band('confined', 'Inside caisson', wetFrom, wetTo, L) : []),
+      ...(inCaisson ? band('confined', 'Inside caisson', caissonFrom, wetTo, L) : []),
     ],
-    ...(c ? { confinement: { kind: 'surrounding-tube' as const, innerDiameterM: c.innerDiameterM, offsetM: c.offsetM!, offsetAngleDeg: c.offsetAngleDeg! } } : {}),
+    ...(inCaisson ? { confinement: { kind: 'surrounding-tube' as const, innerDiameterM: c.innerDiameterM, offsetM: c.offsetM!, offsetAngleDeg: c.offsetAngleDeg! } } : {}),
     notes,
   };
 }

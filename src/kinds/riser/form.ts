@@ -76,6 +76,12 @@ const FIELDS: readonly FieldDef[] = [
     help: 'Polymer coatings about 900 to 1400 kg/m³, concrete weight coat 2200 to 3000 kg/m³ (common practice).',
   }),
   heightField('waterBottom', 'Water from (above the bottom)', '0', { advanced: true, help: 'Lower end of the water around the riser, if it does not start at the bottom end.' }),
+  heightField('caissonBottom', 'Caisson open bottom (above the bottom end)', '', {
+    optional: true,
+    emptyMeans: 'the bottom of the water',
+    advanced: true,
+    help: 'Where the caisson ends below: it confines the water and shields the riser from the current from here up; below it the riser is in open water.',
+  }),
   sizeField('caissonOffset', 'Caisson offset', '0', { min: NON_NEGATIVE, advanced: true, help: 'Distance between the riser and caisson centres.' }),
   {
     key: 'caissonOffsetAngle',
@@ -194,6 +200,11 @@ export const RISER_FORM = defineForm({
     // The angle field reads in radians (SI); the input takes degrees.
     if (dc !== undefined) {
       input.caisson = { innerDiameterM: dc, offsetM: offset, offsetAngleDeg: (r.num('caissonOffsetAngle') * 180) / Math.PI, innerFlowMPerS: r.opt('caissonInnerFlow') ?? 0 };
+      const bottom = r.opt('caissonBottom');
+      if (bottom !== undefined) {
+        if (!(bottom < waterSurface)) err('caissonBottom', `the caisson's open bottom must be below the water surface (${r.fmt('waterSurface', waterSurface)})`);
+        input.caisson.fromM = bottom;
+      }
     }
     return input;
   },

@@ -107,12 +107,15 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     const shape = shapeOf(seg.section);
     anyPlate ||= shape.perforable;
     const perf = shape.perforable ? perforationFactor(p) : 1;
-    if (!confined && shape.closedForm) {
+    // Surrounded here? Everywhere in the liquid, or only above liq.boundariesFromM (segments never straddle it).
+    const segConfined = confined && (liq.boundariesFromM === undefined || 0.5 * (seg.fromM + seg.toM) >= liq.boundariesFromM);
+    const segBoundaries = segConfined ? boundaries : [];
+    if (!segConfined && shape.closedForm) {
       segments.push({ method: shape.closedForm, caStart: perf, caEnd: perf, perforationFactor: perf });
       continue;
     }
     if (!solver) {
-      const needs = confined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
+      const needs = segConfined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
       return { ok: false, reason: 'section-solver-failed', message: `${needs} the section solver, which is not available` };
     }
     const coat = seg.coating?.thicknessM ?? 0;
@@ -120,7 +123,7 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     // Ca of the section at fraction t of the segment, through the cache; null (and `failure` set) when it fails.
     const caOf = (t: number): number | null => {
       const section = t === 0 ? seg.section : t === 1 ? (seg.endSection ?? seg.section) : interpolateSection(seg, t);
-      const input = sectionInput(section, coat, rho, boundaries);
+      const input = sectionInput(section, coat, rho, segBoundaries);
       const key = JSON.stringify(input);
       let hit = cache.get(key);
       if (hit === undefined) {
@@ -145,7 +148,7 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     const ca1 = ca0 === null ? null : caOf(1);
     if (ca0 === null || ca1 === null) return { ok: false, reason: 'section-solver-failed', message: failure! };
     const plan: SegmentAddedMass = { method: 'section solver', caStart: ca0, caEnd: ca1, perforationFactor: perf };
-    if (seg.endSection && confined) {
+    if (seg.endSection && segConfined) {
       // Solve the section where it changes: bisect each interval until the straight line between its ends
       // predicts the solved Ca at its middle within TAPER_CA_RTOL (or the depth limit).
       const pts: [number, number][] = [[0, ca0]];

@@ -73,6 +73,11 @@ export interface MemberLiquid {
    * Absent = unbounded liquid.
    */
   boundaries?: BoundarySpec[];
+  /**
+   * The boundaries surround the member only where z ≥ this (a caisson whose open bottom is above the seabed);
+   * absent = over the whole liquid range. No segment may straddle it.
+   */
+  boundariesFromM?: number;
   /** Perforation ratio of a plate (0..1): reduces added mass (DNV-RP-H103 §4.6.4.3). */
   perforationRatio?: number;
   /** Apply the DNV-RP-H103 Table A-2 3D end-effect reduction for short submerged lengths. Default false. */

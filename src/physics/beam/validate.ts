@@ -207,7 +207,7 @@ function shielding(v: unknown, i: number): FlowShielding {
 
 function liquid(v: unknown, lengthM: number): MemberLiquid {
   const path = 'liquid';
-  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding', 'kinematicViscosityM2PerS', 'viscositySource']);
+  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding', 'kinematicViscosityM2PerS', 'viscositySource', 'boundariesFromM']);
   const fromM = num(o, 'fromM', path, 'a finite number', () => true);
   const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
   if (!(toM > 0 && fromM < lengthM)) failDescribed(path, `a range overlapping the member [0, ${lengthM}] m`, `[${fromM}, ${toM}]`);
@@ -223,6 +223,8 @@ function liquid(v: unknown, lengthM: number): MemberLiquid {
   if (p !== undefined) liq.perforationRatio = p;
   const ee = optBool(o, 'endEffect3d', path);
   if (ee !== undefined) liq.endEffect3d = ee;
+  const bf = optNum(o, 'boundariesFromM', path, 'a finite number', () => true);
+  if (bf !== undefined) liq.boundariesFromM = bf;
   const nu = optNum(o, 'kinematicViscosityM2PerS', path, 'a finite number > 0', positive);
   if (nu !== undefined) liq.kinematicViscosityM2PerS = nu;
   if (o.viscositySource !== undefined) {
@@ -266,6 +268,12 @@ export function parseMemberModel(raw: unknown): MemberModel {
   if (o.soilSprings !== undefined) model.soilSprings = array(o.soilSprings, 'soilSprings', false).map((s, i) => soilRange(s, i, lengthM));
   if (o.masses !== undefined) model.masses = array(o.masses, 'masses', false).map((m, i) => lumpedMass(m, i, lengthM));
   if (o.liquid !== undefined && o.liquid !== null) model.liquid = liquid(o.liquid, lengthM);
+  const bf = model.liquid?.boundariesFromM;
+  if (bf !== undefined) {
+    const tol = 1e-9 * lengthM;
+    const cut = segments.findIndex((s) => s.fromM < bf - tol && s.toM > bf + tol);
+    if (cut >= 0) fail('liquid.boundariesFromM', `at a segment end (segments[${cut}] runs from ${segments[cut].fromM} to ${segments[cut].toM} m across it)`, bf);
+  }
   const t = optNum(o, 'tensionN', '', 'a finite number (negative = compression)', () => true);
   if (t !== undefined) model.tensionN = t;
   const tv = optBool(o, 'tensionVariesWithWeight', '');

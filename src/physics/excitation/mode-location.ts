@@ -10,7 +10,9 @@
  * - for uniform flow and section both choices agree.
  * The shape is taken as piecewise linear between nodes, so the maximum over a zone lies at a node inside it or
  * at a zone end (waterline, mudline) — those are the only candidates. Near-ties (within EDGE_RTOL) go to the
- * candidate with the largest U/D, i.e. the earliest onset as the flow rises.
+ * candidate with the largest U/D, i.e. the earliest onset as the flow rises. A point in still water (zero flow,
+ * e.g. a stretch shielded inside a caisson) is taken only when no moving point has flow: the largest |φ| among
+ * points with flow is the evaluation point otherwise, since still water cannot excite the mode.
  */
 import type { FlowProfile } from './profile';
 import { flowSpeedAt } from './profile';
@@ -87,10 +89,14 @@ export function locateModeInFlow(mode: ScreeningMode, zones: readonly SubmergedZ
         amp = Math.abs(mode.displacement[k]);
       }
       const u = zone.flowSpeedMPerS ?? flowSpeedAt(profile, z);
+      // Still water cannot excite: a moving point with flow beats any point without (a riser shielded in a
+      // caisson over its upper bays still sheds where its lower bays stand in the current).
+      const excitable = u > 0 && amp > 0;
+      const flowBeats = best !== null && excitable !== (best.flowSpeedMPerS > 0 && bestAmp > 0);
       const tie = best !== null && Math.abs(amp - bestAmp) <= EDGE_RTOL * Math.max(amp, bestAmp);
-      const better = best === null || (tie ? u / d > best.flowSpeedMPerS / best.sizeM : amp > bestAmp);
+      const better = best === null || (flowBeats ? excitable : tie ? u / d > best.flowSpeedMPerS / best.sizeM : amp > bestAmp);
       if (better) {
-        bestAmp = Math.max(bestAmp, amp);
+        bestAmp = flowBeats ? amp : Math.max(bestAmp, amp);
         best = { atZM: z, zoneIndex: zi, relativeAmplitude: amp / maxAll, flowSpeedMPerS: u, sizeM: d, section: zone.section };
       }
     }
