@@ -4,6 +4,6 @@
  *   solveCase(request)  -> modes dry and wet and the resonance screening (solve-case.ts)
  *   blankCase, caseFromDemo -> new cases from a kind's module (create-case.ts)
  */
-export { readCase, type CaseReading } from './read-case';
+export { readCase, requestOf, type CaseReading } from './read-case';
 export { solveCase, type CaseAnswer, type CaseRequest } from './solve-case';
 export { blankCase, caseFromDemo } from './create-case';

@@ -45,6 +45,8 @@ export function runCaseCommand(inputText: string): string {
       ? {
           verdict: answer.screening.verdict,
           driver: answer.screening.driver,
+          // Indicative only (Blevins, Flow-Induced Vibration, 1990, §3.4): the Scruton number and A/D of the driving mode.
+          severity: answer.screening.severity,
           checks: answer.screening.modes.flatMap((mode) =>
             mode.checks.map((k) => ({ mode: mode.modeIndex + 1, excitation: k.label, verdict: k.verdict, marginPercent: k.marginPercent, criticalSpeedMPerS: k.criticalSpeedMPerS, source: k.source })),
           ),

@@ -75,7 +75,7 @@ function readLimits(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs:
 }
 
 /**
- * The machine of the MACHINE fields (resonance-fields.ts) as the screening takes it: shaft speed in rpm, blade
+ * The machine of the MACHINE fields (resonance-fields.ts) as the screening takes it: shaft speed in Hz, blade
  * count, highest speed and the orders; none when the shaft speed is empty. Messages go into `errs` by field key.
  */
 export function readMachinery(r: ReturnType<typeof makeReader>, errs: FieldErrors): Machine[] {
@@ -100,6 +100,27 @@ export function readMachinery(r: ReturnType<typeof makeReader>, errs: FieldError
   return machinery;
 }
 
+/**
+ * One flow speed: as entered, or from a volume flow rate and the pipe bore, U = Q / (π d²/4) (the mean speed,
+ * classical), when the kind offers those fields (flowRate, pipeBore) and the speed is left empty; 0 when neither.
+ */
+function flowSpeedOrRate(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, errs: FieldErrors): number {
+  const u = r.opt('flowSpeed');
+  if (!spec.fields.some((f) => f.key === 'flowRate')) return u ?? 0;
+  const q = r.opt('flowRate');
+  if (q === undefined) return u ?? 0;
+  if (u !== undefined) {
+    errs.flowRate = 'enter either the flow speed or the flow rate: clear one of them';
+    return 0;
+  }
+  const bore = r.opt('pipeBore');
+  if (bore === undefined) {
+    errs.pipeBore = 'give the pipe bore to turn the flow rate into a flow speed';
+    return 0;
+  }
+  return q / ((Math.PI / 4) * bore * bore);
+}
+
 export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
 
 /** Reads the resonance inputs for a built member; messages by field key, in the user's units. */
@@ -113,7 +134,7 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
   const flowSpeedMPerS =
     spec.flow === 'current-profile'
       ? currentProfile(build, r.num('currentSurface'), r.opt('currentMid'), r.opt('currentBed'))
-      : (r.opt('flowSpeed') ?? 0);
+      : flowSpeedOrRate(spec, r, errs);
 
   let waves: CaseExcitation['waves'];
   if (spec.waves) {

@@ -19,6 +19,8 @@ export type Dimension =
   | 'soil-modulus-gradient'
   | 'frequency'
   | 'speed'
+  | 'flow-rate'
+  | 'pressure'
   | 'time'
   | 'angle'
   | 'ratio';
@@ -78,6 +80,8 @@ export const DIMENSIONS: Readonly<Record<Dimension, DimensionInfo>> = {
   },
   frequency: { noun: 'a frequency', exponents: FREQUENCY, examples: { si: '12 Hz', us: '720 rpm' }, units: { si: ['Hz', 'rpm'], us: ['Hz', 'rpm'] } },
   speed: { noun: 'a speed', exponents: SPEED, examples: { si: '1.5 m/s', us: '3 knot' }, units: { si: ['m/s'], us: ['ft/s', 'knot'] } },
+  pressure: { noun: 'a pressure', exponents: PRESSURE, examples: { si: '100 bar', us: '1450 psi' }, units: { si: ['bar', 'MPa'], us: ['psi'] } },
+  'flow-rate': { noun: 'a volume flow rate', exponents: [0, 3, -1, 0, 0, 0, 0, 0, 0], examples: { si: '50 m^3/h', us: '220 gal/min' }, units: { si: ['m^3/h'], us: ['gal/min'] } },
   time: { noun: 'a time', exponents: TIME, examples: { si: '8 s', us: '8 s' }, units: { si: ['s'], us: ['s'] } },
   angle: { noun: 'an angle', exponents: ANGLE, examples: { si: '30 deg', us: '30 deg' }, units: { si: ['deg'], us: ['deg'] } },
   ratio: { noun: 'a ratio', exponents: NONE, examples: { si: '20 %', us: '20 %' }, units: { si: ['%', ''], us: ['%', ''] } },

@@ -43,6 +43,10 @@ const TABLE: Readonly<Record<string, readonly [number, Dimension | readonly numb
   psi: [PSI, 'soil-modulus'],
   'MN/m^3': [1e6, 'soil-modulus-gradient'],
   pci: [LBF / IN ** 3, 'soil-modulus-gradient'],
+  bar: [1e5, 'pressure'],
+  MPa: [1e6, 'pressure'],
+  'm^3/h': [1 / 3600, 'flow-rate'],
+  'gal/min': [0.003785411784 / 60, 'flow-rate'], // US gallon, 231 in³ exactly
   Hz: [1, 'frequency'],
   rpm: [1 / 60, 'frequency'],
   'm/s': [1, 'speed'],

@@ -11,6 +11,7 @@ import pile from '../../examples/member-fender-pile-port-halloran.json';
 import riser from '../../examples/member-riser-skerry-alpha.json';
 import baffle from '../../examples/member-baffle-marrow-creek.json';
 import { report, seeded, time } from './timing';
+import { buildStemModel } from '../../src/kinds/stem/build';
 
 /** 40 m tapered, flooded pile clamped at the root, with seeded lumped masses; 200 equal elements. */
 function member200(): MemberModel {
@@ -43,6 +44,21 @@ function systemOf(model: MemberModel, elements: number) {
   return { breaks, counts, system: assembleMember(model, buildMesh(model, breaks, counts), null) };
 }
 
+/** A thermowell tapering 28 → 22 mm inside a 30 mm sleeve: the taper is solved at stations (added-mass.ts). */
+function taperedStemInBore(): MemberModel {
+  return buildStemModel({
+    insertionLengthM: 0.25,
+    rootDiameterM: 0.028,
+    tipDiameterM: 0.022,
+    boreDiameterM: 0.007,
+    youngsModulusPa: 193e9,
+    materialDensityKgPerM3: 8000,
+    liquidDensityKgPerM3: 1000,
+    surroundingInnerDiameterM: 0.03,
+    rootSupport: { kind: 'rigid' },
+  }).model;
+}
+
 export function run(): void {
   const model = member200();
   const { breaks, counts, system } = systemOf(model, 200);
@@ -59,6 +75,7 @@ export function run(): void {
     ['whole case: fender pile, open water (dry+wet, refinement)', pile],
     ['whole case: riser in caisson (1 section solve, dry+wet)', riser],
     ['whole case: baffle by tank wall (1 section solve, dry+wet)', baffle],
+    ['whole case: stem 28→22 mm tapered in a 30 mm bore (stations)', taperedStemInBore()],
   ];
   for (const [label, raw] of cases) {
     const m = parseMemberModel(raw);

@@ -20,7 +20,7 @@ describe('member inputs are checked once at the public entry, with the field, wh
     [{ waterDepthM: -1 }, 'waterDepthM must be a finite number ≥ 0, got -1'],
     [{ topAboveStillWaterM: -9 }, 'topAboveStillWaterM must be more than −waterDepthM (-8 m) so the top is above the mudline, got -9'],
     [{ flooded: 'yes' }, 'flooded must be true or false, got "yes"'],
-    [{ foundation: { kind: 'piles' } }, 'foundation.kind must be one of "fixity", "soil-springs", "soil-springs-linear", got "piles"'],
+    [{ foundation: { kind: 'piles' } }, 'foundation.kind must be one of "fixity", "fixity-soil", "soil-springs", "soil-springs-linear", got "piles"'],
     [{ foundation: { kind: 'soil-springs', embeddedLengthM: 10 } }, 'foundation.modulusNPerM2 must be a finite number > 0, got nothing'],
     [{ topMassKg: -5 }, 'topMassKg must be a finite number ≥ 0, got -5'],
     [
@@ -40,7 +40,7 @@ describe('member inputs are checked once at the public entry, with the field, wh
     [{ liquidToM: -1 }, 'liquidToM must be more than liquidFromM (0 m), got -1'],
     [
       { caisson: { innerDiameterM: 0.4, offsetM: 0.05 } },
-      "caisson.innerDiameterM must be more than the riser's outer diameter with coating plus twice the offset (0.4299 m) so the riser fits with a gap, got 0.4",
+      "caisson.innerDiameterM must be more than the riser's outer diameter with coating and growth plus twice the offset (0.4299 m) so the riser fits with a gap, got 0.4",
     ],
     [
       { bottom: 'free', guideElevationsM: [10] },

@@ -1,5 +1,6 @@
 /** The pile form: fields, defaults with their sources, cross-field checks and the mapping to PileInput. */
-import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type PileInput, validatePileInput } from './build';
+import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type PileHead, type PileInput, validatePileInput } from './build';
+import { SOIL_PRESETS, type SoilPresetId } from '../../physics/practice/soil-presets';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
@@ -20,7 +21,12 @@ const FIELDS: readonly FieldDef[] = [
     label: 'Below the mudline',
     type: 'choice',
     choices: [
-      { value: 'fixity', label: 'Fixed at a depth', help: 'Equivalent cantilever clamped at an effective fixity depth (common practice).' },
+      { value: 'fixity', label: 'Fixed at a depth (as entered)', help: 'Equivalent cantilever clamped at an effective fixity depth you enter (common practice).' },
+      {
+        value: 'fixity-soil',
+        label: 'Fixed at a depth from the soil type',
+        help: 'Equivalent cantilever clamped at the depth to fixity of M.T. Davisson & K.E. Robinson (Bending and buckling of partially embedded piles, 6th ICSMFE, 1965), from the soil type.',
+      },
       { value: 'soil-springs', label: 'Soil springs, constant (clay)', help: 'Lateral springs of constant subgrade modulus over the embedded length.' },
       { value: 'soil-springs-linear', label: 'Soil springs, rising with depth (sand)', help: 'Lateral springs rising linearly with depth.' },
     ],
@@ -33,7 +39,20 @@ const FIELDS: readonly FieldDef[] = [
     showWhen: { key: 'foundation', values: ['fixity'] },
     help: 'Effective fixity is usually 3.5 to 8 diameters below the mudline, often 6 (common practice).',
   }),
-  heightField('embeddedLength', 'Embedded length', '15', { min: POSITIVE, showWhen: { key: 'foundation', values: SPRINGS }, help: 'Pile length below the mudline.' }),
+  {
+    key: 'soilType',
+    label: 'Soil type',
+    type: 'choice',
+    choices: (Object.keys(SOIL_PRESETS) as SoilPresetId[]).map((id) => ({ value: id, label: SOIL_PRESETS[id].label, help: `${SOIL_PRESETS[id].source}.` })),
+    default: 'medium-sand',
+    showWhen: { key: 'foundation', values: ['fixity-soil'] },
+    help: 'Indicative subgrade moduli for screening; a site investigation governs.',
+  },
+  heightField('embeddedLength', 'Embedded length', '15', {
+    min: POSITIVE,
+    showWhen: { key: 'foundation', values: [...SPRINGS, 'fixity-soil'] },
+    help: 'Pile length below the original mudline (before scour). With a soil type, used to check that the pile is long enough for the method.',
+  }),
   {
     key: 'soilModulus',
     label: 'Soil spring modulus',
@@ -64,7 +83,32 @@ const FIELDS: readonly FieldDef[] = [
     units: { si: 't', us: 'lb' },
     default: '0',
     min: NON_NEGATIVE,
-    help: 'Share of the deck or anything else carried at the top.',
+    help: 'Share of the deck that sways with the pile head (deck sway mass), or anything else carried at the top.',
+  },
+  {
+    key: 'headRestraint',
+    label: 'Pile head',
+    type: 'choice',
+    choices: [
+      { value: 'free', label: 'Free', help: 'Nothing holds the head (a mooring or fender pile).' },
+      { value: 'held', label: 'Held against rotation', help: 'A stiff deck keeps the head from rotating; it still sways.' },
+      { value: 'spring', label: 'Rotational spring', help: 'A deck of finite stiffness: enter its rotational stiffness.' },
+    ],
+    default: 'free',
+    advanced: true,
+    help: 'How the deck holds the pile head: held against rotation can raise f1 a great deal over a free head.',
+  },
+  {
+    key: 'headRotationalStiffness',
+    label: 'Head rotational stiffness',
+    type: 'quantity',
+    dimension: 'rotational-stiffness',
+    units: { si: 'MN m/rad', us: 'kip ft/rad' },
+    default: '100',
+    min: POSITIVE,
+    advanced: true,
+    showWhen: { key: 'headRestraint', values: ['spring'] },
+    help: 'Moment per radian of head rotation that the deck resists.',
   },
   {
     key: 'flooded',
@@ -92,6 +136,22 @@ const FIELDS: readonly FieldDef[] = [
     advanced: true,
     help: 'About a horizontal axis through the pile top.',
   },
+  heightField('scourDepth', 'Scour depth', '0', {
+    min: NON_NEGATIVE,
+    advanced: true,
+    help: 'Depth of scour below the original mudline: the mudline and the soil support move down by this much; the water depth is measured to the original mudline.',
+  }),
+  {
+    key: 'axialLoad',
+    label: 'Axial load (compression)',
+    type: 'quantity',
+    dimension: 'force',
+    units: { si: 'kN', us: 'kip' },
+    default: '0',
+    min: NON_NEGATIVE,
+    advanced: true,
+    help: 'Deck load carried down the pile; compression lowers the bending frequencies (P-Δ). 0 for none.',
+  },
   densityField('growthDensity', 'Marine growth density', '1325', { advanced: true, help: 'About 1325 kg/m³ (NORSOK N-003, Actions and action effects).' }),
   heightField('growthTop', 'Marine growth from (above still water)', '2', { advanced: true, help: 'Top of the growth zone above the still water level (NORSOK N-003, Actions and action effects, marine growth zones).' }),
   heightField('growthBottom', 'Marine growth down to (below still water)', '40', { advanced: true, help: 'Bottom of the growth zone below the still water level; it stops at the mudline.' }),
@@ -101,10 +161,18 @@ const FIELDS: readonly FieldDef[] = [
 
 function foundationOf(r: Reader): PileFoundation {
   const kind = r.choice('foundation');
+  if (kind === 'fixity-soil') return { kind, soil: r.choice('soilType') as SoilPresetId, embeddedLengthM: r.num('embeddedLength') };
   if (kind === 'soil-springs') return { kind, embeddedLengthM: r.num('embeddedLength'), modulusNPerM2: r.num('soilModulus') };
   if (kind === 'soil-springs-linear') return { kind, embeddedLengthM: r.num('embeddedLength'), modulusGradientNPerM3: r.num('soilModulusGradient') };
   const depth = r.opt('fixityDepth');
   return depth === undefined ? { kind: 'fixity' } : { kind: 'fixity', depthBelowMudlineM: depth };
+}
+
+function headOf(r: Reader): PileHead {
+  const kind = r.choice('headRestraint');
+  if (kind === 'held') return { kind };
+  if (kind === 'spring') return { kind, rotationalStiffnessNmPerRad: r.num('headRotationalStiffness') };
+  return { kind: 'free' };
 }
 
 export const PILE_FORM = defineForm({
@@ -117,6 +185,10 @@ export const PILE_FORM = defineForm({
     const depth = r.num('waterDepth');
     const top = r.num('topAboveWater');
     if (!(top > -depth)) err('topAboveWater', `top above still water must be more than ${r.fmt('topAboveWater', -depth)} so the top is above the mudline`);
+    const kind = r.choice('foundation');
+    if ((kind === 'soil-springs' || kind === 'soil-springs-linear') && !(r.num('scourDepth') < r.num('embeddedLength'))) {
+      err('scourDepth', `scour must be less than the embedded length (${r.fmt('embeddedLength', r.num('embeddedLength'))})`);
+    }
     const growth = r.num('growthThickness');
     const gTop = r.num('growthTop');
     const gBottom = r.num('growthBottom');
@@ -135,6 +207,13 @@ export const PILE_FORM = defineForm({
       flooded: r.choice('flooded') === 'flooded',
       liquidDensityKgPerM3: r.num('liquidDensity'),
     };
+    // Added only when set, so a case saved before these fields existed reads to the same input.
+    const scour = r.num('scourDepth');
+    if (scour > 0) input.scourDepthM = scour;
+    const head = headOf(r);
+    if (head.kind !== 'free') input.head = head;
+    const axial = r.num('axialLoad');
+    if (axial > 0) input.axialCompressionN = axial;
     if (growth > 0) {
       input.marineGrowth = { thicknessM: growth, densityKgPerM3: r.num('growthDensity'), topAboveStillWaterM: gTop, bottomBelowStillWaterM: gBottom };
     }

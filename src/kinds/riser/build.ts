@@ -13,7 +13,8 @@ import type { BoundarySpec } from '../../physics/section/types';
 import { tubeSection } from '../../physics/shapes/tube';
 import { bool, fail, failText, finite, material, nonNegative, num, oneOf, optional, positive, record, tubeWall } from '../common/check';
 import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
-import { band, sortLandmarks } from '../common/layout';
+import { band, cutSegments, sortLandmarks } from '../common/layout';
+import { riserTopTension, tensionNote } from './tension';
 import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
 import type { Landmark, MemberBuild } from '../common/types';
 
@@ -23,7 +24,34 @@ export interface RiserCaisson {
   offsetM?: number;
   /** Direction of that offset from the direction of motion, degrees. Default 0 (offset along the motion). */
   offsetAngleDeg?: number;
+  /**
+   * Flow speed inside the caisson, m/s, measured or assumed. Default 0 (still water): the caisson shields the
+   * riser from the open current, so shedding inside it is screened with this speed (physics/beam FlowShielding).
+   */
+  innerFlowMPerS?: number;
+  /**
+   * Height of the caisson's open bottom above the riser's bottom end, m: the caisson surrounds the riser from
+   * here up. Default: the bottom of the water (the whole submerged length).
+   */
+  fromM?: number;
 }
+
+/** Marine growth on the riser's submerged length: adds mass and outer diameter (so added mass), no stiffness. */
+export interface RiserGrowth {
+  thicknessM: number;
+  densityKgPerM3: number;
+}
+
+/**
+ * What the entered top tension is. 'effective' (default): the tension that governs bending, used as is.
+ * 'wall': the true wall tension a load cell reads; the effective tension at the top is then
+ * T_eff = T_wall − p_i·A_i + p_e·A_e (R. Sparks, ASME J. Energy Resources Technology 106 (1984) 46), with p_e
+ * the hydrostatic pressure at the top (0 above the water).
+ */
+export type RiserTensionBasis = 'effective' | 'wall';
+
+/** Minimum gap to the caisson wall, as a fraction of the riser's outer radius, below which a warning is given. */
+export const SMALL_GAP_FRACTION = 0.05;
 
 export interface RiserInput {
   outerDiameterM: number;
@@ -42,6 +70,13 @@ export interface RiserInput {
   top: EndCondition;
   /** Tension applied at the top, N (0 = none). */
   topTensionN?: number;
+  /** What `topTensionN` is (see RiserTensionBasis). Default 'effective'. */
+  tensionBasis?: RiserTensionBasis;
+  /** Internal pressure at the top, Pa (gauge, as the external pressure), for tensionBasis 'wall'. Default 0. */
+  internalPressurePa?: number;
+  /** Mass at the top end (wellhead, tensioner frame), kg. Default 0. */
+  topMassKg?: number;
+  marineGrowth?: RiserGrowth;
   /**
    * Tension falls from the top by the effective (submerged) weight below it — compression near the bottom when
    * the top tension is small (the beam engine's effective-tension model). Default true.
@@ -74,6 +109,9 @@ export function validateRiserInput(raw: RiserInput): RiserInput {
     bottom: oneOf('bottom', o.bottom, END_CONDITIONS),
     top: oneOf('top', o.top, END_CONDITIONS),
     topTensionN: optional('topTensionN', o.topTensionN, nonNegative) ?? 0,
+    tensionBasis: o.tensionBasis === undefined ? 'effective' : oneOf('tensionBasis', o.tensionBasis, ['effective', 'wall'] as const),
+    internalPressurePa: optional('internalPressurePa', o.internalPressurePa, finite) ?? 0,
+    topMassKg: optional('topMassKg', o.topMassKg, nonNegative) ?? 0,
     tensionVariesWithWeight: optional('tensionVariesWithWeight', o.tensionVariesWithWeight, bool) ?? true,
     liquidDensityKgPerM3: positive('liquidDensityKgPerM3', o.liquidDensityKgPerM3),
     liquidFromM: optional('liquidFromM', o.liquidFromM, finite) ?? 0,
@@ -85,6 +123,10 @@ export function validateRiserInput(raw: RiserInput): RiserInput {
   if (o.coating !== undefined) {
     const c = record('coating', o.coating);
     input.coating = { thicknessM: nonNegative('coating.thicknessM', c.thicknessM), densityKgPerM3: nonNegative('coating.densityKgPerM3', c.densityKgPerM3) };
+  }
+  if (o.marineGrowth !== undefined) {
+    const g = record('marineGrowth', o.marineGrowth);
+    input.marineGrowth = { thicknessM: nonNegative('marineGrowth.thicknessM', g.thicknessM), densityKgPerM3: nonNegative('marineGrowth.densityKgPerM3', g.densityKgPerM3) };
   }
   if (!Array.isArray(o.guideElevationsM)) fail('guideElevationsM', 'an array of heights (possibly empty)', o.guideElevationsM);
   const guides = (o.guideElevationsM as unknown[]).map((z, i) => {
@@ -101,17 +143,32 @@ export function validateRiserInput(raw: RiserInput): RiserInput {
     const c = record('caisson', o.caisson);
     const dc = positive('caisson.innerDiameterM', c.innerDiameterM);
     const e = optional('caisson.offsetM', c.offsetM, nonNegative) ?? 0;
-    const outer = d + 2 * (input.coating?.thicknessM ?? 0);
+    const outer = riserOuterM(input);
     if (!(dc > outer + 2 * e)) {
-      fail('caisson.innerDiameterM', `more than the riser's outer diameter with coating plus twice the offset (${num(outer + 2 * e)} m) so the riser fits with a gap`, dc);
+      fail('caisson.innerDiameterM', `more than the riser's outer diameter with coating and growth plus twice the offset (${num(outer + 2 * e)} m) so the riser fits with a gap`, dc);
     }
-    input.caisson = { innerDiameterM: dc, offsetM: e, offsetAngleDeg: optional('caisson.offsetAngleDeg', c.offsetAngleDeg, finite) ?? 0 };
+    input.caisson = {
+      innerDiameterM: dc,
+      offsetM: e,
+      offsetAngleDeg: optional('caisson.offsetAngleDeg', c.offsetAngleDeg, finite) ?? 0,
+      innerFlowMPerS: optional('caisson.innerFlowMPerS', c.innerFlowMPerS, nonNegative) ?? 0,
+    };
+    const from = optional('caisson.fromM', c.fromM, finite);
+    if (from !== undefined) {
+      if (!(from < input.liquidToM)) fail('caisson.fromM', `below the water surface (liquidToM, ${num(input.liquidToM)} m)`, from);
+      input.caisson.fromM = from;
+    }
   }
   const supports = riserSupports(input);
-  if (leavesRigidBodyMotion(supports, lengthM, input.topTensionN! > 0 && !input.tensionVariesWithWeight)) {
+  if (leavesRigidBodyMotion(supports, lengthM, riserTopTension(input).effectiveN > 0 && !input.tensionVariesWithWeight)) {
     failText('bottom, top and guideElevationsM', 'enough support to hold the riser: a clamped end, or two held points (guides or pinned ends)', `bottom "${input.bottom}", top "${input.top}" and ${guides.length} guide(s)`);
   }
   return input;
+}
+
+/** Outer diameter with coating and marine growth, m (what the flow and the caisson gap see). */
+export function riserOuterM(r: Pick<RiserInput, 'outerDiameterM' | 'coating' | 'marineGrowth'>): number {
+  return r.outerDiameterM + 2 * (r.coating?.thicknessM ?? 0) + 2 * (r.marineGrowth?.thicknessM ?? 0);
 }
 
 function riserSupports(r: RiserInput): MemberSupport[] {
@@ -122,31 +179,54 @@ function riserSupports(r: RiserInput): MemberSupport[] {
   ];
 }
 
+/** One layer equal in thickness and mass per metre to a coating with marine growth over it. */
+function outsideLayer(d: number, coat: RiserInput['coating'], growth: RiserGrowth | undefined): { thicknessM: number; densityKgPerM3: number } | undefined {
+  const tc = coat?.thicknessM ?? 0;
+  const tg = growth?.thicknessM ?? 0;
+  if (tc + tg <= 0) return undefined;
+  if (tg <= 0) return { ...coat! };
+  const ring = (inner: number, t: number) => (Math.PI / 4) * ((inner + 2 * t) ** 2 - inner ** 2);
+  const mass = (coat?.densityKgPerM3 ?? 0) * ring(d, tc) + (growth?.densityKgPerM3 ?? 0) * ring(d + 2 * tc, tg);
+  return { thicknessM: tc + tg, densityKgPerM3: mass / ring(d, tc + tg) };
+}
+
 export function buildRiserModel(raw: RiserInput): MemberBuild {
   const r = validateRiserInput(raw);
   const L = r.lengthM;
   const coat = r.coating && r.coating.thicknessM > 0 ? r.coating : undefined;
-  const segment: MemberSegment = {
-    fromM: 0,
-    toM: L,
-    section: tubeSection(r.outerDiameterM, r.wallThicknessM),
-    youngsModulusPa: r.youngsModulusPa,
-    densityKgPerM3: r.materialDensityKgPerM3,
-  };
-  if (r.contentsDensityKgPerM3 > 0) segment.contentsDensityKgPerM3 = r.contentsDensityKgPerM3;
-  if (coat) segment.coating = { ...coat };
-
-  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, L, r.outerDiameterM));
-  const model: MemberModel = { lengthM: L, segments: [segment], supports: riserSupports(r), ...theory.model };
-  if (r.topTensionN! > 0 || r.tensionVariesWithWeight) model.tensionN = r.topTensionN;
-  if (r.tensionVariesWithWeight) model.tensionVariesWithWeight = true;
-
   const wetFrom = Math.max(0, r.liquidFromM!);
   const wetTo = Math.min(L, r.liquidToM);
+  const growth = r.marineGrowth && r.marineGrowth.thicknessM > 0 && wetTo > wetFrom ? r.marineGrowth : undefined;
+  // The caisson surrounds the riser from its open bottom (default: the bottom of the water) up.
   const c = r.caisson;
+  const caissonFrom = c ? Math.max(wetFrom, c.fromM ?? wetFrom) : wetTo;
+  const inCaisson = c !== undefined && wetTo > caissonFrom;
+  // Growth lives on the submerged length only; elsewhere the coating alone. Cut also where the caisson starts.
+  const cuts = [...(growth ? [wetFrom, wetTo] : []), ...(inCaisson && caissonFrom > wetFrom ? [caissonFrom] : [])];
+  const segments = cutSegments(L, cuts, (fromM, toM, mid): MemberSegment => {
+    const segment: MemberSegment = {
+      fromM,
+      toM,
+      section: tubeSection(r.outerDiameterM, r.wallThicknessM),
+      youngsModulusPa: r.youngsModulusPa,
+      densityKgPerM3: r.materialDensityKgPerM3,
+    };
+    if (r.contentsDensityKgPerM3 > 0) segment.contentsDensityKgPerM3 = r.contentsDensityKgPerM3;
+    const layer = outsideLayer(r.outerDiameterM, coat, growth && mid > wetFrom && mid < wetTo ? growth : undefined);
+    if (layer) segment.coating = layer;
+    return segment;
+  });
+
+  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, L, r.outerDiameterM));
+  const model: MemberModel = { lengthM: L, segments, supports: riserSupports(r), ...theory.model };
+  const tension = riserTopTension(r);
+  if (tension.effectiveN !== 0 || r.tensionVariesWithWeight) model.tensionN = tension.effectiveN;
+  if (r.tensionVariesWithWeight) model.tensionVariesWithWeight = true;
+  if (r.topMassKg! > 0) model.masses = [{ atM: L, massKg: r.topMassKg! }];
+
   if (wetTo > wetFrom) {
     model.liquid = { densityKgPerM3: r.liquidDensityKgPerM3, fromM: wetFrom, toM: wetTo };
-    if (c) {
+    if (c && inCaisson) {
       const th = (c.offsetAngleDeg! * Math.PI) / 180;
       const boundary: BoundarySpec = {
         kind: 'enclosure',
@@ -156,6 +236,8 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
         centerM: [-c.offsetM! * Math.cos(th) + 0, -c.offsetM! * Math.sin(th) + 0],
       };
       model.liquid.boundaries = [boundary];
+      if (caissonFrom > wetFrom) model.liquid.boundariesFromM = caissonFrom;
+      model.liquid.flowShielding = [{ fromM: caissonFrom, toM: wetTo, flowSpeedMPerS: c.innerFlowMPerS!, label: 'inside the caisson' }];
     }
     if (r.endEffect3d) model.liquid.endEffect3d = true;
   }
@@ -167,16 +249,37 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
     { id: 'water-surface', label: 'Water surface', zM: r.liquidToM },
   ];
   if (r.liquidFromM! > 0) landmarks.push({ id: 'liquid-bottom', label: 'Bottom of the water', zM: r.liquidFromM! });
+  if (model.masses) landmarks.push({ id: 'mass', label: 'Top mass', zM: L });
 
   const notes = [
     'Guides hold the riser sideways and let it rotate (pinned).',
     'Contents fill the whole length and move with the riser; they take no added mass.',
-    r.tensionVariesWithWeight
-      ? 'Tension is applied at the top and falls downwards by the submerged weight (effective tension).'
-      : 'Tension is constant along the riser.',
+    tensionNote(tension, !!r.tensionVariesWithWeight),
   ];
   notes.push(...theory.notes);
-  if (c) notes.push('The caisson surrounds the riser over the whole submerged length and confines the water (2D section solver).');
+  if (growth) notes.push('Marine growth on the submerged length adds mass and outer diameter (so added mass) but no stiffness.');
+  if (model.masses) notes.push('The top mass (wellhead, tensioner) moves with the top end; its weight hangs on the tension below it.');
+  if (c && !inCaisson) notes.push('The caisson starts above the water: it neither confines the water nor shields the riser.');
+  if (c && inCaisson) {
+    notes.push(
+      caissonFrom > wetFrom
+        ? 'The caisson surrounds the riser from its open bottom up and confines the water there (2D section solver); below it the riser is in open water and the current.'
+        : 'The caisson surrounds the riser over the whole submerged length and confines the water (2D section solver).',
+    );
+    notes.push(
+      c.innerFlowMPerS! > 0
+        ? 'Inside the caisson the riser is shielded from the open current: shedding there is screened with the flow inside as entered.'
+        : 'Inside the caisson the riser is shielded from the open current: shedding there is screened in still water (no flow inside entered).',
+    );
+    const gap = (c.innerDiameterM - riserOuterM(r)) / 2 - c.offsetM!;
+    const radius = riserOuterM(r) / 2;
+    if (gap < SMALL_GAP_FRACTION * radius) {
+      notes.push(
+        `Warning: the smallest gap to the caisson wall is ${num(Number((gap * 1000).toPrecision(3)))} mm, under ${SMALL_GAP_FRACTION * 100} % of the riser's radius: ` +
+          'the confined added mass is very sensitive to the gap and the offset, and the riser may touch the caisson (contact is not modelled).',
+      );
+    }
+  }
 
   return {
     kind: 'riser',
@@ -185,11 +288,12 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
     landmarks: sortLandmarks(landmarks),
     bands: [
       ...band('submerged', 'In water', wetFrom, wetTo, L),
+      ...(growth ? band('marine-growth', 'Marine growth', wetFrom, wetTo, L) : []),
       ...(coat ? band('coating', 'Coating', 0, L, L) : []),
       ...(r.contentsDensityKgPerM3 > 0 ? band('contents', 'Contents', 0, L, L) : []),
-      ...(c ? band('confined', 'Inside caisson', wetFrom, wetTo, L) : []),
+      ...(inCaisson ? band('confined', 'Inside caisson', caissonFrom, wetTo, L) : []),
     ],
-    ...(c ? { confinement: { kind: 'surrounding-tube' as const, innerDiameterM: c.innerDiameterM, offsetM: c.offsetM!, offsetAngleDeg: c.offsetAngleDeg! } } : {}),
+    ...(inCaisson ? { confinement: { kind: 'surrounding-tube' as const, innerDiameterM: c.innerDiameterM, offsetM: c.offsetM!, offsetAngleDeg: c.offsetAngleDeg! } } : {}),
     notes,
   };
 }

@@ -1,6 +1,7 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
 import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
+import { riserTopTension } from './tension';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import {
@@ -18,6 +19,7 @@ import {
   yesNoField,
 } from '../../forms/presets';
 import type { Choice, FieldDef } from '../../forms/types';
+import { speed } from '../../forms/resonance-fields';
 
 const END_CHOICES: readonly Choice[] = [
   { value: 'clamped', label: 'Clamped', help: 'Held in position and rotation.' },
@@ -61,6 +63,11 @@ const FIELDS: readonly FieldDef[] = [
     emptyMeans: 'no caisson',
     help: 'If the riser runs inside a caisson or conductor over its submerged length, the water between them is confined.',
   }),
+  speed('caissonInnerFlow', 'Current inside the caisson', '', {
+    optional: true,
+    emptyMeans: 'still water',
+    help: 'Used only with a caisson: the caisson shields the riser from the open current, so shedding inside it is screened with this flow. Leave empty for still water; enter a measured or assumed flow if water moves through the caisson (open bottom, pumped or vented).',
+  }),
   ...materialFields('carbon-steel', { advanced: true }),
   densityField('contentsDensity', 'Contents density', '', { optional: true, emptyMeans: 'from the contents', presetFrom: 'contents', advanced: true }),
   sizeField('coatingThickness', 'Coating thickness', '0', { min: NON_NEGATIVE, advanced: true }),
@@ -69,6 +76,12 @@ const FIELDS: readonly FieldDef[] = [
     help: 'Polymer coatings about 900 to 1400 kg/m³, concrete weight coat 2200 to 3000 kg/m³ (common practice).',
   }),
   heightField('waterBottom', 'Water from (above the bottom)', '0', { advanced: true, help: 'Lower end of the water around the riser, if it does not start at the bottom end.' }),
+  heightField('caissonBottom', 'Caisson open bottom (above the bottom end)', '', {
+    optional: true,
+    emptyMeans: 'the bottom of the water',
+    advanced: true,
+    help: 'Where the caisson ends below: it confines the water and shields the riser from the current from here up; below it the riser is in open water.',
+  }),
   sizeField('caissonOffset', 'Caisson offset', '0', { min: NON_NEGATIVE, advanced: true, help: 'Distance between the riser and caisson centres.' }),
   {
     key: 'caissonOffsetAngle',
@@ -80,6 +93,46 @@ const FIELDS: readonly FieldDef[] = [
     advanced: true,
     help: 'Angle between the offset and the direction of vibration: 0 = towards the near caisson wall.',
   },
+  {
+    key: 'tensionBasis',
+    label: 'Top tension is',
+    type: 'choice',
+    choices: [
+      { value: 'effective', label: 'Effective tension', help: 'The tension that governs bending (what riser analyses report), used as entered.' },
+      { value: 'wall', label: 'Wall tension (load cell)', help: 'The true tension in the pipe wall; internal and external pressure turn it into the effective tension (Sparks, 1984).' },
+    ],
+    default: 'effective',
+    advanced: true,
+    help: "Bending uses the effective tension T_eff = T_wall − p_i·A_i + p_e·A_e (R. Sparks, ASME J. Energy Resources Technology 106, 1984); the tension used is shown with the results.",
+  },
+  {
+    key: 'internalPressure',
+    label: 'Internal pressure at the top',
+    type: 'quantity',
+    dimension: 'pressure',
+    units: { si: 'bar', us: 'psi' },
+    default: '0',
+    advanced: true,
+    showWhen: { key: 'tensionBasis', values: ['wall'] },
+    help: 'Gauge pressure of the contents at the top. The outside water pressure at the top is worked out from the water surface.',
+  },
+  {
+    key: 'topMass',
+    label: 'Top mass',
+    type: 'quantity',
+    dimension: 'mass',
+    units: { si: 't', us: 'lb' },
+    default: '0',
+    min: NON_NEGATIVE,
+    advanced: true,
+    help: 'Wellhead, tree or tensioner frame carried at the top end; 0 for none.',
+  },
+  sizeField('growthThickness', 'Marine growth thickness', '0', {
+    min: NON_NEGATIVE,
+    advanced: true,
+    help: 'On the submerged length; typically 50 to 100 mm in the upper 40 m of North Sea waters (NORSOK N-003, Actions and action effects); 0 for none.',
+  }),
+  densityField('growthDensity', 'Marine growth density', '1325', { advanced: true, help: 'About 1325 kg/m³ (NORSOK N-003, Actions and action effects).' }),
   yesNoField('weightInTension', 'Weight changes the tension', 'yes', {
     advanced: true,
     help: 'Yes: tension falls from the top by the submerged weight below (compression near the bottom if the top tension is small).',
@@ -105,19 +158,19 @@ export const RISER_FORM = defineForm({
     const waterSurface = r.num('waterSurface');
     if (!(waterSurface > waterBottom)) err('waterSurface', `the water surface must be above where the water starts (${r.fmt('waterSurface', waterBottom)})`);
     const coating = r.num('coatingThickness');
+    const growth = r.num('growthThickness');
     const dc = r.opt('caissonDiameter');
     const offset = r.num('caissonOffset');
-    if (dc !== undefined && !(dc > tube.outerDiameterM + 2 * coating + 2 * offset)) {
-      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (${r.fmt('caissonDiameter', tube.outerDiameterM + 2 * coating + 2 * offset)})`);
+    const outer = tube.outerDiameterM + 2 * coating + 2 * growth;
+    if (dc !== undefined && !(dc > outer + 2 * offset)) {
+      const what = growth > 0 ? 'with coating and marine growth' : 'with coating';
+      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter ${what} plus twice the offset (${r.fmt('caissonDiameter', outer + 2 * offset)})`);
     }
     const bottom = r.choice('bottomEnd') as EndCondition;
     const top = r.choice('topEnd') as EndCondition;
     const tension = r.num('topTension');
     const varies = r.choice('weightInTension') === 'yes';
     const supports = [...endSupports(bottom, 0), ...guides.map((atM) => ({ atM, kind: 'pinned' as const })), ...endSupports(top, length)];
-    if (leavesRigidBodyMotion(supports, length, tension > 0 && !varies)) {
-      err('bottomEnd', 'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned');
-    }
     const input: RiserInput = {
       ...tube,
       ...commonInput(r),
@@ -133,8 +186,26 @@ export const RISER_FORM = defineForm({
       liquidToM: waterSurface,
     };
     if (coating > 0) input.coating = { thicknessM: coating, densityKgPerM3: r.num('coatingDensity') };
+    if (growth > 0) input.marineGrowth = { thicknessM: growth, densityKgPerM3: r.num('growthDensity') };
+    const topMass = r.num('topMass');
+    if (topMass > 0) input.topMassKg = topMass;
+    if (r.choice('tensionBasis') === 'wall') {
+      input.tensionBasis = 'wall';
+      input.internalPressurePa = r.num('internalPressure');
+    }
+    // A constant tension holds rotation like a pendulum: the effective tension, as the build uses it.
+    if (leavesRigidBodyMotion(supports, length, riserTopTension(input).effectiveN > 0 && !varies)) {
+      err('bottomEnd', 'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned');
+    }
     // The angle field reads in radians (SI); the input takes degrees.
-    if (dc !== undefined) input.caisson = { innerDiameterM: dc, offsetM: offset, offsetAngleDeg: (r.num('caissonOffsetAngle') * 180) / Math.PI };
+    if (dc !== undefined) {
+      input.caisson = { innerDiameterM: dc, offsetM: offset, offsetAngleDeg: (r.num('caissonOffsetAngle') * 180) / Math.PI, innerFlowMPerS: r.opt('caissonInnerFlow') ?? 0 };
+      const bottom = r.opt('caissonBottom');
+      if (bottom !== undefined) {
+        if (!(bottom < waterSurface)) err('caissonBottom', `the caisson's open bottom must be below the water surface (${r.fmt('waterSurface', waterSurface)})`);
+        input.caisson.fromM = bottom;
+      }
+    }
     return input;
   },
   validate: validateRiserInput,

@@ -13,7 +13,8 @@
 import type { MemberModel, MemberSection, MemberSegment, MemberSupport } from '../../physics/beam/model';
 import { rodSection } from '../../physics/shapes/rod';
 import { tubeSection } from '../../physics/shapes/tube';
-import { bool, fail, material, nonNegative, num, optional, positive, record } from '../common/check';
+import { WATER_TEMPERATURE_RANGE_C, waterProperties } from '../../physics/practice/liquid-properties';
+import { bool, fail, finite, material, nonNegative, num, optional, positive, record } from '../common/check';
 import { band, sortLandmarks } from '../common/layout';
 import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
 import type { Landmark, MemberBuild } from '../common/types';
@@ -34,6 +35,13 @@ export interface StemInput {
   /** Inner diameter of a coaxial tube around the stem (confinement), m; absent = open liquid. */
   surroundingInnerDiameterM?: number;
   rootSupport: StemRoot;
+  /**
+   * Water temperature, °C (10–60): density and viscosity of water from the table in
+   * physics/practice/liquid-properties.ts (CRC Handbook, Properties of water) replace liquidDensityKgPerM3.
+   */
+  waterTemperatureC?: number;
+  /** Length from the support face inside a nozzle or standoff, m: no flow over it (still liquid). Default 0. */
+  shieldedLengthM?: number;
   endEffect3d?: boolean;
   /** 'auto' (default): Timoshenko beam when length / section depth < 10, else Euler–Bernoulli (theory.ts). */
   beamTheory?: BeamTheoryChoice;
@@ -59,9 +67,17 @@ export function validateStemInput(raw: StemInput): StemInput {
     tipMassKg: optional('tipMassKg', o.tipMassKg, nonNegative) ?? 0,
     liquidDensityKgPerM3: positive('liquidDensityKgPerM3', o.liquidDensityKgPerM3),
     rootSupport,
+    shieldedLengthM: optional('shieldedLengthM', o.shieldedLengthM, nonNegative) ?? 0,
     endEffect3d: optional('endEffect3d', o.endEffect3d, bool) ?? false,
     beamTheory: beamTheoryChoice(o.beamTheory),
   };
+  if (!(input.shieldedLengthM! < input.insertionLengthM)) fail('shieldedLengthM', `less than insertionLengthM (${num(input.insertionLengthM)} m)`, input.shieldedLengthM);
+  const temp = optional('waterTemperatureC', o.waterTemperatureC, finite);
+  if (temp !== undefined) {
+    const [lo, hi] = WATER_TEMPERATURE_RANGE_C;
+    if (!(temp >= lo && temp <= hi)) fail('waterTemperatureC', `within ${lo}–${hi} °C (the range of the water table)`, temp);
+    input.waterTemperatureC = temp;
+  }
   const s = optional('surroundingInnerDiameterM', o.surroundingInnerDiameterM, positive);
   if (s !== undefined) {
     if (!(s > Math.max(root, tip))) fail('surroundingInnerDiameterM', `more than the stem's largest diameter (${num(Math.max(root, tip))} m)`, s);
@@ -105,6 +121,14 @@ export function buildStemModel(raw: StemInput): MemberBuild {
     ...theory.model,
     liquid: { densityKgPerM3: s.liquidDensityKgPerM3, fromM: 0, toM: L },
   };
+  const water = s.waterTemperatureC !== undefined ? waterProperties(s.waterTemperatureC) : null;
+  if (water) {
+    model.liquid!.densityKgPerM3 = water.densityKgPerM3;
+    model.liquid!.kinematicViscosityM2PerS = water.kinematicViscosityM2PerS;
+    model.liquid!.viscositySource = `water at ${num(s.waterTemperatureC!)} °C: ρ = ${num(Number(water.densityKgPerM3.toPrecision(5)))} kg/m³, ν = ${num(Number(water.kinematicViscosityM2PerS.toPrecision(4)))} m²/s (CRC Handbook of Chemistry and Physics, Properties of water; interpolated)`;
+  }
+  const shielded = Math.min(s.shieldedLengthM!, L);
+  if (shielded > 0) model.liquid!.flowShielding = [{ fromM: 0, toM: shielded, flowSpeedMPerS: 0, label: 'inside the nozzle' }];
   if (s.surroundingInnerDiameterM !== undefined) {
     model.liquid!.boundaries = [{ kind: 'enclosure', shape: 'circle', diameterM: s.surroundingInnerDiameterM }];
   }
@@ -123,6 +147,8 @@ export function buildStemModel(raw: StemInput): MemberBuild {
   ];
   notes.push(...theory.notes);
   if (s.surroundingInnerDiameterM !== undefined) notes.push('A coaxial tube around the stem confines the liquid (2D section solver).');
+  if (water) notes.push(`Liquid: ${model.liquid!.viscositySource}; the density entered is not used.`);
+  if (shielded > 0) notes.push('Inside the nozzle (from the support face) the stem sees no flow: shedding there is screened in still liquid. The nozzle\'s confinement of the liquid is not modelled.');
 
   return {
     kind: 'stem',
@@ -131,6 +157,7 @@ export function buildStemModel(raw: StemInput): MemberBuild {
     landmarks: sortLandmarks(landmarks),
     bands: [
       ...band('submerged', 'In liquid', 0, L, L),
+      ...(shielded > 0 ? band('confined', 'Inside the nozzle (no flow)', 0, shielded, L) : []),
       ...(s.surroundingInnerDiameterM !== undefined ? band('confined', 'Inside a surrounding tube', 0, L, L) : []),
     ],
     ...(s.surroundingInnerDiameterM !== undefined

@@ -4,6 +4,7 @@ import { COMMON_CORE_FIELDS, commonInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
 import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
 import type { FieldDef } from '../../forms/types';
+import { WATER_TEMPERATURE_RANGE_C } from '../../physics/practice/liquid-properties';
 
 const FIELDS: readonly FieldDef[] = [
   sizeField('insertionLength', 'Insertion length', '250', { help: 'From the support face (pipe or vessel wall, or nozzle weld) to the tip.' }),
@@ -20,7 +21,20 @@ const FIELDS: readonly FieldDef[] = [
     default: '0',
     min: NON_NEGATIVE,
   },
-  liquidDensityField(1000, 'Process liquid: water 1000 kg/m³, light oils and fuels about 800 to 850 kg/m³ (common inputs).'),
+  liquidDensityField(1000, 'Process liquid: water 1000 kg/m³, light oils and fuels about 800 to 850 kg/m³ (common inputs). Not used when a water temperature is given.'),
+  {
+    key: 'waterTemperature',
+    label: 'Water temperature (°C)',
+    type: 'quantity',
+    dimension: 'ratio',
+    units: { si: '', us: '' },
+    default: '',
+    optional: true,
+    emptyMeans: 'density as entered',
+    min: { valueSI: WATER_TEMPERATURE_RANGE_C[0], inclusive: true },
+    max: { valueSI: WATER_TEMPERATURE_RANGE_C[1], inclusive: true },
+    help: `For water, in °C (${WATER_TEMPERATURE_RANGE_C[0]}–${WATER_TEMPERATURE_RANGE_C[1]}): density and viscosity from the CRC Handbook of Chemistry and Physics (Properties of water), in place of the density above. Leave empty for other liquids.`,
+  },
   sizeField('surroundingDiameter', 'Surrounding tube inner diameter', '', {
     optional: true,
     emptyMeans: 'open liquid',
@@ -31,10 +45,11 @@ const FIELDS: readonly FieldDef[] = [
     label: 'Support at the root',
     type: 'choice',
     choices: [
-      { value: 'rigid', label: 'Rigid', help: 'Clamped at the support face.' },
+      { value: 'rigid', label: 'Rigid', help: 'Clamped at the support face: a stem welded into a thick wall or a stiff forged boss.' },
       { value: 'rotational-spring', label: 'Flexible', help: 'Held in position, rotating against a spring (a flexible nozzle or flange).' },
     ],
     default: 'rigid',
+    help: 'A real mounting is never fully rigid: its compliance lowers the natural frequency. ASME PTC 19.3 TW-2010 (Thermowells) allows for this with a support-compliance factor on the ideal clamped frequency; here a flexible root is a rotational spring instead. Rigid gives the upper bound.',
   },
   {
     key: 'rootStiffness',
@@ -45,7 +60,13 @@ const FIELDS: readonly FieldDef[] = [
     default: '50',
     min: POSITIVE,
     showWhen: { key: 'rootSupport', values: ['rotational-spring'] },
+    help: 'Moment per radian at the support face: from the nozzle or flange as a short beam (about E·I/L of the nozzle for a standoff of length L, common practice) or from a measured frequency. The default 50 kN m/rad is a placeholder, not a published value: enter your own.',
   },
+  sizeField('shieldedLength', 'Length inside the nozzle', '0', {
+    min: NON_NEGATIVE,
+    advanced: true,
+    help: 'Length from the support face that stays inside a nozzle or standoff, out of the flow: no shedding is screened over it.',
+  }),
   END_EFFECT_FIELD,
   BEAM_THEORY_FIELD,
 ];
@@ -77,6 +98,14 @@ export const STEM_FORM = defineForm({
       rootSupport: r.choice('rootSupport') === 'rigid' ? { kind: 'rigid' } : { kind: 'rotational-spring', stiffnessNmPerRad: r.num('rootStiffness') },
     };
     if (around !== undefined) input.surroundingInnerDiameterM = around;
+    // Added only when set, so a case saved before these fields existed reads to the same input.
+    const temp = r.opt('waterTemperature');
+    if (temp !== undefined) input.waterTemperatureC = temp;
+    const shielded = r.num('shieldedLength');
+    if (shielded > 0) {
+      if (!(shielded < input.insertionLengthM)) err('shieldedLength', `the length inside the nozzle must be less than the insertion length (${r.fmt('insertionLength', input.insertionLengthM)})`);
+      input.shieldedLengthM = shielded;
+    }
     return input;
   },
   validate: validateStemInput,

@@ -8,7 +8,7 @@
 import type { MemberModel, MemberSegment } from './model';
 import { cylinderEndEffectFactor, END_EFFECT_SOURCE, PERFORATION_SOURCE, perforationFactor, plateEndEffectFactor } from './reductions';
 import { type SectionSolver, sectionInput } from './section-bridge';
-import { sectionAt } from './section-props';
+import { interpolateSection, sectionAt } from './section-props';
 import { shapeOf } from '../shapes/registry';
 import type { AddedMassMethod } from '../shapes/types';
 
@@ -21,6 +21,35 @@ export interface SegmentAddedMass {
   caStart: number;
   caEnd: number;
   perforationFactor: number;
+  /**
+   * A tapered segment solved by the section solver: Ca at stations along it, `t` ascending from 0 to 1 and
+   * `ca` beside it (perforation included); Ca is interpolated linearly between stations, not between the ends
+   * (confined added mass is far from linear along a taper: Fritz's annulus Ca = (R2² + R1²)/(R2² − R1²)).
+   */
+  stations?: { t: Float64Array; ca: Float64Array };
+}
+
+/** Taper stations: bisect while the linear prediction at a midpoint misses the solved Ca by more than this. */
+export const TAPER_CA_RTOL = 0.005;
+/** Deepest bisection of a taper (2^6 = 64 intervals at most). */
+const TAPER_MAX_DEPTH = 6;
+
+/** Ca at fraction t of a segment from its plan: piecewise linear over the stations, else between the ends. */
+export function caAt(s: SegmentAddedMass, t: number): number {
+  const st = s.stations;
+  if (!st) return s.caStart + (s.caEnd - s.caStart) * t;
+  const n = st.t.length;
+  if (t <= 0) return st.ca[0];
+  if (t >= 1) return st.ca[n - 1];
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (st.t[mid] <= t) lo = mid;
+    else hi = mid;
+  }
+  const u = (t - st.t[lo]) / (st.t[hi] - st.t[lo]);
+  return st.ca[lo] + u * (st.ca[hi] - st.ca[lo]);
 }
 
 export interface EndEffectUsed {
@@ -54,7 +83,7 @@ export type SectionCache = Map<string, { ca: number; relativeError: number | nul
 export function addedMassPerM(plan: AddedMassPlan, seg: MemberSegment, segIndex: number, t: number, referenceAreaM2?: number): number {
   const s = plan.segments[segIndex];
   if (!s) return 0;
-  const ca = s.caStart + (s.caEnd - s.caStart) * t;
+  const ca = caAt(s, t);
   const factor = plan.endEffect ? plan.endEffect.factor : 1;
   return ca * plan.densityKgPerM3 * (referenceAreaM2 ?? sectionAt(seg, t).referenceAreaM2) * factor;
 }
@@ -79,37 +108,67 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     const shape = shapeOf(seg.section);
     anyPlate ||= shape.perforable;
     const perf = shape.perforable ? perforationFactor(p) : 1;
-    if (!confined && shape.closedForm) {
+    // Surrounded here? Everywhere in the liquid, or only above liq.boundariesFromM (segments never straddle it).
+    const segConfined = confined && (liq.boundariesFromM === undefined || 0.5 * (seg.fromM + seg.toM) >= liq.boundariesFromM);
+    const segBoundaries = segConfined ? boundaries : [];
+    if (!segConfined && shape.closedForm) {
       segments.push({ method: shape.closedForm, caStart: perf, caEnd: perf, perforationFactor: perf });
       continue;
     }
     if (!solver) {
-      const needs = confined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
+      const needs = segConfined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
       return { ok: false, reason: 'section-solver-failed', message: `${needs} the section solver, which is not available` };
     }
     const coat = seg.coating?.thicknessM ?? 0;
-    const cas: number[] = [];
-    for (const [t, section] of [[0, seg.section], [1, seg.endSection ?? seg.section]] as const) {
-      const input = sectionInput(section, coat, rho, boundaries);
+    let failure: string | null = null;
+    // Ca of the section at fraction t of the segment, through the cache; null (and `failure` set) when it fails.
+    const caOf = (t: number): number | null => {
+      const section = t === 0 ? seg.section : t === 1 ? (seg.endSection ?? seg.section) : interpolateSection(seg, t);
+      const input = sectionInput(section, coat, rho, segBoundaries);
       const key = JSON.stringify(input);
       let hit = cache.get(key);
       if (hit === undefined) {
         const out = solver(input);
         solves++;
         if (!out.ok) {
-          return { ok: false, reason: 'section-solver-failed', message: `added mass of segments[${i}] in its surroundings: ${out.message}` };
+          failure = `added mass of segments[${i}] in its surroundings: ${out.message}`;
+          return null;
         }
         const ca = out.result.addedMass[0][0] / (rho * sectionAt(seg, t).referenceAreaM2);
         if (!(Number.isFinite(ca) && ca > 0)) {
-          return { ok: false, reason: 'section-solver-failed', message: `section solver gave a non-positive added mass for segments[${i}]` };
+          failure = `section solver gave a non-positive added mass for segments[${i}]`;
+          return null;
         }
         hit = { ca, relativeError: out.result.swayRelativeError ?? null };
         cache.set(key, hit);
       }
       if (hit.relativeError !== null) worstError = Math.max(worstError ?? 0, hit.relativeError);
-      cas.push(hit.ca * perf);
+      return hit.ca * perf;
+    };
+    const ca0 = caOf(0);
+    const ca1 = ca0 === null ? null : caOf(1);
+    if (ca0 === null || ca1 === null) return { ok: false, reason: 'section-solver-failed', message: failure! };
+    const plan: SegmentAddedMass = { method: 'section solver', caStart: ca0, caEnd: ca1, perforationFactor: perf };
+    if (seg.endSection && segConfined) {
+      // Solve the section where it changes: bisect each interval until the straight line between its ends
+      // predicts the solved Ca at its middle within TAPER_CA_RTOL (or the depth limit).
+      const pts: [number, number][] = [[0, ca0]];
+      const refine = (ta: number, ca: number, tb: number, cb: number, depth: number): boolean => {
+        const tm = 0.5 * (ta + tb);
+        const cm = caOf(tm);
+        if (cm === null) return false;
+        if (depth < TAPER_MAX_DEPTH && Math.abs(cm - 0.5 * (ca + cb)) > TAPER_CA_RTOL * cm) {
+          if (!refine(ta, ca, tm, cm, depth + 1)) return false;
+          return refine(tm, cm, tb, cb, depth + 1);
+        }
+        pts.push([tm, cm]);
+        return true;
+      };
+      if (!refine(0, ca0, 1, ca1, 1)) return { ok: false, reason: 'section-solver-failed', message: failure! };
+      pts.push([1, ca1]);
+      plan.stations = { t: Float64Array.from(pts, (p) => p[0]), ca: Float64Array.from(pts, (p) => p[1]) };
     }
-    segments.push({ method: 'section solver', caStart: cas[0], caEnd: cas[1], perforationFactor: perf });
+    segments.push(plan);
   }
   if (p > 0 && !anyPlate) warnings.push('liquid.perforationRatio applies to plate strips only; it was not used for this member.');
   const perforation = anyPlate && p > 0 ? { ratio: p, factor: perforationFactor(p), source: PERFORATION_SOURCE } : null;

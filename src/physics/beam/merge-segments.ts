@@ -10,14 +10,17 @@ function signature(s: MemberSegment): string {
   return JSON.stringify([s.section, s.youngsModulusPa, s.densityKgPerM3, s.poissonRatio ?? null, s.contentsDensityKgPerM3 ?? 0, s.coating ?? null]);
 }
 
-/** Segments with equal prismatic neighbours merged (the input is not changed). */
-export function mergeEqualSegments(segments: readonly MemberSegment[]): MemberSegment[] {
+/**
+ * Segments with equal prismatic neighbours merged (the input is not changed). `keepBreaksAt` are levels a
+ * segment end must stay at even between equal neighbours (e.g. where a caisson's boundaries stop).
+ */
+export function mergeEqualSegments(segments: readonly MemberSegment[], keepBreaksAt: readonly number[] = []): MemberSegment[] {
   const out: MemberSegment[] = [];
   let lastSig = '';
   for (const s of segments) {
     const sig = s.endSection ? '' : signature(s);
     const prev = out[out.length - 1];
-    if (prev && sig !== '' && sig === lastSig) prev.toM = s.toM;
+    if (prev && sig !== '' && sig === lastSig && !keepBreaksAt.includes(prev.toM)) prev.toM = s.toM;
     else out.push({ ...s });
     lastSig = sig;
   }

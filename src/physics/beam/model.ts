@@ -49,6 +49,19 @@ export interface LumpedMass {
   rotaryInertiaKgM2?: number;
 }
 
+/**
+ * A stretch where the member is shielded from the open flow (a riser inside a caisson or conductor guide, a stem
+ * inside its nozzle): vortex-shedding screening uses `flowSpeedMPerS` there instead of the case's current or flow
+ * (0 = still water). Added mass is not affected (that is `boundaries`).
+ */
+export interface FlowShielding {
+  fromM: number;
+  toM: number;
+  flowSpeedMPerS: number;
+  /** Plain words for results: "inside the caisson", "inside the nozzle". */
+  label: string;
+}
+
 export interface MemberLiquid {
   densityKgPerM3: number;
   /** Submerged range along z. */
@@ -60,10 +73,23 @@ export interface MemberLiquid {
    * Absent = unbounded liquid.
    */
   boundaries?: BoundarySpec[];
+  /**
+   * The boundaries surround the member only where z ≥ this (a caisson whose open bottom is above the seabed);
+   * absent = over the whole liquid range. No segment may straddle it.
+   */
+  boundariesFromM?: number;
   /** Perforation ratio of a plate (0..1): reduces added mass (DNV-RP-H103 §4.6.4.3). */
   perforationRatio?: number;
   /** Apply the DNV-RP-H103 Table A-2 3D end-effect reduction for short submerged lengths. Default false. */
   endEffect3d?: boolean;
+  /**
+   * Kinematic viscosity, m²/s, when known from the liquid and its temperature, with where it comes from; the
+   * resonance screening then uses it (and this density) for the Reynolds number. Not used for added mass.
+   */
+  kinematicViscosityM2PerS?: number;
+  viscositySource?: string;
+  /** Stretches shielded from the open flow; the screening uses their own flow speed (see FlowShielding). */
+  flowShielding?: FlowShielding[];
 }
 
 export interface MemberModel {

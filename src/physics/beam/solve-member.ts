@@ -94,7 +94,9 @@ function maxRelativeChange(a: Float64Array, b: Float64Array): number {
 
 export function solveMember(input: MemberModel, options: SolveMemberOptions = {}): MemberOutcome {
   const parsed = parseMemberModel(input);
-  const model = { ...parsed, segments: mergeEqualSegments(parsed.segments) };
+  // Where a confinement stops (liquid.boundariesFromM) a segment end must stay: added mass differs on each side.
+  const keep = parsed.liquid?.boundariesFromM !== undefined ? [parsed.liquid.boundariesFromM] : [];
+  const model = { ...parsed, segments: mergeEqualSegments(parsed.segments, keep) };
   const count = model.modes ?? DEFAULT_MODES;
   const meshOpt = model.mesh ?? {};
   const tol = meshOpt.relativeTolerance ?? DEFAULT_RELATIVE_TOLERANCE;

@@ -5,6 +5,7 @@
  */
 import type {
   LumpedMass,
+  FlowShielding,
   MemberLiquid,
   MemberModel,
   MemberSection,
@@ -208,9 +209,19 @@ function lumpedMass(v: unknown, i: number, lengthM: number): LumpedMass {
   return m;
 }
 
+function shielding(v: unknown, i: number): FlowShielding {
+  const path = `liquid.flowShielding[${i}]`;
+  const o = object(v, path, ['fromM', 'toM', 'flowSpeedMPerS', 'label']);
+  const fromM = num(o, 'fromM', path, 'a finite number', () => true);
+  const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
+  const flowSpeedMPerS = num(o, 'flowSpeedMPerS', path, 'a finite number ≥ 0', nonNegative);
+  if (typeof o.label !== 'string') fail(`${path}.label`, 'a string', o.label);
+  return { fromM, toM, flowSpeedMPerS, label: o.label as string };
+}
+
 function liquid(v: unknown, lengthM: number): MemberLiquid {
   const path = 'liquid';
-  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d']);
+  const o = object(v, path, ['densityKgPerM3', 'fromM', 'toM', 'boundaries', 'perforationRatio', 'endEffect3d', 'flowShielding', 'kinematicViscosityM2PerS', 'viscositySource', 'boundariesFromM']);
   const fromM = num(o, 'fromM', path, 'a finite number', () => true);
   const toM = num(o, 'toM', path, `a finite number > fromM (${fromM})`, (x) => x > fromM);
   if (!(toM > 0 && fromM < lengthM)) failDescribed(path, `a range overlapping the member [0, ${lengthM}] m`, `[${fromM}, ${toM}]`);
@@ -226,6 +237,15 @@ function liquid(v: unknown, lengthM: number): MemberLiquid {
   if (p !== undefined) liq.perforationRatio = p;
   const ee = optBool(o, 'endEffect3d', path);
   if (ee !== undefined) liq.endEffect3d = ee;
+  const bf = optNum(o, 'boundariesFromM', path, 'a finite number', () => true);
+  if (bf !== undefined) liq.boundariesFromM = bf;
+  const nu = optNum(o, 'kinematicViscosityM2PerS', path, 'a finite number > 0', positive);
+  if (nu !== undefined) liq.kinematicViscosityM2PerS = nu;
+  if (o.viscositySource !== undefined) {
+    if (typeof o.viscositySource !== 'string') fail(`${path}.viscositySource`, 'a string', o.viscositySource);
+    liq.viscositySource = o.viscositySource as string;
+  }
+  if (o.flowShielding !== undefined) liq.flowShielding = array(o.flowShielding, at(path, 'flowShielding'), false, MAX_SEGMENTS).map((x, i) => shielding(x, i));
   return liq;
 }
 
@@ -262,6 +282,12 @@ export function parseMemberModel(raw: unknown): MemberModel {
   if (o.soilSprings !== undefined) model.soilSprings = array(o.soilSprings, 'soilSprings', false, MAX_SOIL_RANGES).map((s, i) => soilRange(s, i, lengthM));
   if (o.masses !== undefined) model.masses = array(o.masses, 'masses', false, MAX_MASSES).map((m, i) => lumpedMass(m, i, lengthM));
   if (o.liquid !== undefined && o.liquid !== null) model.liquid = liquid(o.liquid, lengthM);
+  const bf = model.liquid?.boundariesFromM;
+  if (bf !== undefined) {
+    const tol = 1e-9 * lengthM;
+    const cut = segments.findIndex((s) => s.fromM < bf - tol && s.toM > bf + tol);
+    if (cut >= 0) fail('liquid.boundariesFromM', `at a segment end (segments[${cut}] runs from ${segments[cut].fromM} to ${segments[cut].toM} m across it)`, bf);
+  }
   const t = optNum(o, 'tensionN', '', 'a finite number (negative = compression)', () => true);
   if (t !== undefined) model.tensionN = t;
   const tv = optBool(o, 'tensionVariesWithWeight', '');

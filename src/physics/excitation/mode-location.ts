@@ -10,7 +10,9 @@
  * - for uniform flow and section both choices agree.
  * The shape is taken as piecewise linear between nodes, so the maximum over a zone lies at a node inside it or
  * at a zone end (waterline, mudline) — those are the only candidates. Near-ties (within EDGE_RTOL) go to the
- * candidate with the largest U/D, i.e. the earliest onset as the flow rises.
+ * candidate with the largest U/D, i.e. the earliest onset as the flow rises. A point in still water (zero flow,
+ * e.g. a stretch shielded inside a caisson) is taken only when no moving point has flow: the largest |φ| among
+ * points with flow is the evaluation point otherwise, since still water cannot excite the mode.
  */
 import type { FlowProfile } from './profile';
 import { flowSpeedAt } from './profile';
@@ -86,11 +88,15 @@ export function locateModeInFlow(mode: ScreeningMode, zones: readonly SubmergedZ
         if (!(z > a && z < b)) continue;
         amp = Math.abs(mode.displacement[k]);
       }
-      const u = flowSpeedAt(profile, z);
+      const u = zone.flowSpeedMPerS ?? flowSpeedAt(profile, z);
+      // Still water cannot excite: a moving point with flow beats any point without (a riser shielded in a
+      // caisson over its upper bays still sheds where its lower bays stand in the current).
+      const excitable = u > 0 && amp > 0;
+      const flowBeats = best !== null && excitable !== (best.flowSpeedMPerS > 0 && bestAmp > 0);
       const tie = best !== null && Math.abs(amp - bestAmp) <= EDGE_RTOL * Math.max(amp, bestAmp);
-      const better = best === null || (tie ? u / d > best.flowSpeedMPerS / best.sizeM : amp > bestAmp);
+      const better = best === null || (flowBeats ? excitable : tie ? u / d > best.flowSpeedMPerS / best.sizeM : amp > bestAmp);
       if (better) {
-        bestAmp = Math.max(bestAmp, amp);
+        bestAmp = flowBeats ? amp : Math.max(bestAmp, amp);
         best = { atZM: z, zoneIndex: zi, relativeAmplitude: amp / maxAll, flowSpeedMPerS: u, sizeM: d, section: zone.section };
       }
     }
@@ -111,4 +117,32 @@ export function locateModeInFlow(mode: ScreeningMode, zones: readonly SubmergedZ
     };
   }
   return { ok: true, location: best };
+}
+
+/**
+ * Where shedding is fastest along the submerged zones the mode spans: the zone end with the highest U/D, hence
+ * the highest f_s = St·U/D (St taken as equal between candidates). For the stem screen f_s/f_n, which asks
+ * whether shedding anywhere on the stem reaches the natural frequency: on a stem that tapers to its tip this is
+ * the tip; where the root is slimmer (or the tip is shielded) the root governs. Null when no zone has flow.
+ */
+export function fastestSheddingLocation(mode: ScreeningMode, zones: readonly SubmergedZone[], profile: FlowProfile): ModeLocation | null {
+  const n = mode.zM.length;
+  let maxAll = 0;
+  for (let i = 0; i < n; i++) maxAll = Math.max(maxAll, Math.abs(mode.displacement[i]));
+  let best: ModeLocation | null = null;
+  for (let zi = 0; zi < zones.length; zi++) {
+    const zone = zones[zi];
+    const a = Math.max(zone.fromM, mode.zM[0]);
+    const b = Math.min(zone.toM, mode.zM[n - 1]);
+    if (!(b > a)) continue;
+    const d = characteristicSizeM(zone.section);
+    for (const z of [a, b]) {
+      const u = zone.flowSpeedMPerS ?? flowSpeedAt(profile, z);
+      if (!(u > 0)) continue;
+      if (best === null || u / d > (best.flowSpeedMPerS / best.sizeM) * (1 + EDGE_RTOL)) {
+        best = { atZM: z, zoneIndex: zi, relativeAmplitude: maxAll > 0 ? Math.abs(shapeAt(mode, z)) / maxAll : 0, flowSpeedMPerS: u, sizeM: d, section: zone.section };
+      }
+    }
+  }
+  return best;
 }

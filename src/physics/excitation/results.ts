@@ -5,6 +5,7 @@
 import type { LiquidProperties, ScreeningLimits } from './types';
 import type { StrouhalValue } from './strouhal';
 import type { Verdict } from './verdict';
+import type { Severity } from './severity';
 
 export type ExcitationKind = 'in-line-viv' | 'cross-flow-viv' | 'stem-frequency-ratio' | 'machinery' | 'waves';
 
@@ -97,6 +98,8 @@ export interface ZoneShedding {
   /** Low edge: St_low at the lowest speed; high edge: St_high at the highest speed, Hz. */
   sheddingFrequencyLowHz: number;
   sheddingFrequencyHighHz: number;
+  /** Set when the zone is shielded from the open flow ("inside the caisson"); its speed is its own. */
+  shieldedBy?: string;
 }
 
 export interface CaseDriver {
@@ -108,6 +111,11 @@ export interface CaseDriver {
 }
 
 export interface ScreeningResult {
+  /**
+   * How severe a shedding resonance of the driving mode would be (Scruton number, indicative A/D); null when
+   * the verdict is not driven by a shedding check, or the driving mode has no shedding point.
+   */
+  severity: Severity | null;
   /** Worst verdict over all modes and excitations. */
   verdict: Verdict;
   /** The mode and excitation that give the case verdict; null when nothing was checked. */

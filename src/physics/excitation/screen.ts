@@ -4,15 +4,17 @@
  * a margin, a critical speed where one exists, and the source of the rule. The case verdict is the worst.
  */
 import { DEFAULT_DAMPING, mergeLimits, SEAWATER } from './defaults';
+import { sig } from './format';
+import { severityOf } from './severity';
 import { machineryCheck, machineryLines } from './machinery';
-import { locateModeInFlow } from './mode-location';
+import { fastestSheddingLocation, locateModeInFlow } from './mode-location';
 import type { CaseDriver, CheckResult, ModeScreening, ScreeningResult } from './results';
 import type { SheddingConditions } from './shedding-point';
 import { sheddingPoint } from './shedding-point';
 import { stemCheck } from './stem';
 import type { LiquidProperties, ScreeningInput } from './types';
 import { validateScreeningInput } from './validate';
-import { compareSeverity, worstIndex } from './verdict';
+import { compareSeverity, EDGE_RTOL, worstIndex } from './verdict';
 import { crossFlowCheck, inLineCheck } from './viv';
 import { waveCheck } from './waves';
 import { zoneShedding } from './zone-shedding';
@@ -44,12 +46,18 @@ export function screenResonance(input: ScreeningInput): ScreeningResult {
     const viv = { frequencyHz: f, point, notSubmergedReason, limits, nonCircular };
     const checks: CheckResult[] = [inLineCheck(viv), crossFlowCheck(viv)];
     if (inp.stemFrequencyRatioScreen) {
+      // The stem screen is taken where shedding is fastest, if that is not where the mode moves most
+      // (a slimmer root, a shielded tip): the higher f_s governs.
+      const fast = loc.ok ? fastestSheddingLocation(mode, inp.zones, inp.flowSpeedMPerS) : null;
+      const governs = fast !== null && point !== null && fast.flowSpeedMPerS / fast.sizeM > (point.flowSpeedMPerS / point.characteristicSizeM) * (1 + EDGE_RTOL);
+      const stemPoint = governs ? sheddingPoint(fast, f, me, cond) : point;
       checks.push(
         stemCheck({
           frequencyHz: f,
-          point,
+          point: stemPoint,
+          elsewhere: governs,
           notSubmergedReason,
-          section: loc.ok ? loc.location.section : null,
+          section: governs ? fast.section : loc.ok ? loc.location.section : null,
           kinematicViscosityM2PerS: liquid.kinematicViscosityM2PerS,
           strouhalOverrideValue: inp.strouhal?.value,
           limits,
@@ -94,12 +102,25 @@ export function screenResonance(input: ScreeningInput): ScreeningResult {
   if (inp.zones.some((z) => z.section.kind !== 'circle')) {
     notes.push('DNV-RP-C205 §9 V_R ranges are for circular cylinders; for rectangles they are applied as an indication (D = width across flow).');
   }
+  for (const label of new Set(inp.zones.filter((z) => z.shieldedBy !== undefined).map((z) => z.shieldedBy!))) {
+    const z = inp.zones.filter((x) => x.shieldedBy === label);
+    const u = z[0].flowSpeedMPerS!;
+    notes.push(
+      `Shielded ${label} (z = ${sig(z[0].fromM)}–${sig(z[z.length - 1].toM)} m): shedding there is checked with the flow inside, ` +
+        `U = ${sig(u)} m/s${u === 0 ? ' (still water)' : ''}, not the open current.`,
+    );
+  }
   if (inp.dampingRatio === undefined) notes.push(`Damping not given: ${DEFAULT_DAMPING.source}.`);
   if (inp.waves) notes.push('The wave check compares natural frequencies with wave frequencies only; it does not assess wave loads.');
+
+  const shedding = driver !== null && (driver.kind === 'in-line-viv' || driver.kind === 'cross-flow-viv' || driver.kind === 'stem-frequency-ratio');
+  const drivingPoint = driver !== null ? modes[driver.modeIndex].shedding : null;
+  const severity = shedding && drivingPoint ? severityOf(driver!.modeIndex, inp.modes[driver!.modeIndex], drivingPoint, damping) : null;
 
   return {
     verdict: driverCheck ? driverCheck.verdict : 'clear',
     driver,
+    severity,
     modes,
     zones: inp.zones.map((z, i) => zoneShedding(z, i, inp.flowSpeedMPerS, cond)),
     limits,

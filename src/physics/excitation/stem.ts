@@ -38,6 +38,8 @@ export function speedForSheddingFrequency(
 export interface StemContext {
   frequencyHz: number;
   point: SheddingPoint | null;
+  /** True when the point is where shedding is fastest rather than where the mode moves most (it governs there). */
+  elsewhere?: boolean;
   notSubmergedReason?: string;
   section: ZoneSection | null;
   kinematicViscosityM2PerS: number;
@@ -81,7 +83,8 @@ export function stemCheck(ctx: StemContext): CheckResult {
     criticalSpeedMPerS: uCrit,
     reason:
       `f_s / f_n = ${sig(fs / ctx.frequencyHz)} (f_s = ${sig(fs)} Hz with St = ${sig(p.strouhal.value)}, ` +
-      `U = ${sig(p.flowSpeedMPerS)} m/s, D = ${sig(p.characteristicSizeM)} m); limit ${sig(rMax)} reached at U = ${sig(uCrit)} m/s`,
+      `U = ${sig(p.flowSpeedMPerS)} m/s, D = ${sig(p.characteristicSizeM)} m` +
+      `${ctx.elsewhere ? `, at z = ${sig(p.atZM)} m where shedding is fastest, which governs` : ''}); limit ${sig(rMax)} reached at U = ${sig(uCrit)} m/s`,
     source: `${base.source}; St: ${p.strouhal.source}`,
   };
 }

@@ -39,6 +39,13 @@ export interface SubmergedZone {
   fromM: number;
   toM: number;
   section: ZoneSection;
+  /**
+   * Flow speed over this zone, m/s, in place of the case's flow (a shielded stretch: a riser inside a caisson,
+   * a stem inside its nozzle; 0 = still water). Absent = the case's flow profile.
+   */
+  flowSpeedMPerS?: number;
+  /** What shields it, in plain words ("inside the caisson"); given with `flowSpeedMPerS`. */
+  shieldedBy?: string;
 }
 
 /** One point of a flow-speed profile: speed magnitude at elevation zM (member axis). */

@@ -66,6 +66,7 @@ function validateZones(zones: unknown): void {
     const to = finite(`${f}.toM`, zone.toM);
     if (!(to > from)) fail(`${f}.toM`, `greater than ${f}.fromM = ${from}`, to);
     validateSection(`${f}.section`, zone.section);
+    if (zone.flowSpeedMPerS !== undefined) nonNegative(`${f}.flowSpeedMPerS`, zone.flowSpeedMPerS);
     spans.push({ i, from, to });
   }
   spans.sort((a, b) => a.from - b.from);

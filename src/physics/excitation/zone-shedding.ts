@@ -14,7 +14,9 @@ import type { SubmergedZone } from './types';
 
 export function zoneShedding(zone: SubmergedZone, zoneIndex: number, profile: FlowProfile, cond: SheddingConditions): ZoneShedding {
   const d = characteristicSizeM(zone.section);
-  const { minMPerS, maxMPerS } = flowSpeedRange(profile, zone.fromM, zone.toM);
+  // A shielded zone has its own (constant) flow instead of the case's profile.
+  const { minMPerS, maxMPerS } =
+    zone.flowSpeedMPerS !== undefined ? { minMPerS: zone.flowSpeedMPerS, maxMPerS: zone.flowSpeedMPerS } : flowSpeedRange(profile, zone.fromM, zone.toM);
   const nu = cond.liquid.kinematicViscosityM2PerS;
   const stLow = strouhalFor(zone, reynoldsNumber(minMPerS, d, nu), cond);
   const reMax = reynoldsNumber(maxMPerS, d, nu);
@@ -28,5 +30,6 @@ export function zoneShedding(zone: SubmergedZone, zoneIndex: number, profile: Fl
     strouhal: stHigh,
     sheddingFrequencyLowHz: sheddingFrequencyHz(stLow.low, minMPerS, d),
     sheddingFrequencyHighHz: sheddingFrequencyHz(stHigh.high, maxMPerS, d),
+    ...(zone.shieldedBy !== undefined ? { shieldedBy: zone.shieldedBy } : {}),
   };
 }

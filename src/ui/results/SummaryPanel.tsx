@@ -24,6 +24,11 @@ export function SummaryPanel({ kind, system, answer }: { kind: MemberKind; syste
       {s.verdictLine && <p>{s.verdictLine}</p>}
       <p class="summary-frequencies">{s.frequencyLine}</p>
       {s.onsetLine && <p class="summary-onset">{s.onsetLine}</p>}
+      {s.severityLine && (
+        <p class="summary-severity" data-testid="severity">
+          {s.severityLine}
+        </p>
+      )}
       {s.notes.map((n) => (
         <p key={n} class="summary-note">{n}</p>
       ))}

@@ -109,6 +109,8 @@ export interface Summary {
   verdictLine: string | null;
   /** Lock-in onset of the driving check, or the lowest onset of any check, in words. */
   onsetLine: string | null;
+  /** How severe lock-in of the driving mode would be: Scruton number and an indicative A/D; null when not shedding. */
+  severityLine: string | null;
   /** "Lowest dry frequency 0.638 Hz; lowest wet frequency 0.606 Hz (wet/dry 0.950)." */
   frequencyLine: string;
   /** Why there is no verdict, or why the wet frequencies are missing. */
@@ -132,12 +134,12 @@ export function summarise(kind: MemberKind, system: UnitSystem, answer: Solved):
         ? `Resonance screening could not run: ${answer.screeningError}. The frequencies are still good.`
         : 'Frequencies only: no resonance inputs yet (current or flow speed, waves, machine). Enter them on the Member screen to get a verdict.',
     );
-    return { verdict: null, verdictLine: null, onsetLine: null, frequencyLine, notes };
+    return { verdict: null, verdictLine: null, onsetLine: null, severityLine: null, frequencyLine, notes };
   }
   const driving = drivingCheck(screening);
   if (!driving) {
     notes.push('Nothing was screened: no mode had a check.');
-    return { verdict: screening.verdict, verdictLine: null, onsetLine: null, frequencyLine, notes };
+    return { verdict: screening.verdict, verdictLine: null, onsetLine: null, severityLine: null, frequencyLine, notes };
   }
   const { mode, check } = driving;
   const basis = `${check.frequencyBasis} ${formatHz(check.frequencyHz)}`;
@@ -148,5 +150,17 @@ export function summarise(kind: MemberKind, system: UnitSystem, answer: Solved):
     const sentence = low && onsetSentence(kind, system, screening, low.mode, low.check);
     if (low && sentence) onsetLine = `Lowest onset of any shedding check (mode ${low.mode}): ${sentence}`;
   }
-  return { verdict: screening.verdict, verdictLine, onsetLine, frequencyLine, notes };
+  return { verdict: screening.verdict, verdictLine, onsetLine, severityLine: severitySentence(screening), frequencyLine, notes };
+}
+
+/** "Indicative cross-flow amplitude at lock-in, mode 1: A/D ≈ 0.52 (Scruton number K_S = 0.101, …)". */
+export function severitySentence(s: ScreeningResult): string | null {
+  const v = s.severity;
+  if (!v) return null;
+  const when = s.verdict === 'inside-band' ? 'at lock-in' : 'if it locked in';
+  return (
+    `Indicative cross-flow amplitude ${when}, mode ${v.modeIndex + 1}: A/D ≈ ${formatSig(v.amplitudeRatio, 2)} ` +
+    `(Scruton number K_S = ${formatSig(v.stabilityParameter, 3)} with ζ = ${formatSig(v.dampingRatio * 100, 2)} % structural damping, mode factor γ = ${formatSig(v.modeFactor, 3)}, St = ${formatSig(v.strouhal, 2)}; ` +
+    'R.D. Blevins, Flow-Induced Vibration, 1990, §3.4). Indicative only, not a response prediction.'
+  );
 }

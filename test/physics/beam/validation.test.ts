@@ -67,6 +67,8 @@ describe('member input validation names the field, what was expected and what wa
     ['liquid range reversed', (m) => (m.liquid.toM = -3), 'liquid.toM must be a finite number > fromM (0), got -3'],
     ['perforation beyond the table', (m) => (m.liquid.perforationRatio = 0.7), 'liquid.perforationRatio must be a finite number from 0 to 0.5 (range of DNV-RP-H103 §4.6.4.3), got 0.7'],
     ['boundaries not a list', (m) => (m.liquid.boundaries = { kind: 'wall' }), 'liquid.boundaries must be an array, got an object'],
+    ['confinement starting inside a segment', (m) => (m.liquid.boundariesFromM = 5), 'liquid.boundariesFromM must be at a segment end (segments[0] runs from 0 to 12 m across it), got 5'],
+    ['shielded stretch without a speed', (m) => (m.liquid.flowShielding = [{ fromM: 2, toM: 6, label: 'inside the caisson' }]), 'liquid.flowShielding[0].flowSpeedMPerS must be a finite number ≥ 0, got nothing'],
     ['end-effect flag as text', (m) => (m.liquid.endEffect3d = 'yes'), 'liquid.endEffect3d must be true or false, got "yes"'],
     ['fractional mode count', (m) => (m.modes = 2.5), 'modes must be an integer from 1 to 50, got 2.5'],
     ['too many modes', (m) => (m.modes = 51), 'modes must be an integer from 1 to 50, got 51'],
