@@ -9,6 +9,7 @@ import { kindOf } from '../kinds/registry';
 import { type PlateExcitation, readPlateExcitation } from '../kinds/plate-panel/excitation';
 import { readExcitation } from '../forms/excitation';
 import { FORM_ERROR_KEY, type FieldErrors } from '../forms/types';
+import { isUnitReaderPending } from '../units/reader-pending';
 import type { CaseRequest } from './solve-case';
 
 export type CaseReading =
@@ -26,6 +27,8 @@ export function readCase(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitS
   try {
     return readCaseUnsafe(c);
   } catch (e) {
+    // Not an input error: the browser's unit reader is still loading; the caller loads it and reads again.
+    if (isUnitReaderPending(e)) throw e;
     const why = e instanceof Error ? e.message : String(e);
     return { ok: false, errors: { [FORM_ERROR_KEY]: `These inputs cannot be computed (${why.slice(0, 200)}); check the values for a stray exponent or a wrong unit.` }, excitationErrors: {} };
   }
