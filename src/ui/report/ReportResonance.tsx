@@ -34,7 +34,7 @@ export function ReportResonance({ screening, member, units, reasonsInSI }: Props
       <ChecksTable rows={renumbered} reasonsInSI={reasonsInSI} caption="Governing check of each excitation (all modes on the Results screen)" shortNote />
       <SourceNotes items={used.items} label="Sources of the checks" />
       <p class="table-note">
-        Limits used: {limits.map((l) => `${l.name} ${l.value}`).join('; ')}.
+        Limits used: {limits.map((l) => `${l.name} ${l.value} (${l.source})`).join('; ')}.
       </p>
     </section>
   );

@@ -89,7 +89,7 @@ export function ReportDetails({ doc, results, children }: Props) {
       <section class="report-section" aria-labelledby="report-method-title">
         <h2 id="report-method-title">Method and sources</h2>
         <ul class="sourced-list">
-          {methodNotes(member, screening, units).map((l, i) => (
+          {methodNotes(member, screening, units, false).map((l, i) => (
             <li key={i}>
               {sentence(l.text)} <span class="source">Source: {sentence(l.source)}</span>
             </li>

@@ -33,7 +33,8 @@ export function strouhalSources(s: ScreeningResult): string[] {
   return out;
 }
 
-export function methodNotes(member: MemberResult, screening: ScreeningResult | null, units: DisplayUnits): SourcedLine[] {
+/** `withLimits` false where the screening limits are listed elsewhere with their sources (the printed record). */
+export function methodNotes(member: MemberResult, screening: ScreeningResult | null, units: DisplayUnits, withLimits = true): SourcedLine[] {
   const lines: SourcedLine[] = [beamMethod(member)];
   if (member.wet) {
     lines.push({
@@ -47,7 +48,7 @@ export function methodNotes(member: MemberResult, screening: ScreeningResult | n
       text: 'Vortex shedding: f_s = St U / D, reduced velocity V_R = U / (f_n D), stability parameter K_S = 4π m_e ζ / (ρ D²), each mode evaluated where it moves most under the liquid',
       source: 'DNV-RP-C205 §9',
     });
-    for (const r of limitRows(screening, units)) lines.push({ text: `${r.name}: ${r.value}`, source: r.source });
+    if (withLimits) for (const r of limitRows(screening, units)) lines.push({ text: `${r.name}: ${r.value}`, source: r.source });
     for (const src of strouhalSources(screening)) lines.push({ text: 'Strouhal number', source: src });
   }
   return lines;
