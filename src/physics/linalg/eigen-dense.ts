@@ -5,6 +5,7 @@
  * (Golub & Van Loan, Matrix Computations, §8.3 and §8.7). O(n³): a yardstick for tests and benchmarks,
  * not for production sizes.
  */
+import { choleskyInPlace } from './dense-cholesky';
 import { ascendingOrder, tridiagonalEigenInPlace } from './tridiagonal';
 
 /** Row-major n×n matrices. */
@@ -17,23 +18,6 @@ export type DenseEigenOutcome =
       vectors: Float64Array;
     }
   | { ok: false; reason: 'mass-not-positive-definite' | 'not-converged'; message: string };
-
-/** In place: lower triangle of `a` becomes L with A = L Lᵀ. Returns false if A is not positive definite. */
-function choleskyInPlace(a: Float64Array, n: number): boolean {
-  for (let j = 0; j < n; j++) {
-    let s = a[j * n + j];
-    for (let k = 0; k < j; k++) s -= a[j * n + k] * a[j * n + k];
-    if (!(s > 0)) return false;
-    const ljj = Math.sqrt(s);
-    a[j * n + j] = ljj;
-    for (let i = j + 1; i < n; i++) {
-      let t = a[i * n + j];
-      for (let k = 0; k < j; k++) t -= a[i * n + k] * a[j * n + k];
-      a[i * n + j] = t / ljj;
-    }
-  }
-  return true;
-}
 
 /**
  * Householder reduction of symmetric `a` (destroyed) to tridiagonal T = Qᵀ A Q.

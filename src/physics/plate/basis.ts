@@ -8,7 +8,7 @@
  * Cholesky factor of their Gram matrix, which keeps the plate mass matrix the identity and the
  * conditioning of high orders in hand.
  */
-import { choleskyInPlace } from './cholesky';
+import { choleskyInPlace } from '../linalg/dense-cholesky';
 import { gaussLegendre, legendreInto } from './gauss';
 import type { EdgeCondition } from './types';
 

@@ -18,7 +18,7 @@
  *   M_a = ρ [Z_ww − Z_wu Z_uu⁻¹ Z_uw].
  */
 import { integralMatrix, sampleBasis } from './basis';
-import { choleskyInPlace, choleskySolveInPlace } from './cholesky';
+import { choleskyInPlace, choleskySolveInPlace } from '../linalg/dense-cholesky';
 import type { Basis1D } from './basis';
 import { gaussLegendre, legendreInto } from './gauss';
 
