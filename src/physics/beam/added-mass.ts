@@ -7,10 +7,11 @@
  */
 import type { MemberModel, MemberSegment } from './model';
 import { cylinderEndEffectFactor, END_EFFECT_SOURCE, PERFORATION_SOURCE, perforationFactor, plateEndEffectFactor } from './reductions';
-import { type SectionSolver, sectionInput } from './section-bridge';
+import { type SectionSolver, sectionBody, sectionInput } from './section-bridge';
 import { interpolateSection, sectionAt } from './section-props';
 import { shapeOf } from '../shapes/registry';
 import type { AddedMassMethod } from '../shapes/types';
+import { concentricAnnulusCa } from './annulus';
 
 export type { AddedMassMethod };
 
@@ -115,15 +116,26 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
       segments.push({ method: shape.closedForm, caStart: perf, caEnd: perf, perforationFactor: perf });
       continue;
     }
-    if (!solver) {
+    const coat = seg.coating?.thicknessM ?? 0;
+    // A round member centred in a round pipe: Fritz's closed form, exact, no solver (annulus.ts).
+    const sectionOf = (t: number) => (t === 0 ? seg.section : t === 1 ? (seg.endSection ?? seg.section) : interpolateSection(seg, t));
+    const annular = concentricAnnulusCa(sectionBody(seg.section, coat), segBoundaries) !== null;
+    if (!solver && !annular) {
       const needs = segConfined ? 'liquid.boundaries needs' : `the added mass of a "${seg.section.shape}" section needs`;
       return { ok: false, reason: 'section-solver-failed', message: `${needs} the section solver, which is not available` };
     }
-    const coat = seg.coating?.thicknessM ?? 0;
     let failure: string | null = null;
     // Ca of the section at fraction t of the segment, through the cache; null (and `failure` set) when it fails.
     const caOf = (t: number): number | null => {
-      const section = t === 0 ? seg.section : t === 1 ? (seg.endSection ?? seg.section) : interpolateSection(seg, t);
+      const section = sectionOf(t);
+      if (annular) {
+        const exact = concentricAnnulusCa(sectionBody(section, coat), segBoundaries);
+        if (exact !== null) return exact * perf;
+      }
+      if (!solver) {
+        failure = `added mass of segments[${i}]: the section solver is not available`;
+        return null;
+      }
       const input = sectionInput(section, coat, rho, segBoundaries);
       const key = JSON.stringify(input);
       let hit = cache.get(key);
@@ -148,7 +160,7 @@ export function planAddedMass(model: MemberModel, solver: SectionSolver | undefi
     const ca0 = caOf(0);
     const ca1 = ca0 === null ? null : caOf(1);
     if (ca0 === null || ca1 === null) return { ok: false, reason: 'section-solver-failed', message: failure! };
-    const plan: SegmentAddedMass = { method: 'section solver', caStart: ca0, caEnd: ca1, perforationFactor: perf };
+    const plan: SegmentAddedMass = { method: annular ? 'annulus closed form (Fritz)' : 'section solver', caStart: ca0, caEnd: ca1, perforationFactor: perf };
     if (seg.endSection && segConfined) {
       // Solve the section where it changes: bisect each interval until the straight line between its ends
       // predicts the solved Ca at its middle within TAPER_CA_RTOL (or the depth limit).

@@ -45,7 +45,7 @@ export interface SectionMaterial {
 }
 
 /** How the added mass of a submerged segment is found. */
-export type AddedMassMethod = 'circle closed form (Lamb)' | 'flat plate closed form (Lamb)' | 'section solver';
+export type AddedMassMethod = 'circle closed form (Lamb)' | 'flat plate closed form (Lamb)' | 'annulus closed form (Fritz)' | 'section solver';
 
 /** The section the flow sees, for vortex shedding (src/physics/excitation). */
 export type FlowSection = { kind: 'circle'; outerDiameterM: number } | { kind: 'rectangle'; widthAcrossFlowM: number; depthAlongFlowM: number };
@@ -79,7 +79,7 @@ export interface ShapeDescription<S extends { shape: string }> {
   /** The flow section for shedding, from the station properties (width across the motion, depth along it). */
   flowSection(p: SectionAt): FlowSection;
   /** Closed form in unbounded liquid (Ca = 1 on π (w/2)²); null: the section solver is used even in open liquid. */
-  closedForm: Exclude<AddedMassMethod, 'section solver'> | null;
+  closedForm: Exclude<AddedMassMethod, 'section solver' | 'annulus closed form (Fritz)'> | null;
   /** Perforation (open area) reduces the added mass (flat plates). */
   perforable: boolean;
   /** Basis of the 3D end-effect table; null: no tabulated factor for this shape. */

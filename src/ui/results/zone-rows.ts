@@ -66,11 +66,16 @@ function methodLine(method: AddedMassMethod, sectionSolves: number, relativeErro
       return { text: 'Circle in open liquid, closed form m_a = ρ π D²/4 (Ca = 1)', source: 'H. Lamb, Hydrodynamics (classical)' };
     case 'flat plate closed form (Lamb)':
       return { text: 'Flat plate in open liquid, closed form m_a = ρ π (w/2)² (Ca = 1)', source: 'H. Lamb, Hydrodynamics (classical)' };
+    case 'annulus closed form (Fritz)':
+      return {
+        text: 'Round member centred in a round pipe or caisson, closed form m_a = ρ π R1² (R2² + R1²) / (R2² − R1²)',
+        source: 'R.J. Fritz, The effect of liquids on the dynamic motions of immersed solids, ASME J. Eng. Industry 94 (1972) 167',
+      };
     case 'section solver':
       return {
         text:
-          `Confined section: 2D potential-flow section solver (boundary elements), ${SECTION_PANELS} panels per body ` +
-          `with a ${SECTION_PANELS / 2}-panel companion solve, Richardson-extrapolated; ${sectionSolves} distinct section solve${sectionSolves === 1 ? '' : 's'}` +
+          `Confined section: 2D potential-flow section solver (boundary elements), from ${SECTION_PANELS} panels per body, ` +
+          `Richardson-extrapolated from coarser companion solves and refined until the estimated error is small; ${sectionSolves} distinct section solve${sectionSolves === 1 ? '' : 's'}` +
           (relativeError !== null ? `; estimated discretisation error at most ${formatPercent(relativeError, 2)}` : ''),
         source: 'Wetmode section solver (potential flow, Laplace equation; see the Section screen)',
       };

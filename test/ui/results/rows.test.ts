@@ -63,7 +63,7 @@ describe('mass per length by zone', () => {
   it('states the section solver resolution and how many distinct sections were solved', () => {
     const m = wetMember({ zones: [zone({ addedMassMethod: 'section solver' })], addedMass: { endEffect: null, perforation: null, sectionSolves: 2, sectionRelativeError: null } });
     const [line] = addedMassLines(m, displayUnits('si'));
-    expect(line.text).toContain('64 panels per body with a 32-panel companion solve');
+    expect(line.text).toContain('from 64 panels per body, Richardson-extrapolated from coarser companion solves');
     expect(line.text).toContain('2 distinct section solves');
   });
 });
