@@ -1,4 +1,4 @@
-import type { Case } from '../../case';
+import type { CaseSummary } from '../../store';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { caseRowView } from './format';
 import { copyName } from './names';
@@ -7,7 +7,8 @@ import { NameForm } from './NameForm';
 export type RowEdit = 'rename' | 'duplicate' | null;
 
 interface Props {
-  c: Case;
+  /** The light list row (no full case is needed to show it). */
+  c: CaseSummary;
   /** This case is the one open in the app. */
   isOpen: boolean;
   edit: RowEdit;

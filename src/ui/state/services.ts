@@ -97,8 +97,9 @@ export async function firstCase(store: CaseStore | null, fresh = false, liveTabs
         if (taken.ok) return await fromDraft(store, taken.value);
       }
     }
-    const list = await store.listCases();
-    if (list.ok && (list.value.cases.length > 0 || list.value.unreadable.length > 0)) return null;
+    // The light list (no full case parsed): with thousands of saved cases this stays one short read.
+    const list = await store.listRows('updated');
+    if (list.ok && (list.value.rows.length > 0 || list.value.unreadable.length > 0)) return null;
     return demo();
   } catch {
     return null;
