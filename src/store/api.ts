@@ -70,9 +70,10 @@ export interface CaseStore {
   listCases(): Promise<StoreResult<CaseList>>;
   /**
    * The saved list as light rows (no full case read or parsed), in the order of `sort` from the database's own
-   * indexes; search the rows with `searchSummaries`. Open a row with `getCase(row.id)`.
+   * indexes; search the rows with `searchSummaries`. Open a row with `getCase(row.id)`. With `limit`, only the
+   * first rows (and the total count): a quick first page to show while the whole list is read.
    */
-  listRows(sort: CaseSort): Promise<StoreResult<CaseRows>>;
+  listRows(sort: CaseSort, limit?: number): Promise<StoreResult<CaseRows>>;
   /** One case; 'not-found' or 'unreadable' otherwise. */
   getCase(id: string): Promise<StoreResult<Case>>;
   /**

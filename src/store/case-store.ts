@@ -57,7 +57,7 @@ export async function openStore(factory?: IDBFactory, options: StoreOptions = {}
   const draftsChange = (): StoreChange => ({ type: 'drafts', from: tabId });
   const store: CaseStore = {
     listCases: () => cases.listCases(ctx),
-    listRows: (sort) => listRows(ctx, sort),
+    listRows: (sort, limit) => listRows(ctx, sort, limit),
     getCase: (id) => cases.getCase(ctx, id),
     saveCase: async (c, base) => told(await cases.saveCase(ctx, c, base), savedChange),
     duplicateCase: async (id, newName) => told(await cases.duplicateCase(ctx, id, newName), savedChange),

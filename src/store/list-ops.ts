@@ -13,6 +13,10 @@ export interface CaseRows {
   /** Readable cases in the order asked for. */
   rows: CaseSummary[];
   unreadable: UnreadableRecord[];
+  /** How many readable cases there are in all (more than `rows.length` when a first page was asked for). */
+  total: number;
+  /** False when only a first page was read (`limit`); its unreadable records are not read either. */
+  complete: boolean;
 }
 
 /** True when every case record has its list record and no list record is left over. */
@@ -36,8 +40,11 @@ export function rebuildList(ctx: StoreContext): Promise<StoreResult<void>> {
   });
 }
 
-/** The saved list, sorted by the index of `sort`. */
-export async function listRows(ctx: StoreContext, sort: CaseSort): Promise<StoreResult<CaseRows>> {
+/**
+ * The saved list, sorted by the index of `sort`; with `limit`, only the first `limit` rows (a quick first page to
+ * show while the whole list is read).
+ */
+export async function listRows(ctx: StoreContext, sort: CaseSort, limit?: number): Promise<StoreResult<CaseRows>> {
   const step = await inStep(ctx);
   if (!step.ok) return step;
   if (!step.value) {
@@ -45,7 +52,12 @@ export async function listRows(ctx: StoreContext, sort: CaseSort): Promise<Store
     if (!rebuilt.ok) return rebuilt;
   }
   return inTx(ctx, 'list the saved cases', [LIST], 'readonly', async (tx) => {
-    const all = (await tx.objectStore(LIST).index(SORT_INDEX[sort]).getAll()) as ListRecord[];
+    const index = tx.objectStore(LIST).index(SORT_INDEX[sort]);
+    if (limit !== undefined) {
+      const [first, total] = await Promise.all([index.getAll(null, limit), index.count()]);
+      return { rows: (first as ListRecord[]).filter(isSummary), unreadable: [], total, complete: false };
+    }
+    const all = (await index.getAll()) as ListRecord[];
     // Unreadable records carry no sort keys and so are not in the indexes: read them apart (few, if any).
     const rows = all.filter(isSummary);
     const unreadable: UnreadableRecord[] = [];
@@ -54,6 +66,6 @@ export async function listRows(ctx: StoreContext, sort: CaseSort): Promise<Store
         if (!isSummary(r)) unreadable.push({ key: r.id, message: r.unreadable });
       }
     }
-    return { rows, unreadable };
+    return { rows, unreadable, total: rows.length, complete: true };
   });
 }

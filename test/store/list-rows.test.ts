@@ -40,6 +40,14 @@ describe('the saved list from the list store', () => {
     expect(unwrap(await store.listRows('name')).rows.map((r) => r.name)).toEqual(['Baffle 2, day tank', 'Pile 9', 'Pile 10', 'Pile B7 — east berth', '']);
   });
 
+  it('with a limit, reads only the first rows of the order and says how many there are in all', async () => {
+    const { store } = await filled();
+    const page = unwrap(await store.listRows('name', 2));
+    expect([page.rows.map((r) => r.name), page.total, page.complete]).toEqual([['Baffle 2, day tank', 'Pile 9'], 5, false]);
+    const whole = unwrap(await store.listRows('name'));
+    expect([whole.rows.length, whole.total, whole.complete]).toEqual([5, 5, true]);
+  });
+
   it('finds by every word of the search text, ignoring case and accents, as searchCases does (cross-check)', async () => {
     const { store } = await filled();
     const rows = unwrap(await store.listRows('updated')).rows;

@@ -104,12 +104,12 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
       </div>
     );
   }
-  const { rows: cases, unreadable } = listState.list;
+  const { unreadable, total } = listState.list;
   const shown = matched.slice(0, limit);
 
   return (
     <div class="saved-list">
-      {cases.length > 0 && (
+      {total > 0 && (
         <div class="list-tools">
           <div class="list-tool">
             <label for={`${id}-search`}>Search</label>
@@ -129,8 +129,8 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
           </div>
         </div>
       )}
-      <p class="list-count" aria-live="polite">{listCountWords(matched.length, cases.length, query)}</p>
-      {matched.length === 0 && cases.length > 0 && <p>{noMatchWords(query)}</p>}
+      <p class="list-count" aria-live="polite">{listCountWords(matched.length, total, query)}</p>
+      {matched.length === 0 && total > 0 && <p>{noMatchWords(query)}</p>}
       <ul class="case-list">
         {shown.map((c) => (
           <CaseRow

@@ -23,17 +23,34 @@ export interface CaseListControl {
   placeRow: (row: CaseSummary) => void;
 }
 
+/** Rows read first, so the screen shows a page at once while the whole (light) list is read. */
+const FIRST_ROWS = 50;
+
 export function useCaseList(store: CaseStore | null): CaseListControl {
   const [state, setState] = useState<ListState>({ status: 'waiting' });
   const [sort, setSort] = useState<CaseSort>('updated');
   // Only the latest load may write the state (a slow early answer must not replace a newer one).
   const seq = useRef(0);
+  const sortShown = useRef<CaseSort | null>(null);
   const reload = useCallback(async () => {
     if (!store) return;
     const mine = ++seq.current;
+    const show = (r: Awaited<ReturnType<CaseStore['listRows']>>) =>
+      setState(r.ok ? { status: 'loaded', list: r.value } : { status: 'failed', message: sentence(r.message) });
+    // Nothing on screen yet (first load): show the first page as soon as it is read, then the whole list.
+    if (sortShown.current !== sort) {
+      const first = await store.listRows(sort, FIRST_ROWS);
+      if (mine !== seq.current) return;
+      if (!first.ok || !first.value.complete) {
+        sortShown.current = sort;
+        show(first);
+      }
+      if (!first.ok) return;
+    }
     const r = await store.listRows(sort);
     if (mine !== seq.current) return;
-    setState(r.ok ? { status: 'loaded', list: r.value } : { status: 'failed', message: sentence(r.message) });
+    sortShown.current = sort;
+    show(r);
   }, [store, sort]);
   useEffect(() => {
     void reload();
@@ -47,7 +64,15 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
     setState((s) =>
       s.status !== 'loaded'
         ? s
-        : { status: 'loaded', list: { rows: s.list.rows.filter((r) => r.id !== key), unreadable: s.list.unreadable.filter((u) => u.key !== key) } },
+        : {
+            status: 'loaded',
+            list: {
+              ...s.list,
+              rows: s.list.rows.filter((r) => r.id !== key),
+              unreadable: s.list.unreadable.filter((u) => u.key !== key),
+              total: s.list.total - (s.list.rows.some((r) => r.id === key) ? 1 : 0),
+            },
+          },
     );
   }, []);
   const placeRow = useCallback(
@@ -56,6 +81,7 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
       setState((s) => {
         if (s.status !== 'loaded') return s;
         const rows = s.list.rows.filter((r) => r.id !== row.id);
+        const added = rows.length === s.list.rows.length ? 1 : 0;
         const cmp = compareSummaries(sort);
         // Binary search for its place: the rows are already in this order.
         let lo = 0;
@@ -66,7 +92,7 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
           else hi = mid;
         }
         rows.splice(lo, 0, row);
-        return { status: 'loaded', list: { rows, unreadable: s.list.unreadable } };
+        return { status: 'loaded', list: { ...s.list, rows, total: s.list.total + added } };
       });
     },
     [sort],
