@@ -5,8 +5,8 @@
  */
 import type { UnreadableRecord } from './api';
 import { inTx, type StoreContext } from './context';
-import { CASES, LIST } from './db-schema';
-import { isSummary, listRecordOf, SORT_INDEX, type CaseSort, type CaseSummary, type ListRecord } from './list-record';
+import { CASES, fillListStore, LIST } from './db-schema';
+import { isSummary, SORT_INDEX, type CaseSort, type CaseSummary, type ListRecord } from './list-record';
 import type { StoreResult } from './errors';
 
 export interface CaseRows {
@@ -30,13 +30,8 @@ async function inStep(ctx: StoreContext): Promise<StoreResult<boolean>> {
 /** Writes the list store afresh from the case records (only when it was found out of step). */
 export function rebuildList(ctx: StoreContext): Promise<StoreResult<void>> {
   return inTx(ctx, 'list the saved cases', [CASES, LIST], 'readwrite', async (tx) => {
-    const list = tx.objectStore(LIST);
-    await list.clear();
-    let cursor = await tx.objectStore(CASES).openCursor();
-    while (cursor) {
-      await list.put(listRecordOf(cursor.value, String(cursor.key)));
-      cursor = await cursor.continue();
-    }
+    await tx.objectStore(LIST).clear();
+    await fillListStore(tx);
   });
 }
 
