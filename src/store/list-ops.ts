@@ -35,6 +35,46 @@ export function rebuildList(ctx: StoreContext): Promise<StoreResult<void>> {
   });
 }
 
+/** Records read per request: each answer is turned into objects in one short task, not one long one for all. */
+const CHUNK = 500;
+
+type ListIndex = { getAll(range?: IDBKeyRange | null, count?: number): Promise<unknown[]>; };
+
+/**
+ * The whole index in its order, CHUNK records at a time. Each chunk starts at the last key read (inclusive, as
+ * several records may share a key) and skips the records already taken; a key shared by more records than a
+ * chunk holds is read whole.
+ */
+async function readInChunks(index: ListIndex & { keyPath: string | string[] }): Promise<ListRecord[]> {
+  const keyOf = (r: ListRecord): IDBValidKey | undefined => (r as unknown as Record<string, IDBValidKey>)[index.keyPath as string];
+  const out: ListRecord[] = [];
+  const seen = new Set<string>();
+  let from: IDBValidKey | undefined;
+  for (;;) {
+    const range = from === undefined ? null : IDBKeyRange.lowerBound(from);
+    let chunk = (await index.getAll(range, CHUNK)) as ListRecord[];
+    let fresh = chunk.filter((r) => !seen.has(r.id));
+    if (fresh.length === 0 && chunk.length === CHUNK && from !== undefined) {
+      chunk = (await index.getAll(IDBKeyRange.only(from))) as ListRecord[];
+      fresh = chunk.filter((r) => !seen.has(r.id));
+      for (const r of fresh) {
+        seen.add(r.id);
+        out.push(r);
+      }
+      const after = (await index.getAll(IDBKeyRange.lowerBound(from, true), 1)) as ListRecord[];
+      if (after.length === 0) return out;
+      from = keyOf(after[0]);
+      continue;
+    }
+    for (const r of fresh) {
+      seen.add(r.id);
+      out.push(r);
+    }
+    if (chunk.length < CHUNK) return out;
+    from = keyOf(chunk[chunk.length - 1]);
+  }
+}
+
 /**
  * The saved list, sorted by the index of `sort`; with `limit`, only the first `limit` rows (a quick first page to
  * show while the whole list is read).
@@ -52,7 +92,7 @@ export async function listRows(ctx: StoreContext, sort: CaseSort, limit?: number
       const [first, total] = await Promise.all([index.getAll(null, limit), index.count()]);
       return { rows: (first as ListRecord[]).filter(isSummary), unreadable: [], total, complete: false };
     }
-    const all = (await index.getAll()) as ListRecord[];
+    const all = await readInChunks(index);
     // Unreadable records carry no sort keys and so are not in the indexes: read them apart (few, if any).
     const rows = all.filter(isSummary);
     const unreadable: UnreadableRecord[] = [];

@@ -146,12 +146,14 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
     return t1 - t0;
   }, COUNT);
 
-  const long = await page.evaluate((t) => (window as unknown as PageTools).__long.filter((e) => e.at >= t), since);
+  const all = await page.evaluate(() => (window as unknown as PageTools).__long);
+  const long = all.filter((e) => e.at >= since);
+  const bootLongest = Math.max(0, ...all.filter((e) => e.at < since).map((e) => e.ms));
   const longest = Math.max(0, ...long.map((e) => e.ms));
   console.log(
     `cases-scale: seed ${COUNT} in ${seedMs.toFixed(0)} ms; start and upgrade to version 4 ${bootMs} ms; open ${open.ms.toFixed(0)} ms to the first page, ${open.wholeMs.toFixed(0)} ms to the whole list (${open.rows} rows, ${open.nodes} elements); ` +
       `search per key ${search.map((m) => m.toFixed(0)).join(', ')} ms; sort by name ${sort.ms.toFixed(0)} ms (whole list ${sort.wholeMs.toFixed(0)} ms); delete ${del.toFixed(0)} ms; undo ${undo.toFixed(0)} ms; ` +
-      `long tasks ${long.length}, longest ${longest.toFixed(0)} ms`,
+      `long tasks ${long.length}, longest ${longest.toFixed(0)} ms (while starting and upgrading: longest ${bootLongest.toFixed(0)} ms)`,
   );
   expect(open.rows).toBe(50);
   expect(open.ms).toBeLessThan(STEP_MS);
@@ -166,6 +168,8 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
   await page.getByRole('button', { name: 'Show 50 more' }).click();
   await expect(page.locator('.case-list').first().locator(':scope > li')).toHaveCount(100);
   await expect(page.getByText(`Showing 100 of ${COUNT}.`)).toBeVisible();
+  // Keyboard focus moved to the first new row, not left below the list.
+  await expect(page.locator('.case-list').first().locator(':scope > li').nth(50).getByRole('button').first()).toBeFocused();
   await page.locator('#saved-h').scrollIntoViewIfNeeded();
   await page.evaluate(() => document.querySelector('#saved-h')?.scrollIntoView({ block: 'start' }));
   await page.screenshot({ path: 'test-results/cases-scale-1024x768.png' });

@@ -92,4 +92,26 @@ describe('the saved list from the list store', () => {
     unwrap(await again.deleteCase('junk-1'));
     expect(unwrap(await again.listRows('name')).unreadable).toEqual([]);
   });
+
+  it('reads a list longer than one chunk whole and in order, even when 600 cases share one sort key', async () => {
+    const h = harness();
+    (await h.open()).close();
+    const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
+    const tx = db.transaction(['cases'], 'readwrite');
+    const same = '2026-05-01T00:00:00.000Z';
+    for (let i = 0; i < 1100; i++) {
+      const name = i < 600 ? 'Same name' : `Pile ${i}`;
+      tx.objectStore('cases').put({ ...demoCase(), id: idNumber(1000 + i), name, updatedAt: i < 600 ? same : demoCase().updatedAt, revision: 1 });
+    }
+    await new Promise((resolve) => (tx.oncomplete = resolve));
+    db.close();
+    const store = await h.open();
+    const byName = unwrap(await store.listRows('name')).rows;
+    expect(byName).toHaveLength(1100);
+    expect(new Set(byName.map((r) => r.id)).size).toBe(1100);
+    // Cross-check against sorting the full cases in memory (ties in any order: compare the names).
+    const full = unwrap(await store.listCases()).cases;
+    expect(byName.map((r) => r.name)).toEqual(sortCases(full, 'name').map((c) => c.name));
+    expect(unwrap(await store.listRows('updated')).rows).toHaveLength(1100);
+  });
 });

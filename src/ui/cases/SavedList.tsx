@@ -1,4 +1,4 @@
-import { useId, useMemo, useState } from 'preact/hooks';
+import { useEffect, useId, useMemo, useRef, useState } from 'preact/hooks';
 import type { Case } from '../../case';
 import { revisionOf, searchSummaries, summaryOf, type CaseSort, type CaseStore, type CaseSummary, type UndoToken } from '../../store';
 import type { AppModel } from '../state/app-model';
@@ -43,6 +43,14 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
   const id = useId();
   const rows = listState.status === 'loaded' ? listState.list.rows : null;
   const matched = useMemo(() => (rows ? searchSummaries(rows, query) : []), [rows, query]);
+  // After "Show more", keyboard focus goes to the first new row (it would otherwise stay below the list).
+  const listRef = useRef<HTMLUListElement>(null);
+  const focusRow = useRef<number | null>(null);
+  useEffect(() => {
+    const at = focusRow.current;
+    focusRow.current = null;
+    if (at !== null) listRef.current?.children[at]?.querySelector('button')?.focus();
+  }, [limit]);
 
   const fail = (message: string) => setStatus({ text: sentence(message), tone: 'error' });
 
@@ -131,7 +139,7 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
       )}
       <p class="list-count" aria-live="polite">{listCountWords(matched.length, total, query)}</p>
       {matched.length === 0 && total > 0 && <p>{noMatchWords(query)}</p>}
-      <ul class="case-list">
+      <ul class="case-list" ref={listRef}>
         {shown.map((c) => (
           <CaseRow
             key={c.id}
@@ -149,7 +157,14 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
       {matched.length > shown.length && (
         <div class="list-more">
           <p class="cases-muted">{pageWords(shown.length, matched.length)}</p>
-          <button type="button" class="btn" onClick={() => setLimit((n) => n + PAGE_ROWS)}>
+          <button
+            type="button"
+            class="btn"
+            onClick={() => {
+              focusRow.current = shown.length;
+              setLimit(shown.length + PAGE_ROWS);
+            }}
+          >
             Show {Math.min(PAGE_ROWS, matched.length - shown.length)} more
           </button>
         </div>
