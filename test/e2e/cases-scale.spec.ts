@@ -62,9 +62,11 @@ const UNTIL = `window.__until = (test) => new Promise((resolve) => {
   tick();
 });
 window.__long = [];
+window.__marks = [];
 new PerformanceObserver((list) => { for (const e of list.getEntries()) window.__long.push({ at: e.startTime, ms: e.duration }); }).observe({ type: 'longtask' });`;
 
 interface PageTools {
+  __marks: [string, number][];
   __until(test: () => boolean): Promise<number>;
   __long: { at: number; ms: number }[];
 }
@@ -88,6 +90,7 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
   const open = await page.evaluate(async (n) => {
     const w = window as unknown as PageTools;
     const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['open', t0]);
     location.hash = '#/cases';
     const t1 = await w.__until(() => (document.querySelector('.list-count')?.textContent ?? '') === `${n} saved cases` && document.querySelector('.case-list .case-row') !== null);
     const rows = document.querySelectorAll('.case-list > li').length;
@@ -102,12 +105,14 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
     const times: number[] = [];
     for (const ch of 'pile ') {
       const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['search', t0]);
       input.value += ch;
       input.dispatchEvent(new Event('input', { bubbles: true }));
       const q = input.value.trim();
       times.push((await w.__until(() => (document.querySelector('.list-count')?.textContent ?? '').includes(`“${q}”`))) - t0);
     }
     const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['search-clear', t0]);
     input.value = '';
     input.dispatchEvent(new Event('input', { bubbles: true }));
     times.push((await w.__until(() => !(document.querySelector('.list-count')?.textContent ?? '').includes('match'))) - t0);
@@ -118,6 +123,7 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
     const w = window as unknown as PageTools;
     const select = document.querySelector<HTMLSelectElement>('.list-tools select')!;
     const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['sort', t0]);
     select.value = 'name';
     select.dispatchEvent(new Event('change', { bubbles: true }));
     const first = () => document.querySelector('.case-list .case-name')?.textContent ?? '';
@@ -130,6 +136,7 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
     const w = window as unknown as PageTools;
     const button = [...document.querySelectorAll<HTMLButtonElement>('.case-list .case-row button')].find((b) => b.textContent?.startsWith('Delete'))!;
     const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['delete', t0]);
     button.click();
     const t1 = await w.__until(() => (document.querySelector('.list-count')?.textContent ?? '') === `${n - 1} saved cases`);
     return t1 - t0;
@@ -140,6 +147,7 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
     const w = window as unknown as PageTools;
     const button = [...document.querySelectorAll<HTMLButtonElement>('button')].find((b) => b.textContent === 'Undo')!;
     const t0 = performance.now();
+    (window as unknown as PageTools).__marks.push(['undo', t0]);
     button.click();
     const first = () => document.querySelector('.case-list .case-name')?.textContent ?? '';
     const t1 = await w.__until(() => (document.querySelector('.list-count')?.textContent ?? '') === `${n} saved cases` && first().startsWith('Baffle 2 —'));
@@ -149,11 +157,14 @@ test('5,000 saved cases: open, search, sort, delete and undo each within 500 ms,
   const all = await page.evaluate(() => (window as unknown as PageTools).__long);
   const long = all.filter((e) => e.at >= since);
   const bootLongest = Math.max(0, ...all.filter((e) => e.at < since).map((e) => e.ms));
+  // Which step each long task fell in (the last step started before it), to say where time went.
+  const marks = await page.evaluate(() => (window as unknown as PageTools).__marks);
+  const where = long.map((e) => `${e.ms.toFixed(0)} ms in ${[...marks].reverse().find((m) => m[1] <= e.at)?.[0] ?? 'start'}`);
   const longest = Math.max(0, ...long.map((e) => e.ms));
   console.log(
     `cases-scale: seed ${COUNT} in ${seedMs.toFixed(0)} ms; start and upgrade to version 4 ${bootMs} ms; open ${open.ms.toFixed(0)} ms to the first page, ${open.wholeMs.toFixed(0)} ms to the whole list (${open.rows} rows, ${open.nodes} elements); ` +
       `search per key ${search.map((m) => m.toFixed(0)).join(', ')} ms; sort by name ${sort.ms.toFixed(0)} ms (whole list ${sort.wholeMs.toFixed(0)} ms); delete ${del.toFixed(0)} ms; undo ${undo.toFixed(0)} ms; ` +
-      `long tasks ${long.length}, longest ${longest.toFixed(0)} ms (while starting and upgrading: longest ${bootLongest.toFixed(0)} ms)`,
+      `long tasks ${long.length}, longest ${longest.toFixed(0)} ms [${where.join('; ')}] (while starting and upgrading: longest ${bootLongest.toFixed(0)} ms)`,
   );
   expect(open.rows).toBe(50);
   expect(open.ms).toBeLessThan(STEP_MS);
