@@ -97,7 +97,9 @@ export async function firstCase(store: CaseStore | null, fresh = false, liveTabs
         if (taken.ok) return await fromDraft(store, taken.value);
       }
     }
-    // The light list (no full case parsed): with thousands of saved cases this stays one short read.
+    // One light row and the count (no full case parsed); the whole light list only when no case is readable.
+    const first = await store.listRows('updated', 1);
+    if (first.ok && first.value.total > 0) return null;
     const list = await store.listRows('updated');
     if (list.ok && (list.value.rows.length > 0 || list.value.unreadable.length > 0)) return null;
     return demo();
