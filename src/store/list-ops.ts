@@ -36,7 +36,7 @@ export function rebuildList(ctx: StoreContext): Promise<StoreResult<void>> {
 }
 
 /** Records read per request: each answer is turned into objects in one short task, not one long one for all. */
-const CHUNK = 500;
+const CHUNK = 250;
 
 type ListIndex = { getAll(range?: IDBKeyRange | null, count?: number): Promise<unknown[]>; };
 

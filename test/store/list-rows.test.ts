@@ -93,7 +93,7 @@ describe('the saved list from the list store', () => {
     expect(unwrap(await again.listRows('name')).unreadable).toEqual([]);
   });
 
-  it('reads a list longer than one chunk whole and in order, even when 600 cases share one sort key', async () => {
+  it('reads a list longer than one chunk whole and in order, even when 600 cases (more than a chunk) share one sort key', async () => {
     const h = harness();
     (await h.open()).close();
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);

@@ -2,7 +2,7 @@ import { useEffect, useId, useMemo, useRef, useState } from 'preact/hooks';
 import type { Case } from '../../case';
 import { revisionOf, searchSummaries, summaryOf, type CaseSort, type CaseStore, type CaseSummary, type UndoToken } from '../../store';
 import type { AppModel } from '../state/app-model';
-import { CaseRow, type RowEdit } from './CaseRow';
+import { StableCaseRow, type RowEdit } from './CaseRow';
 import { afterDeleted, afterRenamed, afterRestored } from './open-case';
 import type { Status } from './StatusLine';
 import type { CaseListControl } from './use-case-list';
@@ -141,7 +141,7 @@ export function SavedList({ store, model, list, reload, openId, setStatus, focus
       {matched.length === 0 && total > 0 && <p>{noMatchWords(query)}</p>}
       <ul class="case-list" ref={listRef}>
         {shown.map((c) => (
-          <CaseRow
+          <StableCaseRow
             key={c.id}
             c={c}
             isOpen={c.id === openId}

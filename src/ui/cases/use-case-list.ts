@@ -32,6 +32,9 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
   // Only the latest load may write the state (a slow early answer must not replace a newer one).
   const seq = useRef(0);
   const sortShown = useRef<CaseSort | null>(null);
+  // Read at the time of use, so an Undo offered before the order changed puts the row in the current order.
+  const sortNow = useRef(sort);
+  sortNow.current = sort;
   const reload = useCallback(async () => {
     if (!store) return;
     const mine = ++seq.current;
@@ -82,7 +85,7 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
         if (s.status !== 'loaded') return s;
         const rows = s.list.rows.filter((r) => r.id !== row.id);
         const added = rows.length === s.list.rows.length ? 1 : 0;
-        const cmp = compareSummaries(sort);
+        const cmp = compareSummaries(sortNow.current);
         // Binary search for its place: the rows are already in this order.
         let lo = 0;
         let hi = rows.length;
@@ -95,7 +98,7 @@ export function useCaseList(store: CaseStore | null): CaseListControl {
         return { status: 'loaded', list: { ...s.list, rows, total: s.list.total + added } };
       });
     },
-    [sort],
+    [],
   );
   return { state, sort, setSort, reload, dropRow, placeRow };
 }
