@@ -6,6 +6,8 @@
 import type { Case } from '../case';
 import type { StoreChange } from './broadcast';
 import type { SaveBase } from './case-ops';
+import type { CaseSort } from './list-record';
+import type { CaseRows } from './list-ops';
 import type { StoreResult } from './errors';
 import type { PersistenceAnswer, QuotaEstimate, StorageLike } from './persistence';
 
@@ -66,6 +68,12 @@ export interface DraftList {
 export interface CaseStore {
   /** All cases, newest change first, plus any record that cannot be read (reported, not dropped). */
   listCases(): Promise<StoreResult<CaseList>>;
+  /**
+   * The saved list as light rows (no full case read or parsed), in the order of `sort` from the database's own
+   * indexes; search the rows with `searchSummaries`. Open a row with `getCase(row.id)`. With `limit`, only the
+   * first rows (and the total count): a quick first page to show while the whole list is read.
+   */
+  listRows(sort: CaseSort, limit?: number): Promise<StoreResult<CaseRows>>;
   /** One case; 'not-found' or 'unreadable' otherwise. */
   getCase(id: string): Promise<StoreResult<Case>>;
   /**

@@ -2,7 +2,8 @@
 import { cutText, parseCase, type Case } from '../case';
 import type { CaseList, UndoToken, UnreadableRecord } from './api';
 import { caseKey, checkIncoming, failWith, inTx, notFound, readStored, type StoreContext, type Tx } from './context';
-import { CASES, storedRevision, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';
+import { CASES, LIST, storedRevision, TRASH, TRASH_DAYS, type TrashRecord } from './db-schema';
+import { listRecordOf, summaryOf } from './list-record';
 import { storeError, StoreFailure, type StoreResult } from './errors';
 import { revisionOf, stamp, stampFrom, toRecord } from './revision';
 
@@ -50,7 +51,7 @@ export interface SaveBase {
  */
 export function saveCase(ctx: StoreContext, c: Case, base?: SaveBase): Promise<StoreResult<Case>> {
   const action = 'save the case';
-  return inTx(ctx, action, [CASES], 'readwrite', async (tx) => {
+  return inTx(ctx, action, [CASES, LIST], 'readwrite', async (tx) => {
     const incoming = checkIncoming(c, action);
     const store = tx.objectStore(CASES);
     const raw: unknown = await store.get(incoming.id);
@@ -69,6 +70,7 @@ export function saveCase(ctx: StoreContext, c: Case, base?: SaveBase): Promise<S
     const revision = (current ?? 0) + 1;
     const value: Case = { ...incoming, updatedAt: ctx.now().toISOString(), appVersion: ctx.appVersion };
     await store.put(toRecord(value, revision));
+    await tx.objectStore(LIST).put(summaryOf(value, revision));
     return stamp(value, revision);
   });
 }
@@ -88,29 +90,31 @@ function revisionRead(c: Case): number {
 
 export function duplicateCase(ctx: StoreContext, id: string, newName: string): Promise<StoreResult<Case>> {
   const action = 'duplicate the case';
-  return inTx(ctx, action, [CASES], 'readwrite', async (tx) => {
+  return inTx(ctx, action, [CASES, LIST], 'readwrite', async (tx) => {
     const original = await readForChange(tx, id, action);
     const nowIso = ctx.now().toISOString();
     const copy = checkIncoming({ ...original, id: ctx.newId(), name: newName, createdAt: nowIso, updatedAt: nowIso, appVersion: ctx.appVersion }, action);
     await tx.objectStore(CASES).add(toRecord(copy, 1));
+    await tx.objectStore(LIST).put(summaryOf(copy, 1));
     return stamp(copy, 1);
   });
 }
 
 export function renameCase(ctx: StoreContext, id: string, newName: string): Promise<StoreResult<Case>> {
   const action = 'rename the case';
-  return inTx(ctx, action, [CASES], 'readwrite', async (tx) => {
+  return inTx(ctx, action, [CASES, LIST], 'readwrite', async (tx) => {
     const original = await readForChange(tx, id, action);
     const renamed = checkIncoming({ ...original, name: newName, updatedAt: ctx.now().toISOString(), appVersion: ctx.appVersion }, action);
     const revision = revisionRead(original) + 1;
     await tx.objectStore(CASES).put(toRecord(renamed, revision));
+    await tx.objectStore(LIST).put(summaryOf(renamed, revision));
     return stamp(renamed, revision);
   });
 }
 
 export function deleteCase(ctx: StoreContext, id: string): Promise<StoreResult<UndoToken>> {
   const action = 'delete the case';
-  return inTx(ctx, action, [CASES, TRASH], 'readwrite', async (tx) => {
+  return inTx(ctx, action, [CASES, TRASH, LIST], 'readwrite', async (tx) => {
     const key = caseKey(id, action);
     const cases = tx.objectStore(CASES);
     // The record is kept exactly as stored, readable or not, so undo gives back what was there.
@@ -121,6 +125,7 @@ export function deleteCase(ctx: StoreContext, id: string): Promise<StoreResult<U
     const entry: TrashRecord = { token: ctx.newId(), deletedAt: now.toISOString(), record: raw };
     await trash.add(entry);
     await cases.delete(key);
+    await tx.objectStore(LIST).delete(key);
     // Purge what has been in the trash longer than TRASH_DAYS (done here so opening the app does no extra work).
     const limit = now.getTime() - TRASH_DAYS * DAY_MS;
     for (const old of (await trash.getAll()) as TrashRecord[]) {
@@ -138,7 +143,7 @@ function restoredName(name: string, max: number): string {
 
 export function undoDelete(ctx: StoreContext, token: UndoToken, nameChars: number): Promise<StoreResult<Case | null>> {
   const action = 'undo the delete';
-  return inTx(ctx, action, [CASES, TRASH], 'readwrite', async (tx) => {
+  return inTx(ctx, action, [CASES, TRASH, LIST], 'readwrite', async (tx) => {
     const trash = tx.objectStore(TRASH);
     const entry = (typeof token === 'string' && token.length > 0 ? await trash.get(token) : undefined) as TrashRecord | undefined;
     if (!entry) failWith('not-found', `Could not ${action}: it is no longer available (already undone, or deleted more than ${TRASH_DAYS} days ago).`);
@@ -153,11 +158,13 @@ export function undoDelete(ctx: StoreContext, token: UndoToken, nameChars: numbe
       // One more than it had, so a tab still holding the deleted version notices the change when it saves.
       const revision = taken ? 1 : storedRevision(entry.record) + 1;
       await cases.add(toRecord(restored, revision));
+      await tx.objectStore(LIST).put(summaryOf(restored, revision));
       stamp(restored, revision);
     } else {
       // An unreadable record goes back exactly as it was; `add` refuses (and aborts) rather than overwrite.
       try {
-        await cases.add(entry.record);
+        const key = await cases.add(entry.record);
+        await tx.objectStore(LIST).put(listRecordOf(entry.record, String(key)));
       } catch {
         failWith('unreadable', `Could not ${action}: the deleted record cannot be read and its place is taken; it stays restorable.`);
       }

@@ -12,6 +12,7 @@ import { DB_NAME } from './db-schema';
 import * as drafts from './draft-ops';
 import { MESSAGES, ok, storeError, type StoreResult } from './errors';
 import { APP_VERSION, newCaseId } from './new-case';
+import { listRows } from './list-ops';
 import { openDatabase } from './open-db';
 import { defaultStorage, estimateQuota, requestPersistence } from './persistence';
 import * as received from './received-ops';
@@ -56,6 +57,7 @@ export async function openStore(factory?: IDBFactory, options: StoreOptions = {}
   const draftsChange = (): StoreChange => ({ type: 'drafts', from: tabId });
   const store: CaseStore = {
     listCases: () => cases.listCases(ctx),
+    listRows: (sort, limit) => listRows(ctx, sort, limit),
     getCase: (id) => cases.getCase(ctx, id),
     saveCase: async (c, base) => told(await cases.saveCase(ctx, c, base), savedChange),
     duplicateCase: async (id, newName) => told(await cases.duplicateCase(ctx, id, newName), savedChange),

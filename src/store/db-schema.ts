@@ -12,15 +12,21 @@
  *   `cases`  keyPath "id"   case objects, schema version 1 (older ones rewritten by the step)
  *   `draft`  out-of-line    `DraftRecord` under the key "current"
  *   `trash`  keyPath "token" `TrashRecord`: deleted cases kept for undo (purged after TRASH_DAYS)
- * Version 3 — current:
+ * Version 3:
  *   `cases`  keyPath "id"   case objects, each with a `revision` beside the case fields (`StoredCase`): 1 when
  *                           first written, +1 on every change; a record without one counts as revision 0
  *   `drafts` keyPath "key"  `TabDraftRecord`: one draft per tab and case (several tabs no longer share one slot);
  *                           the step moves version 2's single draft here under the tab "earlier"
  *   `trash`  as in version 2
+ * Version 4 — current:
+ *   `list`   keyPath "id"   `ListRecord`: a light summary of every `cases` record (name, tag, kind, time, key result,
+ *                           folded search text, sort keys; or the reason it cannot be read), written with the case in
+ *                           the same transaction; indexes by-updated, by-name, by-tag, by-kind give the list's orders
+ *   `cases`, `drafts`, `trash` as in version 3
  */
 import type { IDBPDatabase, IDBPTransaction } from 'idb';
 import { parseCase } from '../case';
+import { LIST_INDEXES, listRecordOf } from './list-record';
 
 export const DB_NAME = 'wetmode';
 export const CASES = 'cases';
@@ -32,6 +38,8 @@ export const EARLIER_TAB = 'earlier';
 /** The tab name of drafts set aside when their tab moved on to another case (offered on the Cases screen). */
 export const SET_ASIDE_TAB = 'set-aside';
 export const TRASH = 'trash';
+/** Version 4: one light summary per case record, for the saved list. */
+export const LIST = 'list';
 export const DRAFT_KEY = 'current';
 /** Deleted cases stay restorable for this many days. */
 export const TRASH_DAYS = 30;
@@ -145,6 +153,35 @@ async function dbV2toV3(db: UpgradeDb, tx: UpgradeTx, ctx: UpgradeContext): Prom
   db.deleteObjectStore(DRAFT);
 }
 
+/** Creates the `list` store with its sort indexes (also used to rebuild it). */
+export function createListStore(db: UpgradeDb): void {
+  const list = db.createObjectStore(LIST, { keyPath: 'id' });
+  for (const ix of LIST_INDEXES) list.createIndex(ix.name, ix.keyPath);
+}
+
+/** Case records read and summarised at a time: one short task each (about 10 ms), few round trips. */
+const FILL_CHUNK = 200;
+
+/** Writes a list record for every case record (readable or not), in key order, a chunk at a time. */
+export async function fillListStore(tx: IDBPTransaction<unknown, string[], 'versionchange' | 'readwrite'>): Promise<void> {
+  const cases = tx.objectStore(CASES);
+  const list = tx.objectStore(LIST);
+  let after: IDBValidKey | null = null;
+  for (;;) {
+    const range: IDBKeyRange | null = after === null ? null : IDBKeyRange.lowerBound(after, true);
+    const [keys, values]: [IDBValidKey[], unknown[]] = await Promise.all([cases.getAllKeys(range, FILL_CHUNK), cases.getAll(range, FILL_CHUNK)]);
+    if (keys.length === 0) return;
+    await Promise.all(keys.map((k, i) => list.put!(listRecordOf(values[i], String(k)))));
+    after = keys[keys.length - 1];
+  }
+}
+
+/** 3 -> 4: the list store, filled from every case record (readable or not; the cases themselves are untouched). */
+async function dbV3toV4(db: UpgradeDb, tx: UpgradeTx): Promise<void> {
+  createListStore(db);
+  await fillListStore(tx);
+}
+
 /** The ladder; its length is the current database version. */
-export const DB_STEPS: readonly DbStep[] = [dbV0toV1, dbV1toV2, dbV2toV3];
+export const DB_STEPS: readonly DbStep[] = [dbV0toV1, dbV1toV2, dbV2toV3, dbV3toV4];
 export const DB_VERSION = DB_STEPS.length;

@@ -16,7 +16,9 @@ export type { CaseList, CaseStore, Draft, DraftList, ReceivedOutcome, SameCaseAn
 export { openStore } from './case-store';
 export { DB_NAME, DB_VERSION, TRASH_DAYS } from './db-schema';
 export type { StoreError, StoreErrorKind, StoreResult } from './errors';
-export { searchCases, sortCases, type CaseSort } from './list-view';
+export { searchCases, sortCases } from './list-view';
+export { compareSummaries, searchSummaries, summaryOf, type CaseSort, type CaseSummary } from './list-record';
+export type { CaseRows } from './list-ops';
 export { APP_VERSION, newCase, newCaseId } from './new-case';
 export { estimateQuota, requestPersistence, type PersistenceAnswer, type QuotaEstimate, type StorageLike } from './persistence';
 export { revisionOf } from './revision';

@@ -1,13 +1,9 @@
 /** Pure helpers for the Cases screen: text search and sorting of a loaded list. */
 import type { Case } from '../case';
 import { kindOf } from '../kinds/registry';
+import { fold, type CaseSort } from './list-record';
 
-export type CaseSort = 'updated' | 'name' | 'tag' | 'kind';
-
-function fold(s: string): string {
-  // Case- and accent-insensitive: "Übergang" is found by "uber".
-  return s.normalize('NFD').replace(/[\u0300-\u036f]/g, '').toLowerCase();
-}
+export type { CaseSort };
 
 /**
  * Cases whose name, tag, note or member kind contain every word of `query` (any order, any case, accents ignored).

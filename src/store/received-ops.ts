@@ -5,7 +5,8 @@
 import { CASE_LIMITS, cutText, isRenamedCopy, parseCase, sameCaseContent, type Case } from '../case';
 import type { ReceivedOutcome, SameCaseAnswer } from './api';
 import { checkIncoming, inTx, type StoreContext, type Tx } from './context';
-import { CASES } from './db-schema';
+import { CASES, LIST } from './db-schema';
+import { summaryOf } from './list-record';
 import type { StoreResult } from './errors';
 import { stamp, stampFrom, toRecord } from './revision';
 
@@ -49,7 +50,7 @@ export function receivedName(name: string, date: string, taken: ReadonlySet<stri
 
 export function saveReceived(ctx: StoreContext, c: Case): Promise<StoreResult<ReceivedOutcome>> {
   const action = 'save the received case';
-  return inTx(ctx, action, [CASES], 'readwrite', async (tx): Promise<ReceivedOutcome> => {
+  return inTx(ctx, action, [CASES, LIST], 'readwrite', async (tx): Promise<ReceivedOutcome> => {
     const incoming = checkIncoming(c, action);
     const found = await compareWithSaved(tx, incoming);
     if (found.status === 'same') return { status: 'same', case: found.saved };
@@ -59,6 +60,7 @@ export function saveReceived(ctx: StoreContext, c: Case): Promise<StoreResult<Re
     if (found.status === 'new') {
       const value: Case = { ...incoming, updatedAt: nowIso, appVersion: ctx.appVersion };
       await cases.add(toRecord(value, 1));
+      await tx.objectStore(LIST).put(summaryOf(value, 1));
       return { status: 'saved', case: stamp(value, 1) };
     }
     const names = new Set<string>();
@@ -72,6 +74,7 @@ export function saveReceived(ctx: StoreContext, c: Case): Promise<StoreResult<Re
     );
     // `add`, not `put`: if the new id were somehow taken, the transaction aborts instead of overwriting.
     await cases.add(toRecord(copy, 1));
+    await tx.objectStore(LIST).put(summaryOf(copy, 1));
     return { status: 'saved-copy', case: stamp(copy, 1) };
   });
 }

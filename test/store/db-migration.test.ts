@@ -96,8 +96,51 @@ const v2: PastLayout = {
   },
 };
 
+/** Database version 3: `cases` (with `revision`), `drafts` (keyPath key, by tab and case), `trash`. */
+function openV3Layout(factory: IDBFactory): Promise<IDBDatabase> {
+  return openRaw(factory, 'wetmode', 3, (d) => {
+    d.createObjectStore('cases', { keyPath: 'id' });
+    d.createObjectStore('drafts', { keyPath: 'key' });
+    d.createObjectStore('trash', { keyPath: 'token' });
+  });
+}
+
+const v3Second = { ...demoCase(), id: '00000000-0000-4000-8000-0000000000b9', name: 'Pile 9', tag: '', updatedAt: '2020-01-01T00:00:00.000Z', revision: 2 };
+const v3Draft = { key: 'tab-a\n' + demoCase().id, tab: 'tab-a', caseId: demoCase().id, savedAt: '2026-12-01T09:00:00.000Z', baseRevision: 4, case: { ...demoCase(), name: 'Edited in tab a' } };
+
+const v3: PastLayout = {
+  async build(factory) {
+    const db = await openV3Layout(factory);
+    const tx = db.transaction(['cases', 'drafts', 'trash'], 'readwrite');
+    await req(tx.objectStore('cases').put({ ...demoCase(), revision: 4 }));
+    await req(tx.objectStore('cases').put(v3Second));
+    await req(tx.objectStore('cases').put(junk));
+    await req(tx.objectStore('drafts').put(v3Draft));
+    await req(tx.objectStore('trash').put(v2TrashEntry));
+    db.close();
+  },
+  async check(h) {
+    const store = await h.open();
+    // The step built one list row per readable case, with its revision, and reported the unreadable record.
+    const byName = unwrap(await store.listRows('name'));
+    expect(byName.rows.map((r) => [r.name, r.revision])).toEqual([['Pile 9', 2], [demoCase().name, 4]]);
+    expect(byName.unreadable.map((u) => u.key)).toEqual(['junk-7']);
+    expect(unwrap(await store.listRows('updated')).rows.map((r) => r.id)).toEqual([demoCase().id, v3Second.id]);
+    // The cases themselves and the drafts are as they were.
+    const list = unwrap(await store.listCases());
+    expect(list.cases.find((c) => c.id === demoCase().id)).toEqual(demoCase());
+    expect(revisionOf(list.cases.find((c) => c.id === demoCase().id)!)).toBe(4);
+    expect(unwrap(await store.listDrafts()).drafts.map((d) => [d.tab, d.case.name, d.baseRevision])).toEqual([['tab-a', 'Edited in tab a', 4]]);
+    // Undo of a deletion made under version 3 puts its row back in the list.
+    expect(unwrap(await store.undoDelete('tok-1'))?.name).toBe('Deleted pile');
+    expect(unwrap(await store.listRows('name')).rows.map((r) => r.name)).toEqual(['Deleted pile', 'Pile 9', demoCase().name]);
+    store.close();
+    expect((await rawRecords(h.factory, 'cases')).values).toContainEqual(junk);
+  },
+};
+
 /** One entry per past database version: adding a version to the ladder without a fixture here fails the first test. */
-const PAST: Record<number, PastLayout> = { 1: v1, 2: v2 };
+const PAST: Record<number, PastLayout> = { 1: v1, 2: v2, 3: v3 };
 
 describe('database migration ladder', () => {
   it('has a hand-built fixture for every past version', () => {
@@ -108,7 +151,7 @@ describe('database migration ladder', () => {
     const h = harness();
     (await h.open()).close();
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
-    expect([db.version, [...db.objectStoreNames].sort()]).toEqual([DB_VERSION, ['cases', 'drafts', 'trash']]);
+    expect([db.version, [...db.objectStoreNames].sort()]).toEqual([DB_VERSION, ['cases', 'drafts', 'list', 'trash']]);
     db.close();
   });
 

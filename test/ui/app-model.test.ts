@@ -27,7 +27,7 @@ describe('the open-case model', () => {
     const doc = caseFromDemo(DEMO_CASES[0]);
     model.open(doc, 'editing', false);
     await settle();
-    expect(model.get().solverMessage).toBe('The solver took longer than 10 s and was stopped. Check the inputs for extreme values.');
+    expect(model.get().solverMessage).toBe('This input could not be solved: the solver took longer than 10 s and was stopped. Check the inputs for extreme values.');
     expect(model.get().computing).toBe(false);
     expect(model.get().doc!.inputs).toEqual(doc.inputs);
   });

@@ -1,4 +1,5 @@
-import type { Case } from '../../case';
+import { Component } from 'preact';
+import type { CaseSummary } from '../../store';
 import { VerdictBadge } from '../results/VerdictBadge';
 import { caseRowView } from './format';
 import { copyName } from './names';
@@ -7,7 +8,8 @@ import { NameForm } from './NameForm';
 export type RowEdit = 'rename' | 'duplicate' | null;
 
 interface Props {
-  c: Case;
+  /** The light list row (no full case is needed to show it). */
+  c: CaseSummary;
   /** This case is the one open in the app. */
   isOpen: boolean;
   edit: RowEdit;
@@ -79,4 +81,20 @@ export function CaseRow({ c, isOpen, edit, onEdit, onOpen, onDelete, onRename, o
       )}
     </li>
   );
+}
+
+/**
+ * A row drawn again only when its case, its open mark or its edit form changes: typing a search or adding a page
+ * does not redraw the rows already on screen. Its handlers only call the list's stable actions, so the ones it was
+ * drawn with stay right.
+ */
+export class StableCaseRow extends Component<Props> {
+  override shouldComponentUpdate(next: Props): boolean {
+    const p = this.props;
+    return next.c !== p.c || next.isOpen !== p.isOpen || next.edit !== p.edit;
+  }
+
+  render() {
+    return <CaseRow {...this.props} />;
+  }
 }

@@ -23,7 +23,8 @@ import './cases.css';
 export function CasesScreen() {
   const { store, storeMessage, storeRetryable } = useServices();
   const [state, model] = useModel();
-  const [listState, reload] = useCaseList(store);
+  const list = useCaseList(store);
+  const reload = list.reload;
   const [status, setStatus] = useState<Status | null>(null);
   const [changes, setChanges] = useState(0);
   const statusRef = useRef<HTMLDivElement>(null);
@@ -77,7 +78,7 @@ export function CasesScreen() {
           <SavedList
             store={store}
             model={model}
-            listState={listState}
+            list={list}
             reload={afterChange}
             openId={state.mode === 'editing' ? (state.doc?.id ?? null) : null}
             setStatus={setStatus}

@@ -77,7 +77,8 @@ export interface CaseRowView {
   resultText: string;
 }
 
-export function caseRowView(c: Case): CaseRowView {
+/** Works on a full case or on a light list row (`CaseSummary`): both carry these fields. */
+export function caseRowView(c: Pick<Case, 'id' | 'name' | 'kind' | 'tag' | 'updatedAt' | 'keyResult'>): CaseRowView {
   const f = c.keyResult?.lowestWetFrequencyHz;
   const frequency = typeof f === 'number' && Number.isFinite(f) && f > 0 ? formatHz(f) : null;
   const verdict = c.keyResult?.verdict ?? null;

@@ -117,6 +117,11 @@ export function listCountWords(shown: number, total: number, query: string): str
   return query.trim() === '' ? `${total} ${noun}` : `${shown} of ${total} ${noun} match “${query.trim()}”`;
 }
 
+/** Below a long list: how many rows are on screen out of those that match (the rest come with "Show more"). */
+export function pageWords(onScreen: number, matched: number): string {
+  return `Showing ${onScreen} of ${matched}.`;
+}
+
 /** When a search finds nothing. */
 export function noMatchWords(query: string): string {
   return `No case matches “${query.trim()}”. Search looks for every word in names, tags, notes and member kinds; try fewer words.`;

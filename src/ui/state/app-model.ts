@@ -17,7 +17,7 @@ import { requestOf } from '../../app/read-case';
 import { answerFigures } from '../../app/answer-figures';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
-import { CASE_ADVICE, solverFailureWords } from './solver-words';
+import { caseSolverWords } from './case-solver-words';
 
 export type CaseMode = 'editing' | 'received';
 
@@ -218,7 +218,7 @@ export class AppModel {
         const current = this.state.doc && contentKey(this.state.doc) === key;
         this.set({ results: { answer: ans.value, build, forKey: key }, computing: !current, solverMessage: null });
       } else {
-        this.set({ computing: false, solverMessage: solverFailureWords(ans, CASE_ADVICE) });
+        this.set({ computing: false, solverMessage: caseSolverWords(ans, doc) });
       }
     });
   }

@@ -97,8 +97,11 @@ export async function firstCase(store: CaseStore | null, fresh = false, liveTabs
         if (taken.ok) return await fromDraft(store, taken.value);
       }
     }
-    const list = await store.listCases();
-    if (list.ok && (list.value.cases.length > 0 || list.value.unreadable.length > 0)) return null;
+    // One light row and the count (no full case parsed); the whole light list only when no case is readable.
+    const first = await store.listRows('updated', 1);
+    if (first.ok && first.value.total > 0) return null;
+    const list = await store.listRows('updated');
+    if (list.ok && (list.value.rows.length > 0 || list.value.unreadable.length > 0)) return null;
     return demo();
   } catch {
     return null;
