@@ -46,7 +46,10 @@ export function MeasureScreen() {
     : [];
 
   const onRecord = (record: MotionRecord) => {
-    const a = analyseMotionRecord(record);
+    // Ask for bins fine enough to place the lowest predicted frequency (about ten bins below it); the core gives
+    // the finest the record allows and says so when the record is too short for it.
+    const lowest = predicted.length > 0 ? Math.min(...predicted.map((p) => p.frequencyHz)) : null;
+    const a = analyseMotionRecord(record, lowest ? { resolutionHz: Number((lowest / 10).toPrecision(2)) } : {});
     setPicked(null);
     setSaved(false);
     if (!a.ok) {
