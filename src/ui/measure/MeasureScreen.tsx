@@ -141,7 +141,7 @@ export function MeasureScreen() {
           measured={measured}
           onUse={(c, label, unit) => {
             model.edit((d) => ({ ...d, inputs: c.inputs }));
-            setCalibrated(`${label} = ${c.inputs[c.key]} ${unit}, calibrated to the measurement of ${takenAt.slice(0, 16).replace('T', ' ')}`);
+            setCalibrated(`${label} = ${fmt(Number(c.inputs[c.key]))} ${unit}, calibrated to the measurement of ${takenAt.slice(0, 16).replace('T', ' ')}`);
           }}
         />
       )}

@@ -9,16 +9,19 @@ export function MotionTracePlot({ trace }: { trace: MotionTrace }) {
   if (t.length < 2) return <p class="field-help">Waiting for the sensor…</p>;
   const t0 = t[0];
   const span = Math.max(t[t.length - 1] - t0, 1e-6);
-  let amp = 1e-9;
-  for (const a of trace.axes) for (let i = 0; i < a.length; i++) amp = Math.max(amp, Math.abs(a[i]));
-  const paths = trace.axes.map((a) => {
-    // Centre each axis on its mean so gravity on one axis does not push the others flat.
-    let mean = 0;
-    for (let i = 0; i < a.length; i++) mean += a[i] / a.length;
-    let dev = 1e-9;
-    for (let i = 0; i < a.length; i++) dev = Math.max(dev, Math.abs(a[i] - mean));
+  // Each axis centred on its mean (gravity sits on one axis); all drawn to one scale, so a quiet axis stays quiet.
+  const means = trace.axes.map((a) => {
+    let m = 0;
+    for (let i = 0; i < a.length; i++) m += a[i] / a.length;
+    return m;
+  });
+  let dev = 1e-9;
+  trace.axes.forEach((a, k) => {
+    for (let i = 0; i < a.length; i++) dev = Math.max(dev, Math.abs(a[i] - means[k]));
+  });
+  const paths = trace.axes.map((a, k) => {
     let d = '';
-    for (let i = 0; i < a.length; i++) d += `${i === 0 ? 'M' : 'L'}${((W * (t[i] - t0)) / span).toFixed(1)},${(H / 2 - ((H / 2 - 4) * (a[i] - mean)) / dev).toFixed(1)}`;
+    for (let i = 0; i < a.length; i++) d += `${i === 0 ? 'M' : 'L'}${((W * (t[i] - t0)) / span).toFixed(1)},${(H / 2 - ((H / 2 - 4) * (a[i] - means[k])) / dev).toFixed(1)}`;
     return d;
   });
   return (

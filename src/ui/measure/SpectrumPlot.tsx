@@ -20,10 +20,14 @@ const PAD = { l: 48, r: 12, t: 12, b: 36 };
 export function SpectrumPlot({ analysis, predicted, pickedHz, onPick }: { analysis: SpectrumAnalysis; predicted: PredictedLine[]; pickedHz: number | null; onPick: (peakIndex: number) => void }) {
   const psd = analysis.psd;
   const df = analysis.resolutionHz;
-  const fMax = analysis.nyquistHz;
+  // Show up to a little past the highest predicted line or peak, not always to half the sample rate: the modes of
+  // interest are often low, and a 30 Hz axis would crowd them into the first few pixels.
+  const marks = [...predicted.map((p) => p.band?.[1] ?? p.frequencyHz), ...analysis.peaks.slice(0, 5).map((p) => p.frequencyHz)];
+  const fMax = Math.min(analysis.nyquistHz, marks.length > 0 ? 1.25 * Math.max(...marks) : analysis.nyquistHz);
   let lo = Infinity;
   let hi = -Infinity;
-  for (let k = 1; k < psd.length; k++) {
+  const kMax = Math.min(psd.length - 1, Math.floor(fMax / df));
+  for (let k = 1; k <= kMax; k++) {
     const v = Math.log10(Math.max(psd[k], 1e-300));
     if (Number.isFinite(v)) {
       lo = Math.min(lo, v);
@@ -34,7 +38,7 @@ export function SpectrumPlot({ analysis, predicted, pickedHz, onPick }: { analys
   const x = (f: number) => PAD.l + ((W - PAD.l - PAD.r) * f) / fMax;
   const y = (logP: number) => PAD.t + ((H - PAD.t - PAD.b) * (hi - logP)) / (hi - lo);
   let d = '';
-  for (let k = 1; k < psd.length; k++) d += `${k === 1 ? 'M' : 'L'}${x(k * df).toFixed(1)},${y(Math.log10(Math.max(psd[k], 1e-300))).toFixed(1)}`;
+  for (let k = 1; k <= kMax; k++) d += `${k === 1 ? 'M' : 'L'}${x(k * df).toFixed(1)},${y(Math.log10(Math.max(psd[k], 1e-300))).toFixed(1)}`;
   const ticks = Array.from({ length: 6 }, (_, i) => (fMax * i) / 5);
   return (
     <svg class="spectrum-plot" viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Spectrum of the record: power against frequency, with the predicted frequencies" data-testid="spectrum-plot">
@@ -66,6 +70,7 @@ export function SpectrumPlot({ analysis, predicted, pickedHz, onPick }: { analys
           </g>
         ))}
       {analysis.peaks.map((pk, i) => {
+        if (pk.frequencyHz > fMax) return null;
         const picked = pickedHz !== null && Math.abs(pk.frequencyHz - pickedHz) < 1e-9;
         return (
           <circle
