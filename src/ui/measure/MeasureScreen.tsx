@@ -10,6 +10,7 @@ import { kindOf } from '../../kinds/registry';
 import { analyseMotionRecord, type MotionRecord, type SpectrumAnalysis } from '../../physics/signal';
 import { MEASUREMENT_CAUTIONS } from '../../text/measurement-cautions';
 import { useModel } from '../state/context';
+import { useBand } from '../state/band-context';
 import { hashFor } from '../shell/router';
 import { CalibratePanel } from './CalibratePanel';
 import { MeasurementTrend } from './MeasurementTrend';
@@ -28,6 +29,7 @@ export function MeasureScreen() {
   const [meta, setMeta] = useState<MeasurementMeta>({ takenAt: nowForInput(), by: '', elevation: '', waterLevel: '', note: '', typedHz: '', typedUncertaintyHz: '', mode: '1', state: 'wet' });
   const [calibrated, setCalibrated] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
+  const [bandState] = useBand();
   if (!doc) {
     return (
       <section class="screen" aria-labelledby="screen-title">
@@ -38,10 +40,16 @@ export function MeasureScreen() {
   }
   const answer = state.results?.answer;
   const member = answer && answer.ok && answer.engine !== 'plate' ? answer.member : null;
+  // The first two modes, dry and wet, with their bands where ranges are on and the band is of this case.
+  const band = bandState.status === 'done' && bandState.answer?.ok && bandState.answer.band ? bandState.answer.band : null;
+  const bandOf = (st: 'dry' | 'wet', j: number): [number, number] | undefined => {
+    const m = band?.[st]?.modes[j];
+    return m ? [m.lowHz, m.highHz] : undefined;
+  };
   const predicted: PredictedLine[] = member
     ? [
-        ...member.dry.frequenciesHz.slice(0, 3).map((f, i) => ({ frequencyHz: f, state: 'dry' as const, mode: i + 1 })),
-        ...(member.wet?.frequenciesHz.slice(0, 3).map((f, i) => ({ frequencyHz: f, state: 'wet' as const, mode: i + 1 })) ?? []),
+        ...member.dry.frequenciesHz.slice(0, 2).map((f, i) => ({ frequencyHz: f, state: 'dry' as const, mode: i + 1, band: bandOf('dry', i) })),
+        ...(member.wet?.frequenciesHz.slice(0, 2).map((f, i) => ({ frequencyHz: f, state: 'wet' as const, mode: i + 1, band: bandOf('wet', i) })) ?? []),
       ]
     : [];
 

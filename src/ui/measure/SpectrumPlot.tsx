@@ -15,7 +15,7 @@ export interface PredictedLine {
 
 const W = 640;
 const H = 260;
-const PAD = { l: 48, r: 12, t: 12, b: 36 };
+const PAD = { l: 48, r: 12, t: 22, b: 36 };
 
 export function SpectrumPlot({ analysis, predicted, pickedHz, onPick }: { analysis: SpectrumAnalysis; predicted: PredictedLine[]; pickedHz: number | null; onPick: (peakIndex: number) => void }) {
   const psd = analysis.psd;
