@@ -60,7 +60,7 @@ export function RecordPanel({ onRecord }: { onRecord: (record: MotionRecord, wha
     <div class="panel" data-testid="record-panel">
       <h2>Motion record</h2>
       <div class="field-grid">
-        <label class="field">
+        <label class="field field-wide">
           <span>Import a logger file (CSV or text: time in s, then 1 to 3 accelerations)</span>
           <input type="file" accept=".csv,.txt,.tsv,.dat,text/*" data-testid="record-file" onChange={(e) => {
             const f = (e.currentTarget as HTMLInputElement).files?.[0];
