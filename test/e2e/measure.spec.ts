@@ -71,6 +71,22 @@ test('a recording from synthetic motion events gives the spectrum, the picked pe
   await page.getByTestId('measure-waterLevel').fill('+1.8 m');
   await page.getByTestId('measurement-save').click();
   await expect(page.getByTestId('measurement-trend')).toContainText(picked.toFixed(3));
+  // The raw record is kept on this device, in its own database, apart from the case.
+  const keptRecords = () =>
+    page.evaluate(
+      () =>
+        new Promise<number>((resolve) => {
+          const r = indexedDB.open('wetmode-motion-records');
+          r.onsuccess = () => {
+            const d = r.result;
+            if (!d.objectStoreNames.contains('records')) return resolve(0);
+            const c = d.transaction('records').objectStore('records').count();
+            c.onsuccess = () => resolve(c.result);
+          };
+          r.onerror = () => resolve(-1);
+        }),
+    );
+  await expect.poll(keptRecords).toBe(1);
 
   await expect(page.getByTestId('calibrate-unknown')).toHaveValue('fixityDepth');
   await page.getByTestId('calibrate-run').click();

@@ -16,6 +16,7 @@ import { CalibratePanel } from './CalibratePanel';
 import { MeasurementTrend } from './MeasurementTrend';
 import { RecordPanel } from './RecordPanel';
 import { SpectrumPlot, type PredictedLine } from './SpectrumPlot';
+import { keepRecord } from './record-store';
 import { MeasurementFields, type MeasurementMeta, nowForInput } from './MeasurementFields';
 
 const fmt = (x: number) => String(Number(x.toPrecision(4)));
@@ -24,6 +25,8 @@ export function MeasureScreen() {
   const [state, model] = useModel();
   const doc = state.doc;
   const [analysis, setAnalysis] = useState<SpectrumAnalysis | null>(null);
+  const [record, setRecord] = useState<MotionRecord | null>(null);
+  const [keepMessage, setKeepMessage] = useState<string | null>(null);
   const [analysisError, setAnalysisError] = useState<string | null>(null);
   const [picked, setPicked] = useState<number | null>(null);
   const [meta, setMeta] = useState<MeasurementMeta>({ takenAt: nowForInput(), by: '', elevation: '', waterLevel: '', note: '', typedHz: '', typedUncertaintyHz: '', mode: '1', state: 'wet' });
@@ -54,6 +57,7 @@ export function MeasureScreen() {
     : [];
 
   const onRecord = (record: MotionRecord) => {
+    setRecord(record);
     // Ask for bins fine enough to place the lowest predicted frequency (about ten bins below it); the core gives
     // the finest the record allows and says so when the record is too short for it.
     const lowest = predicted.length > 0 ? Math.min(...predicted.map((p) => p.frequencyHz)) : null;
@@ -95,6 +99,9 @@ export function MeasureScreen() {
     };
     model.edit((d) => ({ ...d, measurements: [...(d.measurements ?? []), m] }));
     setSaved(true);
+    setKeepMessage(null);
+    // The record itself stays on this device, in its own store; the case keeps the frequency read from it.
+    if (peak && record) void keepRecord(m.id, record).then((r) => setKeepMessage(r.ok ? null : r.message));
   };
   const figures = answer && answer.ok ? answerFigures(answer) : null;
 
@@ -140,7 +147,8 @@ export function MeasureScreen() {
             .
           </p>
           <button type="button" class="btn" onClick={save} disabled={saved} data-testid="measurement-save">{saved ? 'Kept with the case' : 'Keep this measurement with the case'}</button>
-          <p class="field-help">A shared link and the case file carry the measured frequency and the notes, not the motion record.</p>
+          <p class="field-help">A shared link and the case file carry the measured frequency and the notes, not the motion record: the record is kept on this device only.</p>
+          {keepMessage && <p class="field-error" role="alert">{keepMessage}</p>}
         </div>
       )}
       {usable && member && (
