@@ -22,7 +22,8 @@ function sameRanges(a: EnteredRanges | undefined, b: EnteredRanges | undefined):
 export function sameCaseContent(a: Case, b: Case): boolean {
   return (
     a.name === b.name && a.tag === b.tag && a.note === b.note && a.kind === b.kind && a.unitSystem === b.unitSystem &&
-    sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation) && sameRanges(a.ranges, b.ranges)
+    sameValues(a.inputs, b.inputs) && sameValues(a.excitation, b.excitation) && sameRanges(a.ranges, b.ranges) &&
+    JSON.stringify(a.measurements ?? []) === JSON.stringify(b.measurements ?? [])
   );
 }
 

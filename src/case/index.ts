@@ -11,6 +11,7 @@ export * from './types';
 export { CASE_LIMITS, cutText } from './limits';
 export { isPlainObject } from './fields';
 export { parseCase } from './parse';
-export { CASE_STEPS, caseV0toV1, caseV1toV2, type CaseStep } from './migrations';
+export { CASE_STEPS, caseV0toV1, caseV1toV2, caseV2toV3, type CaseStep } from './migrations';
 export { isRenamedCopy, sameCaseContent } from './compare';
 export { createCase, type CaseInit } from './create';
+export { caseMeasurements, MEASUREMENT_LIMITS, MEASUREMENT_SOURCES, MEASUREMENT_STATES } from './measurements';

@@ -24,6 +24,9 @@
  * Version 1 — as version 2 without `ranges` (ranges on uncertain inputs). Version 2 is version 1 plus an
  * optional `ranges` field, so a version-1 case opens unchanged; the version moved so that an older app, which
  * would silently drop the ranges, refuses a version-2 case instead ("made with a newer Wetmode").
+ *
+ * Version 2 — as version 3 without `measurements` (measured frequencies). Version 3 adds the optional
+ * `measurements`; a version-2 case opens unchanged, and the version moved for the same reason as before.
  */
 import { fail, oneOf, own } from './fields';
 import { CASE_FORMAT, type MemberKind, type UnitSystem } from './types';
@@ -63,5 +66,10 @@ export function caseV1toV2(raw: Record<string, unknown>): Record<string, unknown
   return { ...raw, schemaVersion: 2 };
 }
 
+/** Version 2 -> 3: nothing moves; version 3 only adds the optional `measurements` (none in an older case). */
+export function caseV2toV3(raw: Record<string, unknown>): Record<string, unknown> {
+  return { ...raw, schemaVersion: 3, measurements: [] };
+}
+
 /** The ladder: index n takes version n to n + 1. Its length is the current schema version. */
-export const CASE_STEPS: readonly CaseStep[] = [caseV0toV1, caseV1toV2];
+export const CASE_STEPS: readonly CaseStep[] = [caseV0toV1, caseV1toV2, caseV2toV3];

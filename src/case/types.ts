@@ -1,17 +1,20 @@
 /**
- * The Wetmode case, schema version 2 (version 2 added `ranges`): one shape for the app, the device store, links, files and the command line.
+ * The Wetmode case, schema version 3 (version 2 added `ranges`, version 3 `measurements`): one shape for the app, the device store, links, files and the command line.
  * Everything from outside (a record read back, a link, a file) reaches the app only through `parseCase`.
  * The schema is ours; its field list and limits are documented here and in `limits.ts`.
  */
 import type { UnitSystem } from '../units/systems';
 import type { Verdict } from '../physics/excitation/verdict';
 import type { KindId as MemberKind } from '../kinds/registry-pure';
+import type { CaseMeasurement } from './measurements';
+
+export type { CaseMeasurement } from './measurements';
 
 /** Value of `format` in every case; tells a Wetmode case from any other JSON. */
 export const CASE_FORMAT = 'wetmode-case';
 
 /** The schema version this build writes. Older versions are migrated step by step (`migrations.ts`). */
-export const CASE_SCHEMA_VERSION = 2;
+export const CASE_SCHEMA_VERSION = 3;
 
 /** The member kinds a case may hold: the registry's ids (src/kinds/registry-pure.ts). */
 export { KIND_IDS as MEMBER_KINDS, type KindId as MemberKind } from '../kinds/registry-pure';
@@ -48,7 +51,7 @@ export interface EnteredRange {
 
 export type EnteredRanges = Record<string, EnteredRange>;
 
-/** A saved, shared or exported case (schema version 2). */
+/** A saved, shared or exported case (schema version 3). */
 export interface Case {
   format: typeof CASE_FORMAT;
   schemaVersion: typeof CASE_SCHEMA_VERSION;
@@ -68,6 +71,8 @@ export interface Case {
   excitation: EnteredValues;
   /** Ranges on uncertain member inputs as entered (absent: none). */
   ranges?: EnteredRanges;
+  /** Measured frequencies of the member, oldest first as entered (absent: none). Schema version 3. */
+  measurements?: CaseMeasurement[];
   /** ISO 8601 date and time, e.g. "2026-03-14T09:21:05.123Z". */
   createdAt: string;
   /** ISO 8601 date and time of the last change. */

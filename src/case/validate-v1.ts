@@ -1,9 +1,10 @@
 /**
- * Checks a case object of the current schema (version 2: version 1 plus `ranges`) field by field and builds a fresh case from the checked values only:
+ * Checks a case object of the current schema (version 3: version 1 plus `ranges` and `measurements`) field by field and builds a fresh case from the checked values only:
  * unknown fields are dropped, nothing is shared with the input, keys come out in schema order.
  */
 import { CASE_LIMITS } from './limits';
 import { enteredRanges } from './ranges';
+import { caseMeasurements } from './measurements';
 import { CaseFieldError, enteredValues, fail, isPlainObject, isoDateTime, oneOf, own, text, uuid } from './fields';
 import { CASE_FORMAT, CASE_SCHEMA_VERSION, MEMBER_KINDS, UNIT_SYSTEMS, VERDICTS, type Case, type KeyResult } from './types';
 
@@ -53,6 +54,8 @@ export function validateV1(raw: Record<string, unknown>): Case {
   };
   const ranges = enteredRanges('ranges', own(raw, 'ranges'), ENTERED);
   if (ranges) c.ranges = ranges;
+  const measurements = caseMeasurements('measurements', own(raw, 'measurements'));
+  if (measurements) c.measurements = measurements;
   const kr = keyResult(own(raw, 'keyResult'));
   if (kr) c.keyResult = kr;
   return c;

@@ -57,6 +57,8 @@ export function runCaseCommand(inputText: string): string {
       : null,
     resonanceNotRunBecause: answer.screening ? null : (answer.screeningError ?? (fieldMessages(reading.excitationErrors) || 'no resonance inputs')),
     band: caseBandJson(c),
+    // Measured frequencies and their notes as kept with the case (a motion record stays on the device that made it).
+    measurements: c.measurements ?? [],
     model: reading.build.model,
     modelNotes: reading.build.notes,
     warnings: m.warnings,

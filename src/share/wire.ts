@@ -7,6 +7,10 @@
  * Case schema 2 adds the ranges as a 13th element (an empty object when there are none); links written in the
  * schema-1 layout (12 elements) still open.
  *
+ * Case schema 3 adds the measured frequencies as a 14th element: per measurement
+ *   [id, takenAt, by, elevation, waterLevel, frequencyHz, uncertaintyHz, mode, state, source, note]
+ * The motion record a frequency was read from never travels: it stays on the device that recorded it.
+ *
  * Left out: `format` (implied by the link) and `keyResult` (the receiving app works the results out again, from
  * its own physics). The id travels so a received case can be recognised as one already saved.
  * A future case schema gets its own layout, told apart by the first element.
@@ -15,9 +19,23 @@ import { CASE_FORMAT, CASE_SCHEMA_VERSION, NEWER_VERSION_MESSAGE, parseCase, typ
 
 export const WIRE_LENGTH_V1 = 12;
 export const WIRE_LENGTH_V2 = 13;
+export const WIRE_LENGTH_V3 = 14;
+
+function measurementsToWire(c: Case): unknown[] {
+  return (c.measurements ?? []).map((m) => [m.id, m.takenAt, m.by, m.elevation, m.waterLevel, m.frequencyHz, m.uncertaintyHz, m.mode, m.state, m.source, m.note]);
+}
+
+function measurementsFromWire(w: unknown): unknown {
+  if (!Array.isArray(w)) return w;
+  return w.map((m) => {
+    if (!Array.isArray(m) || m.length !== 11) return m;
+    const [id, takenAt, by, elevation, waterLevel, frequencyHz, uncertaintyHz, mode, state, source, note] = m;
+    return { id, takenAt, by, elevation, waterLevel, frequencyHz, uncertaintyHz, mode, state, source, note };
+  });
+}
 
 export function caseToWire(c: Case): unknown[] {
-  return [c.schemaVersion, c.id, c.name, c.tag, c.note, c.kind, c.unitSystem, c.inputs, c.excitation, c.createdAt, c.updatedAt, c.appVersion, c.ranges ?? {}];
+  return [c.schemaVersion, c.id, c.name, c.tag, c.note, c.kind, c.unitSystem, c.inputs, c.excitation, c.createdAt, c.updatedAt, c.appVersion, c.ranges ?? {}, measurementsToWire(c)];
 }
 
 /** What a case looks like after a trip through a link: the same, less `keyResult`. */
@@ -33,9 +51,9 @@ export function wireToCase(wire: unknown): ParseCaseResult {
   }
   const version = wire[0];
   if (typeof version === 'number' && Number.isInteger(version) && version > CASE_SCHEMA_VERSION) return { ok: false, message: NEWER_VERSION_MESSAGE };
-  if (!((version === 1 && wire.length === WIRE_LENGTH_V1) || (version === 2 && wire.length === WIRE_LENGTH_V2))) {
+  if (!((version === 1 && wire.length === WIRE_LENGTH_V1) || (version === 2 && wire.length === WIRE_LENGTH_V2) || (version === 3 && wire.length === WIRE_LENGTH_V3))) {
     return { ok: false, message: 'it does not hold a case in the form Wetmode writes' };
   }
-  const [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges] = wire;
-  return parseCase({ format: CASE_FORMAT, schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges });
+  const [schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges, measurements] = wire;
+  return parseCase({ format: CASE_FORMAT, schemaVersion, id, name, tag, note, kind, unitSystem, inputs, excitation, createdAt, updatedAt, appVersion, ranges, measurements: measurementsFromWire(measurements) });
 }

@@ -6,7 +6,7 @@ import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
 import { MemberScreen } from './member/MemberScreen';
-import { CasesScreen, OpenLinkScreen, ReportScreen, ResultsWithActions, SectionScreen } from './screens/lazy-screens';
+import { CasesScreen, MeasureScreen, OpenLinkScreen, ReportScreen, ResultsWithActions, SectionScreen } from './screens/lazy-screens';
 import { AppServicesProvider } from './state/context';
 import { ConflictPrompt } from './cases/ConflictPrompt';
 import { useBoot } from './state/use-boot';
@@ -26,6 +26,8 @@ function Screen({ route }: { route: Route }) {
       return <SectionScreen />;
     case 'cautions':
       return <CautionsScreen />;
+    case 'measure':
+      return <MeasureScreen />;
     case 'open':
       return <OpenLinkScreen payload={route.payload} />;
   }

@@ -3,12 +3,12 @@
  * `demoCase()` is the "typical case" the link length is measured on: a pile with 12 inputs, 3 screening inputs,
  * a name, a tag and a short note.
  */
-import type { Case } from '../../src/case';
+import type { Case, CaseMeasurement } from '../../src/case';
 
 export function demoCase(): Case {
   return {
     format: 'wetmode-case',
-    schemaVersion: 2,
+    schemaVersion: 3,
     id: '3f6c2a9e-8b41-4d7a-9c15-2e0b7d4f6a81',
     name: 'Pile B7 — east berth',
     tag: 'FH-JTY-B7',
@@ -41,7 +41,7 @@ export function demoCase(): Case {
 export function baffleCase(): Case {
   return {
     format: 'wetmode-case',
-    schemaVersion: 2,
+    schemaVersion: 3,
     id: '9b2d4e61-0c7f-4a38-b5e2-61d0f3a9c7b4',
     name: 'Baffle 2, day tank',
     tag: 'GRV-TK-02',
@@ -77,4 +77,22 @@ export function v0Case(): Record<string, unknown> {
 /** A plain deep copy, so a test can change a case freely. */
 export function copy<T>(v: T): T {
   return JSON.parse(JSON.stringify(v)) as T;
+}
+
+/** An invented measurement at the fictional Fernhaven jetty. */
+export function measured(over: Partial<CaseMeasurement> = {}): CaseMeasurement {
+  return {
+    id: '0b9e4c7a-1f2d-4e3b-8a6c-5d7e9f1a2b3c',
+    takenAt: '2026-05-02T07:40:00.000Z',
+    by: 'Surveyor, tablet on the pile head',
+    elevation: '+2.0 m',
+    waterLevel: '+0.8 m',
+    frequencyHz: 1.84,
+    uncertaintyHz: 0.02,
+    mode: 1,
+    state: 'wet',
+    source: 'record',
+    note: 'Calm, low tide.',
+    ...over,
+  };
 }

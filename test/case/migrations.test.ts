@@ -13,7 +13,7 @@ describe('case migration ladder', () => {
       migratedFrom: 0,
       value: {
         format: 'wetmode-case',
-        schemaVersion: 2,
+        schemaVersion: 3,
         id: '5a1e7c3b-2d94-4f60-8e1a-7b3c9d2e4f50',
         name: 'Level probe, settling tank',
         tag: 'GRV-LT-11',
@@ -48,7 +48,7 @@ describe('case migration ladder', () => {
   it('says a failure came from a migrated case, after the check of the current version', () => {
     expect(parseCase({ ...v0Case(), title: 12 })).toEqual({
       ok: false,
-      message: 'name must be a string of at most 200 characters, got 12 (in a version 0 case, after updating it to version 2)',
+      message: 'name must be a string of at most 200 characters, got 12 (in a version 0 case, after updating it to version 3)',
     });
   });
 

@@ -32,6 +32,15 @@ describe('wetmode case', () => {
     expect(out.cautions.join(' ')).toContain('qualified engineer');
   });
 
+  it('prints the measured frequencies and their notes kept with the case', () => {
+    const c = JSON.parse(readFileSync(EXAMPLE, 'utf8'));
+    // An invented measurement; the case file carries its frequency and notes, never a motion record.
+    const m = { id: '0b9e4c7a-1f2d-4e3b-8a6c-5d7e9f1a2b3c', takenAt: '2026-05-02T07:40:00.000Z', by: 'tablet on the pile head', elevation: '', waterLevel: '+0.8 m', frequencyHz: 0.59, uncertaintyHz: 0.02, mode: 1, state: 'wet', source: 'record', note: 'calm' };
+    const out = JSON.parse(runCaseCommand(JSON.stringify({ ...c, schemaVersion: 3, measurements: [m] })));
+    expect(out.measurements).toEqual([m]);
+    expect(JSON.parse(runCaseCommand(JSON.stringify(c))).measurements).toEqual([]);
+  });
+
   it('bad files say what was expected and what was got, and exit non-zero', async () => {
     expect(() => runCaseCommand('{ not json')).toThrow(/not valid JSON/);
     expect(() => runCaseCommand(JSON.stringify({ format: 'something-else' }))).toThrow(/not a usable Wetmode case/);

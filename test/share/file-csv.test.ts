@@ -10,7 +10,7 @@ describe('case files', () => {
 
   it('are indented JSON in our own schema, ending with a line break', () => {
     const text = caseToFileText(demoCase());
-    expect(text.startsWith('{\n  "format": "wetmode-case",\n  "schemaVersion": 2,')).toBe(true);
+    expect(text.startsWith('{\n  "format": "wetmode-case",\n  "schemaVersion": 3,')).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
   });
 
@@ -32,7 +32,7 @@ describe('case files', () => {
       ok: false,
       message: 'this file is not a usable Wetmode case: format must be "wetmode-case" (this is not a Wetmode case), got "spreadsheet"',
     });
-    expect(caseFromFileText(JSON.stringify({ ...demoCase(), schemaVersion: 3 }))).toEqual({ ok: false, message: NEWER_VERSION_MESSAGE });
+    expect(caseFromFileText(JSON.stringify({ ...demoCase(), schemaVersion: 4 }))).toEqual({ ok: false, message: NEWER_VERSION_MESSAGE });
     expect(caseFromFileText(undefined)).toEqual({ ok: false, message: 'this file could not be read as text' });
   });
 

@@ -172,7 +172,7 @@ describe('broken links get a clear message and no case', () => {
 
   it('a link from a newer case schema asks for an update', async () => {
     const wire = caseToWire(demoCase());
-    wire[0] = 3;
+    wire[0] = 4;
     expect(await decodeCasePayload(jsonPayload(wire))).toEqual({ ok: false, message: NEWER_VERSION_MESSAGE });
   });
 

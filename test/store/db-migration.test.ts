@@ -35,7 +35,7 @@ const v1: PastLayout = {
     const migratedId = (v0Case().id as string).toLowerCase();
     expect(list.cases.map((c) => c.id).sort()).toEqual([demoCase().id, migratedId].sort());
     expect(list.cases.find((c) => c.id === demoCase().id)).toEqual(demoCase());
-    expect(list.cases.find((c) => c.id === migratedId)).toMatchObject({ schemaVersion: 2, name: 'Level probe, settling tank', kind: 'stem', unitSystem: 'us' });
+    expect(list.cases.find((c) => c.id === migratedId)).toMatchObject({ schemaVersion: 3, name: 'Level probe, settling tank', kind: 'stem', unitSystem: 'us' });
     expect(list.unreadable.map((u) => u.key)).toEqual(['junk-7']);
     // The one draft of old versions is kept for the tab "earlier" (offered in the Cases screen, not this tab's own).
     expect(unwrap(await store.loadDraft())).toBeNull();
@@ -50,7 +50,7 @@ const v1: PastLayout = {
     const raw = await rawRecords(h.factory, 'cases');
     expect(raw.keys).not.toContain(v0Case().id);
     expect(raw.values).toContainEqual(junk);
-    expect(raw.values.find((v) => (v as { id: string }).id === migratedId)).toMatchObject({ schemaVersion: 2 });
+    expect(raw.values.find((v) => (v as { id: string }).id === migratedId)).toMatchObject({ schemaVersion: 3 });
   },
 };
 

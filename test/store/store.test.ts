@@ -195,7 +195,7 @@ describe('records that cannot be read are reported, never dropped', () => {
     const db = await openRaw(h.factory, 'wetmode', undefined as unknown as number);
     const tx = db.transaction(['cases', 'drafts'], 'readwrite');
     await req(tx.objectStore('cases').put({ id: 'junk-1', name: 42 }));
-    await req(tx.objectStore('drafts').put({ key: 'tab\njunk', tab: 'tab', caseId: 'junk', savedAt: NOW, baseRevision: null, case: { format: 'wetmode-case', schemaVersion: 2 } }));
+    await req(tx.objectStore('drafts').put({ key: 'tab\njunk', tab: 'tab', caseId: 'junk', savedAt: NOW, baseRevision: null, case: { format: 'wetmode-case', schemaVersion: 3 } }));
     db.close();
     return { h, store: await h.open() };
   }

@@ -45,6 +45,7 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
       <QuickBand />
       <div class="quick-links">
         <a class="btn" href={hashFor('results')}>All results</a>
+        {build?.engine !== 'plate' && <a class="btn" href={hashFor('measure')}>Field check</a>}
         {build?.engine !== 'plate' && <MemberSectionLink model={build?.model ?? null} label="Section and flow" />}
       </div>
     </section>

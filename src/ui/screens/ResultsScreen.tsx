@@ -21,6 +21,9 @@ export function ResultsScreen({ banner, actions }: { banner?: ComponentChildren;
       ) : (
         <>
           {actions}
+          <p class="quick-links">
+            <a href={hashFor('measure')} data-testid="to-field-check">Field check: compare with a measured frequency</a>
+          </p>
           {state.solverMessage && <p class="field-error" role="alert">{state.solverMessage}</p>}
           <ResultsView
             doc={doc}

@@ -32,3 +32,5 @@ export function SectionScreen() {
   return <LazySection model={useServices().section} />;
 }
 export const OpenLinkScreen = lazyScreen<{ payload: string }>('shared case', () => withUnits(import('./OpenLinkScreen')).then((m) => m.OpenLinkScreen));
+/** The Field check: a measured frequency against the predictions, and back-calculation of one unknown. */
+export const MeasureScreen = lazyScreen('Field check', () => withUnits(import('../measure/MeasureScreen')).then((m) => m.MeasureScreen));

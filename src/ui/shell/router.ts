@@ -3,7 +3,7 @@
  * offline included. Shared case links use the fragment too (`#/open/<payload>`), so nothing is sent to a server.
  */
 
-export type ScreenId = 'cases' | 'member' | 'results' | 'report' | 'section' | 'cautions';
+export type ScreenId = 'cases' | 'member' | 'results' | 'report' | 'section' | 'cautions' | 'measure';
 
 export type Route = { screen: ScreenId } | { screen: 'open'; payload: string };
 
@@ -15,7 +15,7 @@ export const MAIN_SCREENS: readonly { id: ScreenId; label: string }[] = [
   { id: 'report', label: 'Report' },
 ];
 
-const SCREENS: readonly ScreenId[] = ['cases', 'member', 'results', 'report', 'section', 'cautions'];
+const SCREENS: readonly ScreenId[] = ['cases', 'member', 'results', 'report', 'section', 'cautions', 'measure'];
 
 /** Reads a location hash ("#/results", "", "#/open/abc") into a route; anything unknown goes to Cases. */
 export function parseHash(hash: string): Route {
