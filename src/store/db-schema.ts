@@ -71,13 +71,7 @@ export function draftKey(tab: string, caseId: string): string {
 }
 
 /** A case record as stored from version 3: the case fields plus its revision (parseCase drops the extra field). */
-export const REVISION_FIELD = 'revision';
-
-/** The revision of a stored record: a whole number ≥ 0; a record without one (older versions) counts as 0. */
-export function storedRevision(raw: unknown): number {
-  const r = typeof raw === 'object' && raw !== null ? (raw as Record<string, unknown>)[REVISION_FIELD] : undefined;
-  return typeof r === 'number' && Number.isSafeInteger(r) && r >= 0 ? r : 0;
-}
+export { REVISION_FIELD, storedRevision } from './stored-revision';
 
 /** A deleted case kept for undo. */
 export interface TrashRecord {

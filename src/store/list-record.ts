@@ -6,7 +6,7 @@
  */
 import { parseCase, type Case, type KeyResult, type MemberKind } from '../case';
 import { kindOf } from '../kinds/registry';
-import { storedRevision } from './db-schema';
+import { storedRevision } from './stored-revision';
 
 export type CaseSort = 'updated' | 'name' | 'tag' | 'kind';
 
