@@ -15,8 +15,10 @@ import {
   POSITIVE,
   SEAWATER_HELP,
   sizeField,
+  TUBE_DIAMETER_MAX,
   yesNoField,
 } from '../../forms/presets';
+import { checkStubby, warnSlenderTheory, warnThinWall } from '../../forms/plausible';
 import type { Choice, FieldDef } from '../../forms/types';
 
 const END_CHOICES: readonly Choice[] = [
@@ -27,7 +29,7 @@ const END_CHOICES: readonly Choice[] = [
 ];
 
 const FIELDS: readonly FieldDef[] = [
-  sizeField('outerDiameter', 'Outer diameter', '273'),
+  sizeField('outerDiameter', 'Outer diameter', '273', { max: TUBE_DIAMETER_MAX }),
   sizeField('wallThickness', 'Wall thickness', '12.7'),
   heightField('length', 'Length, bottom to top', '40', { min: POSITIVE, help: 'All heights on this form are measured up from the bottom end.' }),
   {
@@ -108,8 +110,9 @@ export const RISER_FORM = defineForm({
     const dc = r.opt('caissonDiameter');
     const offset = r.num('caissonOffset');
     if (dc !== undefined && !(dc > tube.outerDiameterM + 2 * coating + 2 * offset)) {
-      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (${r.fmt('caissonDiameter', tube.outerDiameterM + 2 * coating + 2 * offset)})`);
+      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (${r.fmt('caissonDiameter', tube.outerDiameterM + 2 * coating + 2 * offset)}). A member touching the wall is outside the section model (for a circle touching a plane wall, 2D potential flow gives the finite limit Ca = π²/3 − 1 = 2.29, docs/sources.md §S3.3).`);
     }
+    checkStubby('length', 'length', length, tube.outerDiameterM, 'outer diameter', err);
     const bottom = r.choice('bottomEnd') as EndCondition;
     const top = r.choice('topEnd') as EndCondition;
     const tension = r.num('topTension');
@@ -136,6 +139,10 @@ export const RISER_FORM = defineForm({
     // The angle field reads in radians (SI); the input takes degrees.
     if (dc !== undefined) input.caisson = { innerDiameterM: dc, offsetM: offset, offsetAngleDeg: (r.num('caissonOffsetAngle') * 180) / Math.PI };
     return input;
+  },
+  plausible(r, input, warn) {
+    warnThinWall('wallThickness', input.wallThicknessM, input.outerDiameterM, (v) => r.fmt('wallThickness', v), warn);
+    warnSlenderTheory('length', input.lengthM, input.outerDiameterM, 'outer diameter', r.choice('beamTheory'), warn);
   },
   validate: validateRiserInput,
   coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS },
