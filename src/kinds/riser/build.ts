@@ -14,7 +14,7 @@ import { tubeSection } from '../../physics/shapes/tube';
 import { bool, fail, failText, finite, material, nonNegative, num, oneOf, optional, positive, record, tubeWall } from '../common/check';
 import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { band, sortLandmarks } from '../common/layout';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, stubbinessLengthM, theoryParts } from '../common/theory';
 import type { Landmark, MemberBuild } from '../common/types';
 
 export interface RiserCaisson {
@@ -136,8 +136,10 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
   if (r.contentsDensityKgPerM3 > 0) segment.contentsDensityKgPerM3 = r.contentsDensityKgPerM3;
   if (coat) segment.coating = { ...coat };
 
-  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, L, r.outerDiameterM));
-  const model: MemberModel = { lengthM: L, segments: [segment], supports: riserSupports(r), ...theory.model };
+  const supports = riserSupports(r);
+  // Guides split the riser into spans: a short span between guides is stubby even when the riser is not.
+  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, stubbinessLengthM(L, supports.filter((s) => s.kind === 'clamped' || s.kind === 'pinned').map((s) => s.atM)), r.outerDiameterM));
+  const model: MemberModel = { lengthM: L, segments: [segment], supports, ...theory.model };
   if (r.topTensionN! > 0 || r.tensionVariesWithWeight) model.tensionN = r.topTensionN;
   if (r.tensionVariesWithWeight) model.tensionVariesWithWeight = true;
 

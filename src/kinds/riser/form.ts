@@ -1,5 +1,6 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
 import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
+import { stubbinessLengthM } from '../common/theory';
 import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
@@ -142,7 +143,9 @@ export const RISER_FORM = defineForm({
   },
   plausible(r, input, warn) {
     warnThinWall('wallThickness', input.wallThicknessM, input.outerDiameterM, (v) => r.fmt('wallThickness', v), warn);
-    warnSlenderTheory('length', input.lengthM, input.outerDiameterM, 'outer diameter', r.choice('beamTheory'), warn);
+    const held = [...endSupports(input.bottom, 0), ...input.guideElevationsM.map((atM) => ({ atM, kind: 'pinned' })), ...endSupports(input.top, input.lengthM)];
+    const span = stubbinessLengthM(input.lengthM, held.filter((s) => s.kind === 'clamped' || s.kind === 'pinned').map((s) => s.atM));
+    warnSlenderTheory(span < input.lengthM ? 'guides' : 'length', span, input.outerDiameterM, 'outer diameter', r.choice('beamTheory'), warn);
   },
   validate: validateRiserInput,
   coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS },
