@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { FieldValues, MemberForm, UnitSystem } from '../../src/forms';
-import { FORMS } from '../../src/kinds/registry';
+import { DEMO_CASES, FORMS } from '../../src/kinds/registry';
 import type { KindBuild } from '../../src/kinds/common/types';
 import { KINDS } from '../../src/kinds/registry';
 import { readExcitation } from '../../src/forms/excitation';
@@ -173,5 +173,15 @@ describe('the beam-theory switch judges the span, not the whole member', () => {
     const guides = Array.from({ length: 19 }, (_, i) => `${2 * (i + 1)}`).join(', ');
     const w = accepted(form('riser'), { guides, beamTheory: 'euler-bernoulli' });
     expect(w.guides).toContain('length / outer diameter is 7.3, under 10');
+  });
+});
+
+describe('the worked examples', () => {
+  it('every demo case reads without a plausibility warning (they are meant as ordinary members)', () => {
+    for (const demo of DEMO_CASES) {
+      const r = (FORMS[demo.kind] as AnyForm).toInput(demo.values, demo.system);
+      if (!r.ok) throw new Error(`${demo.kind}: ${JSON.stringify(r.errors)}`);
+      expect(r.warnings, demo.kind).toEqual({});
+    }
   });
 });
