@@ -8,13 +8,17 @@ import type { MemberBuild, PlateBuild } from '../kinds/common/types';
 import { kindOf } from '../kinds/registry';
 import { type PlateExcitation, readPlateExcitation } from '../kinds/plate-panel/excitation';
 import { readExcitation } from '../forms/excitation';
-import { FORM_ERROR_KEY, type FieldErrors } from '../forms/types';
+import { FORM_ERROR_KEY, type FieldErrors, type FieldWarnings } from '../forms/types';
 import { isUnitReaderPending } from '../units/reader-pending';
 import type { CaseRequest } from './solve-case';
 
+/**
+ * `warnings`: accepted values outside their soft range, by field key (member and resonance fields together;
+ * their keys differ), to show beside the fields, with the results and in the report.
+ */
 export type CaseReading =
-  | { ok: true; engine: 'beam'; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors }
-  | { ok: true; engine: 'plate'; build: PlateBuild; excitation: PlateExcitation | null; excitationErrors: FieldErrors }
+  | { ok: true; engine: 'beam'; build: MemberBuild; excitation: CaseExcitation | null; excitationErrors: FieldErrors; warnings: FieldWarnings }
+  | { ok: true; engine: 'plate'; build: PlateBuild; excitation: PlateExcitation | null; excitationErrors: FieldErrors; warnings: FieldWarnings }
   | { ok: false; errors: FieldErrors; excitationErrors: FieldErrors };
 
 /**
@@ -42,13 +46,18 @@ function readCaseUnsafe(c: Pick<Case, 'kind' | 'inputs' | 'excitation' | 'unitSy
   if (build.engine === 'plate') {
     const e = readPlateExcitation(c.excitation, c.unitSystem);
     return e.ok
-      ? { ok: true, engine: 'plate', build, excitation: e.excitation, excitationErrors: {} }
-      : { ok: true, engine: 'plate', build, excitation: null, excitationErrors: e.errors };
+      ? { ok: true, engine: 'plate', build, excitation: e.excitation, excitationErrors: {}, warnings: r.warnings }
+      : { ok: true, engine: 'plate', build, excitation: null, excitationErrors: e.errors, warnings: r.warnings };
   }
   const e = readExcitation(kind.resonance, c.excitation, c.unitSystem, build);
   return e.ok
-    ? { ok: true, engine: 'beam', build, excitation: e.excitation, excitationErrors: {} }
-    : { ok: true, engine: 'beam', build, excitation: null, excitationErrors: e.errors };
+    ? { ok: true, engine: 'beam', build, excitation: e.excitation, excitationErrors: {}, warnings: { ...r.warnings, ...e.warnings } }
+    : { ok: true, engine: 'beam', build, excitation: null, excitationErrors: e.errors, warnings: r.warnings };
+}
+
+/** Input warnings as sentences for the results, the report and the command line: "Liquid density: …". */
+export function warningLines(warnings: FieldWarnings): string[] {
+  return Object.values(warnings).map((m) => `Input check: ${m.charAt(0).toUpperCase()}${m.slice(1)}.`);
 }
 
 /** The solver request for a case that reads, by the engine its kind names. */

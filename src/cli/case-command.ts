@@ -5,7 +5,7 @@
  * entered in the app (null when none is on) and the cautions.
  */
 import { caseFromFileText } from '../share';
-import { readCase, requestOf } from '../app/read-case';
+import { readCase, requestOf, warningLines } from '../app/read-case';
 import { solveCase } from '../app/solve-case';
 import { cautionLines } from '../text/cautions';
 import { toJson } from './json-out';
@@ -62,6 +62,7 @@ export function runCaseCommand(inputText: string): string {
     model: reading.build.model,
     modelNotes: reading.build.notes,
     warnings: m.warnings,
+    inputWarnings: warningLines(reading.warnings),
     mesh: m.mesh,
     cautions,
   });

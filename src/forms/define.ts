@@ -7,7 +7,7 @@ import { checkedField } from '../physics/check/kit';
 import { formatForEntry, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
 import { fieldUnit, makeReader, type Reader, readFields } from './read';
 import { guardedBuild } from './total-build';
-import { type FieldDef, type FieldErrors, type FieldValues, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
+import { type FieldDef, type FieldErrors, type FieldValues, type FieldWarnings, FORM_ERROR_KEY, type MemberForm, type MemberKind } from './types';
 
 /** The parts of a kind's form; `I` is the kind's SI input. */
 export interface FormSpec<I, B extends KindBuild = MemberBuild> {
@@ -20,6 +20,11 @@ export interface FormSpec<I, B extends KindBuild = MemberBuild> {
    * `r.fmt`) and assembles the SI input. Return null when something was reported.
    */
   toInput(r: Reader, err: (key: string, message: string) => void): I | null;
+  /**
+   * Soft checks of fields against each other (wall / diameter, length / diameter), run on an input that reads:
+   * report with `warn(fieldKey, message)`; the value is accepted and the message shown beside the field.
+   */
+  plausible?(r: Reader, input: I, warn: (key: string, message: string) => void): void;
   /** The physics-side validator, run last as a safety net (its messages use SI field names). */
   validate(input: I): unknown;
   /**
@@ -72,7 +77,7 @@ export function defineForm<I, B extends KindBuild = MemberBuild>(spec: FormSpec<
       return convertFieldValues(fields, si, 'si', system);
     },
     toInput(values, system) {
-      const { read, errors } = readFields(fields, values, system);
+      const { read, errors, warnings } = readFields(fields, values, system);
       if (Object.keys(errors).length > 0) return { ok: false, errors };
       const cross: FieldErrors = {};
       const input = spec.toInput(makeReader(fields, read, system), (key, message) => {
@@ -86,7 +91,11 @@ export function defineForm<I, B extends KindBuild = MemberBuild>(spec: FormSpec<
         const key = core !== undefined && spec.coreFields && Object.prototype.hasOwnProperty.call(spec.coreFields, core) ? spec.coreFields[core] : FORM_ERROR_KEY;
         return { ok: false, errors: { [key]: e instanceof Error ? e.message : String(e) } };
       }
-      return { ok: true, input };
+      const all: FieldWarnings = { ...warnings };
+      spec.plausible?.(makeReader(fields, read, system), input, (key, message) => {
+        all[key] = all[key] ? `${all[key]}; ${message}` : message;
+      });
+      return { ok: true, input, warnings: all };
     },
     buildModel: spec.buildModel,
     build(values, system) {
@@ -95,7 +104,7 @@ export function defineForm<I, B extends KindBuild = MemberBuild>(spec: FormSpec<
       const input = r.input;
       // Never throws, and never passes on a non-finite number: see total-build.ts.
       const b = guardedBuild(fields, () => readFields(fields, values, system).read, () => spec.buildModel(input));
-      return b.ok ? { ok: true, input, build: b.build } : b;
+      return b.ok ? { ok: true, input, build: b.build, warnings: r.warnings } : b;
     },
     convertValues(values, from, to) {
       return convertFieldValues(fields, values, from, to);

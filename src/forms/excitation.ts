@@ -121,12 +121,13 @@ function flowSpeedOrRate(spec: ResonanceSpec, r: ReturnType<typeof makeReader>, 
   return q / ((Math.PI / 4) * bore * bore);
 }
 
-export type ExcitationReadResult = { ok: true; excitation: CaseExcitation } | { ok: false; errors: FieldErrors };
+/** `warnings`: accepted values outside their soft range (a 3 m/s current), by field key. */
+export type ExcitationReadResult = { ok: true; excitation: CaseExcitation; warnings?: FieldErrors } | { ok: false; errors: FieldErrors };
 
 /** Reads the resonance inputs for a built member; messages by field key, in the user's units. */
 export function readExcitation(spec: ResonanceSpec, values: FieldValues, system: UnitSystem, build: MemberBuild): ExcitationReadResult {
   const fields = spec.fields;
-  const { read, errors } = readFields(fields, values, system);
+  const { read, errors, warnings } = readFields(fields, values, system);
   if (Object.keys(errors).length > 0) return { ok: false, errors };
   const r = makeReader(fields, read, system);
   const errs: FieldErrors = {};
@@ -158,6 +159,7 @@ export function readExcitation(spec: ResonanceSpec, values: FieldValues, system:
   const margin = r.num('separationMargin');
   return {
     ok: true,
+    warnings,
     excitation: {
       flowSpeedMPerS,
       liquid: { densityKgPerM3: rho, kinematicViscosityM2PerS: base.kinematicViscosityM2PerS, source: `density as entered; viscosity of ${base === SEAWATER ? 'seawater' : 'fresh water'} (${base.source})` },

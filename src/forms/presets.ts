@@ -2,7 +2,8 @@
  * Presets and field builders shared by the forms: materials, contents, liquid density and the common
  * length fields. Sources of default values are stated in the help text the surveyor sees.
  */
-import type { Bound, Choice, ChoiceField, FieldDef, QuantityField } from './types';
+import { formatQuantity, type UnitSystem } from '../units';
+import type { Bound, Choice, ChoiceField, FieldDef, Plausible, QuantityField } from './types';
 
 export const POSITIVE: Bound = { valueSI: 0, inclusive: false };
 export const NON_NEGATIVE: Bound = { valueSI: 0, inclusive: true };
@@ -83,10 +84,55 @@ export const CONTENTS_CHOICES: readonly Choice[] = [
   { value: 'other', label: 'Other', help: 'Enter the contents density.' },
 ];
 
-/** Density of the liquid around the member. */
-export function liquidDensityField(defaultKgPerM3: number, help: string): QuantityField {
-  return densityField('liquidDensity', 'Liquid density', String(defaultKgPerM3), { min: POSITIVE, help });
+/**
+ * Hard range of a liquid density, kg/m³: from light hydrocarbon liquids (about 600) to heavy muds and brines
+ * (about 2000), docs/sources.md §S7; 500 leaves room below. A value under it is most often a density typed in
+ * t/m³ or a specific gravity.
+ */
+export const LIQUID_DENSITY_MIN_KG_PER_M3 = 500;
+export const LIQUID_DENSITY_MAX_KG_PER_M3 = 2000;
+
+/** Soft range for water: fresh water about 1000, seawater about 1025 kg/m³ (docs/sources.md §S7), with room for temperature and brines. */
+export const WATER_DENSITY_PLAUSIBLE: Plausible = { min: 950, max: 1100, basis: 'fresh water about 1000, seawater about 1025 kg/m³, docs/sources.md §S7' };
+
+/** Soft range for process liquids: light oils and fuels about 800 to water and brines up to 1100 kg/m³ (docs/sources.md §S7). */
+export const PROCESS_LIQUID_PLAUSIBLE: Plausible = { min: 700, max: 1100, basis: 'fuels and light oils about 800 to 850, water about 1000 kg/m³, docs/sources.md §S7' };
+
+const KG_PER_M3_PER_LB_PER_FT3 = 16.018463;
+
+/** "did you mean 1025 kg/m³ or 1.025 t/m³?" for a number that looks like t/m³ or a specific gravity. */
+export function densityDidYouMean(valueSI: number, system: UnitSystem): string | undefined {
+  if (system === 'si') {
+    const k = valueSI * 1000;
+    if (k >= LIQUID_DENSITY_MIN_KG_PER_M3 && k <= LIQUID_DENSITY_MAX_KG_PER_M3) return `did you mean ${formatQuantity(k, 'kg/m^3')} or ${formatQuantity(k, 't/m^3')}?`;
+    return undefined;
+  }
+  const typed = valueSI / KG_PER_M3_PER_LB_PER_FT3;
+  const asSg = typed * 1000;
+  if (asSg >= LIQUID_DENSITY_MIN_KG_PER_M3 && asSg <= LIQUID_DENSITY_MAX_KG_PER_M3) return `did you mean a specific gravity of ${typed}, that is ${formatQuantity(asSg, 'lb/ft^3')}?`;
+  return undefined;
 }
+
+/** Density of the liquid around the member: hard 500 to 2000 kg/m³, and a soft range (water by default). */
+export function liquidDensityField(defaultKgPerM3: number, help: string, plausible: Plausible = WATER_DENSITY_PLAUSIBLE): QuantityField {
+  return densityField('liquidDensity', 'Liquid density', String(defaultKgPerM3), {
+    min: { valueSI: LIQUID_DENSITY_MIN_KG_PER_M3, inclusive: true },
+    max: { valueSI: LIQUID_DENSITY_MAX_KG_PER_M3, inclusive: true },
+    plausible,
+    didYouMean: densityDidYouMean,
+    help,
+  });
+}
+
+/**
+ * Marine growth thickness: NORSOK N-003 (Actions and action effects) gives up to 0.1 m in the North Sea
+ * (docs/sources.md §S8); above 0.3 m is warned, above 1 m refused (no growth zone of that size is tabulated).
+ */
+export const GROWTH_THICKNESS_RANGE: Partial<QuantityField> = {
+  min: { valueSI: 0, inclusive: true },
+  max: { valueSI: 1, inclusive: true },
+  plausible: { max: 0.3, basis: 'NORSOK N-003, Actions and action effects, gives up to 0.1 m, docs/sources.md §S8' },
+};
 
 export const SEAWATER_HELP = 'Seawater 1025 kg/m³, fresh water 1000 kg/m³ (common inputs).';
 
@@ -94,6 +140,12 @@ export const SEAWATER_HELP = 'Seawater 1025 kg/m³, fresh water 1000 kg/m³ (com
 export function sizeField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
   return { key, label, type: 'quantity', dimension: 'length', units: { si: 'mm', us: 'in' }, default: def, min: POSITIVE, ...extra };
 }
+
+/**
+ * Outer diameter of a pile or riser: refused above 20 m (the largest driven piles are about 10 m across, common
+ * practice), so a stray exponent (1e308 m) is refused beside the field instead of wedging the solver.
+ */
+export const TUBE_DIAMETER_MAX: Bound = { valueSI: 20, inclusive: true };
 
 /** A length or height along the member: m in SI, feet in US units. */
 export function heightField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {

@@ -3,7 +3,7 @@
  * The per-kind forms then check fields against each other through a `Reader`.
  */
 import { formatQuantity, parseQuantity, parseQuantityList, type UnitSystem } from '../units';
-import type { Bound, ChoiceField, FieldDef, FieldErrors, FieldValues, QuantityField, QuantityListField } from './types';
+import type { Bound, ChoiceField, FieldDef, FieldErrors, FieldValues, FieldWarnings, QuantityField, QuantityListField } from './types';
 
 export type ReadValue = number | number[] | string | undefined;
 
@@ -48,12 +48,38 @@ function rangeMessage(field: QuantityField | QuantityListField, v: number, syste
     return above ? (b.inclusive ? `at least ${q}` : `more than ${q}`) : b.inclusive ? `at most ${q}` : `less than ${q}`;
   };
   const { min, max } = field;
-  if (min && !(min.inclusive ? v >= min.valueSI : v > min.valueSI)) return `${lower(field.label)} must be ${say(min, true)}`;
-  if (max && !(max.inclusive ? v <= max.valueSI : v < max.valueSI)) return `${lower(field.label)} must be ${say(max, false)}`;
+  const hint = field.type === 'quantity' && field.didYouMean ? field.didYouMean(v, system) : undefined;
+  const tail = hint ? `: ${hint}` : '';
+  if (min && !(min.inclusive ? v >= min.valueSI : v > min.valueSI)) return `${lower(field.label)} must be ${say(min, true)}${rangeTail(field, system)}${tail}`;
+  if (max && !(max.inclusive ? v <= max.valueSI : v < max.valueSI)) return `${lower(field.label)} must be ${say(max, false)}${rangeTail(field, system)}${tail}`;
   return null;
 }
 
-type One = { ok: true; value: ReadValue } | { ok: false; message: string };
+/** " (allowed: 500 to 2000 kg/m³)" when the field has both hard limits, so a refusal states the whole range. */
+function rangeTail(field: QuantityField | QuantityListField, system: UnitSystem): string {
+  const { min, max } = field;
+  if (!min || !max) return '';
+  const unit = fieldUnit(field, system);
+  return ` (allowed: ${formatQuantity(min.valueSI, unit)} to ${formatQuantity(max.valueSI, unit)})`;
+}
+
+/**
+ * The warning for a value accepted but outside the field's soft range, in the user's units, with the range's
+ * basis: "liquid density 1200 kg/m³ is outside the usual 950 to 1100 kg/m³ (…): check it". Null inside.
+ */
+export function plausibleMessage(field: QuantityField | QuantityListField, v: number, system: UnitSystem): string | null {
+  const p = field.plausible;
+  if (!p) return null;
+  const low = p.min !== undefined && v < p.min;
+  const high = p.max !== undefined && v > p.max;
+  if (!low && !high) return null;
+  const unit = fieldUnit(field, system);
+  const f = (x: number): string => formatQuantity(x, unit);
+  const range = p.min !== undefined && p.max !== undefined ? `the usual ${f(p.min)} to ${f(p.max)}` : p.max !== undefined ? `the usual at most ${f(p.max)}` : `the usual at least ${f(p.min as number)}`;
+  return `${lower(field.label)} ${f(v)} is outside ${range} (${p.basis}): check it`;
+}
+
+type One = { ok: true; value: ReadValue; warning?: string } | { ok: false; message: string };
 
 function readChoice(field: ChoiceField, text: string): One {
   if (field.choices.some((c) => c.value === text)) return { ok: true, value: text };
@@ -75,7 +101,8 @@ function readQuantity(fields: readonly FieldDef[], field: QuantityField, values:
   const r = parseQuantity(text, { dimension: field.dimension, unit: fieldUnit(field, sys) });
   if (!r.ok) return r;
   const bad = rangeMessage(field, r.valueSI, system);
-  return bad ? { ok: false, message: bad } : { ok: true, value: r.valueSI };
+  if (bad) return { ok: false, message: bad };
+  return { ok: true, value: r.valueSI, warning: plausibleMessage(field, r.valueSI, system) ?? undefined };
 }
 
 function readList(field: QuantityListField, values: FieldValues, system: UnitSystem): One {
@@ -86,13 +113,18 @@ function readList(field: QuantityListField, values: FieldValues, system: UnitSys
     const bad = rangeMessage(field, r.valuesSI[i], system);
     if (bad) return { ok: false, message: r.valuesSI.length > 1 ? `item ${i + 1}: ${bad}` : bad };
   }
+  for (let i = 0; i < r.valuesSI.length; i++) {
+    const w = plausibleMessage(field, r.valuesSI[i], system);
+    if (w) return { ok: true, value: r.valuesSI, warning: r.valuesSI.length > 1 ? `item ${i + 1}: ${w}` : w };
+  }
   return { ok: true, value: r.valuesSI };
 }
 
 /** Reads every shown field; hidden fields are left out. */
-export function readFields(fields: readonly FieldDef[], values: FieldValues, system: UnitSystem): { read: Map<string, ReadValue>; errors: FieldErrors } {
+export function readFields(fields: readonly FieldDef[], values: FieldValues, system: UnitSystem): { read: Map<string, ReadValue>; errors: FieldErrors; warnings: FieldWarnings } {
   const read = new Map<string, ReadValue>();
   const errors: FieldErrors = {};
+  const warnings: FieldWarnings = {};
   for (const field of fields) {
     if (!isShown(fields, field, values)) continue;
     const r =
@@ -101,10 +133,12 @@ export function readFields(fields: readonly FieldDef[], values: FieldValues, sys
         : field.type === 'quantity'
           ? readQuantity(fields, field, values, system)
           : readList(field, values, system);
-    if (r.ok) read.set(field.key, r.value);
-    else errors[field.key] = r.message;
+    if (r.ok) {
+      read.set(field.key, r.value);
+      if (r.warning) warnings[field.key] = r.warning;
+    } else errors[field.key] = r.message;
   }
-  return { read, errors };
+  return { read, errors, warnings };
 }
 
 /** Typed access to the values read, and formatting in the user's units for cross-field messages. */

@@ -11,10 +11,19 @@ export function speed(key: string, label: string, def: string, extra: Partial<Qu
   return { key, label, type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'ft/s' }, default: def, min: NON_NEGATIVE, ...extra };
 }
 
+/**
+ * A sea or river current: warned above 2.5 m/s (about 5 knots, beyond all but the strongest tidal races,
+ * common practice, no single source) and refused above 10 m/s (about 19 knots, no natural current).
+ */
+export const CURRENT_RANGE: Partial<QuantityField> = {
+  max: { valueSI: 10, inclusive: true },
+  plausible: { max: 2.5, basis: 'about 5 knots; stronger currents are rare outside tidal races, common practice' },
+};
+
 export const CURRENT: readonly FieldDef[] = [
-  speed('currentSurface', 'Current at the surface', '0.5', { help: 'Largest expected current at the water surface (for a tidal stream, the peak of spring tides).' }),
-  speed('currentMid', 'Current at mid-depth', '', { optional: true, emptyMeans: 'same as at the surface' }),
-  speed('currentBed', 'Current near the bed', '', { optional: true, emptyMeans: 'same as at the surface' }),
+  speed('currentSurface', 'Current at the surface', '0.5', { ...CURRENT_RANGE, help: 'Largest expected current at the water surface (for a tidal stream, the peak of spring tides).' }),
+  speed('currentMid', 'Current at mid-depth', '', { ...CURRENT_RANGE, optional: true, emptyMeans: 'same as at the surface' }),
+  speed('currentBed', 'Current near the bed', '', { ...CURRENT_RANGE, optional: true, emptyMeans: 'same as at the surface' }),
 ];
 
 export const WAVES: readonly FieldDef[] = [

@@ -35,6 +35,19 @@ interface FieldBase {
   showWhen?: { key: string; values: readonly string[] };
 }
 
+/**
+ * A soft range on a quantity, SI: a value outside it is accepted, with a warning beside the field, in the
+ * results and in the report. `basis` says where the range comes from (a source, or "common practice").
+ */
+export interface Plausible {
+  min?: number;
+  max?: number;
+  basis: string;
+}
+
+/** Warnings by field key (same keys as FieldErrors): accepted values that look implausible. */
+export type FieldWarnings = Record<string, string>;
+
 /** Limits on a quantity, SI. */
 export interface Bound {
   valueSI: number;
@@ -50,6 +63,10 @@ export interface QuantityField extends FieldBase {
   default: string;
   min?: Bound;
   max?: Bound;
+  /** Soft range (a warning, not a refusal). */
+  plausible?: Plausible;
+  /** Hint added to a refusal by the hard range, e.g. "did you mean 1025 kg/m³ or 1.025 t/m³?" for a typed 1.025. */
+  didYouMean?: (valueSI: number, system: UnitSystem) => string | undefined;
   /** When left empty, the value comes from the chosen option of this choice field (its `presets`). */
   presetFrom?: string;
 }
@@ -62,6 +79,7 @@ export interface QuantityListField extends FieldBase {
   default: string;
   min?: Bound;
   max?: Bound;
+  plausible?: Plausible;
 }
 
 export interface Choice {
@@ -80,8 +98,9 @@ export interface ChoiceField extends FieldBase {
 
 export type FieldDef = QuantityField | QuantityListField | ChoiceField;
 
-export type ToInputResult<I> = { ok: true; input: I } | { ok: false; errors: FieldErrors };
-export type BuildResult<I, B extends KindBuild = MemberBuild> = { ok: true; input: I; build: B } | { ok: false; errors: FieldErrors };
+/** `warnings` (possibly empty): accepted values outside their soft range, by field key. */
+export type ToInputResult<I> = { ok: true; input: I; warnings: FieldWarnings } | { ok: false; errors: FieldErrors };
+export type BuildResult<I, B extends KindBuild = MemberBuild> = { ok: true; input: I; build: B; warnings: FieldWarnings } | { ok: false; errors: FieldErrors };
 
 /** The form of one member kind; `I` is the kind's SI input (src/kinds/<kind>/build.ts), `B` what it builds. */
 export interface MemberForm<I = unknown, B extends KindBuild = MemberBuild> {

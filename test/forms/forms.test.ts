@@ -116,7 +116,7 @@ describe.each(MEMBER_KINDS)('the %s form', (kind: MemberKind) => {
     expect(errorsOf(form, { liquidDensity: '5 m' }, 'si')).toEqual({
       liquidDensity: 'expected a density such as 1025 kg/m^3 or 64 lb/ft^3, got a length (5 m)',
     });
-    expect(errorsOf(form, { liquidDensity: '-3' }, 'si')).toEqual({ liquidDensity: 'liquid density must be more than zero' });
+    expect(errorsOf(form, { liquidDensity: '-3' }, 'si')).toEqual({ liquidDensity: 'liquid density must be at least 500 kg/m³ (allowed: 500 kg/m³ to 2000 kg/m³)' });
     expect(errorsOf(form, { material: 'bronze' }, 'si').material).toMatch(/^choose one of: /);
   });
 });
@@ -198,7 +198,7 @@ describe('cross-field messages are given in the user’s units', () => {
     expect(errorsOf(FORMS.riser, { guides: '10; 20; 20' }, 'si').guides).toBe('guide heights must differ: 20 m appears twice');
     expect(errorsOf(FORMS.riser, { waterBottom: '5', waterSurface: '5' }, 'si').waterSurface).toBe('the water surface must be above where the water starts (5 m)');
     expect(errorsOf(FORMS.riser, { outerDiameter: '12.75', caissonDiameter: '14', caissonOffset: '1' }, 'us').caissonDiameter).toBe(
-      "caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (14.75 in)",
+      "caisson inner diameter must be more than the riser's outer diameter with coating plus twice the offset (14.75 in). A member touching the wall is outside the section model (for a circle touching a plane wall, 2D potential flow gives the finite limit Ca = π²/3 − 1 = 2.29, docs/sources.md §S3.3).",
     );
     expect(errorsOf(FORMS.riser, { bottomEnd: 'free', guides: '10' }, 'si').bottomEnd).toBe(
       'these ends and guides leave the riser free to move: add a guide, or make an end clamped or pinned',
@@ -211,13 +211,13 @@ describe('cross-field messages are given in the user’s units', () => {
     expect(errorsOf(FORMS.baffle, { lowerEnd: 'bolted', upperEnd: 'free' }, 'si').upperEnd).toBe(
       'with these ends the plate can swing or slide: make one end welded, or both bolted',
     );
-    expect(errorsOf(FORMS.baffle, { perforation: '60' }, 'si').perforation).toBe('perforation (open area) must be at most 50 %');
+    expect(errorsOf(FORMS.baffle, { perforation: '60' }, 'si').perforation).toBe('perforation (open area) must be at most 50 % (allowed: 0 % to 50 %)');
   });
 
   it('stem: a bore as wide as the tip and a sleeve no wider than the stem', () => {
     expect(errorsOf(FORMS.stem, { tipDiameter: '22', boreDiameter: '22' }, 'si').boreDiameter).toBe('bore must be less than the tip diameter (22 mm)');
     expect(errorsOf(FORMS.stem, { rootDiameter: '1.1', tipDiameter: '0.9', boreDiameter: '0.25', surroundingDiameter: '1' }, 'us').surroundingDiameter).toBe(
-      "surrounding tube inner diameter must be more than the stem's largest diameter (1.1 in)",
+      "surrounding tube inner diameter must be more than the stem's largest diameter (1.1 in). A stem touching the wall is outside the section model (for a circle touching a plane wall, 2D potential flow gives the finite limit Ca = π²/3 − 1 = 2.29, docs/sources.md §S3.3).",
     );
   });
 });

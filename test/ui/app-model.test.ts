@@ -31,4 +31,15 @@ describe('the open-case model', () => {
     expect(model.get().computing).toBe(false);
     expect(model.get().doc!.inputs).toEqual(doc.inputs);
   });
+
+  it('a liquid density of 1200 kg/m³ around the pile is accepted with a warning by the field and in the results warnings', async () => {
+    const model = new AppModel(inlineSolver);
+    model.open(caseFromDemo(DEMO_CASES.find((d) => d.kind === 'pile')!), 'editing', false);
+    model.setField('liquidDensity', '1200');
+    await new Promise((r) => setTimeout(r, 50));
+    for (let i = 0; i < 100 && model.get().computing; i++) await new Promise((r) => setTimeout(r, 20));
+    expect(model.get().errors).toEqual({});
+    expect(model.get().warnings.liquidDensity).toMatch(/^liquid density 1200 kg\/m³ is outside the usual 950 kg\/m³ to 1100 kg\/m³/);
+    expect(model.get().results?.inputWarnings?.[0]).toMatch(/^Input check: Liquid density 1200 kg\/m³ is outside/);
+  });
 });

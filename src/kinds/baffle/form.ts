@@ -2,7 +2,8 @@
 import { type BaffleInput, buildBaffleModel, MAX_PERFORATION_RATIO, type PlateEnd, validateBaffleInput } from './build';
 import { COMMON_CORE_FIELDS, commonInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
-import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, heightField, liquidDensityField, PROCESS_LIQUID_PLAUSIBLE, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import { checkStubby, warnSlenderTheory } from '../../forms/plausible';
 import type { Choice, FieldDef } from '../../forms/types';
 
 /** Welded = clamped, bolted = pinned (common practice, no source). */
@@ -24,7 +25,7 @@ const FIELDS: readonly FieldDef[] = [
     min: NON_NEGATIVE,
     help: 'The span runs upward from its lower end. A horizontal baffle is either wholly in the liquid or wholly above it.',
   }),
-  liquidDensityField(1000, 'Water 1000 kg/m³, fuels about 800 to 850 kg/m³ (common inputs).'),
+  liquidDensityField(1000, 'Water 1000 kg/m³, fuels about 800 to 850 kg/m³ (common inputs).', PROCESS_LIQUID_PLAUSIBLE),
   sizeField('wallGap', 'Gap to nearest parallel wall', '', {
     optional: true,
     emptyMeans: 'no wall nearby',
@@ -74,7 +75,11 @@ export const BAFFLE_FORM = defineForm({
     };
     const gap = r.opt('wallGap');
     if (gap !== undefined) input.wallGapM = gap;
+    checkStubby('span', 'span', input.spanM, thickness, 'plate thickness', err);
     return input;
+  },
+  plausible(r, input, warn) {
+    warnSlenderTheory('span', input.spanM, input.thicknessM, 'plate thickness', r.choice('beamTheory'), warn);
   },
   validate: validateBaffleInput,
   coreFields: { ...COMMON_CORE_FIELDS, spanM: 'span', widthM: 'width', thicknessM: 'thickness' },

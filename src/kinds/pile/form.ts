@@ -3,14 +3,15 @@ import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type Pil
 import { SOIL_PRESETS, type SoilPresetId } from '../../physics/practice/soil-presets';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
-import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, heightField, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
+import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, GROWTH_THICKNESS_RANGE, heightField, TUBE_DIAMETER_MAX, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
+import { checkStubby, warnSlenderTheory, warnThinWall } from '../../forms/plausible';
 import type { Reader } from '../../forms/read';
 import type { FieldDef } from '../../forms/types';
 
 const SPRINGS = ['soil-springs', 'soil-springs-linear'] as const;
 
 const FIELDS: readonly FieldDef[] = [
-  sizeField('outerDiameter', 'Outer diameter', '610'),
+  sizeField('outerDiameter', 'Outer diameter', '610', { max: TUBE_DIAMETER_MAX }),
   sizeField('wallThickness', 'Wall thickness', '12'),
   ...materialFields('carbon-steel'),
   heightField('waterDepth', 'Water depth', '8', { min: NON_NEGATIVE, help: 'From the mudline to the still water level (e.g. mean sea level) at the pile.' }),
@@ -121,7 +122,7 @@ const FIELDS: readonly FieldDef[] = [
     default: 'flooded',
   },
   sizeField('growthThickness', 'Marine growth thickness', '50', {
-    min: NON_NEGATIVE,
+    ...GROWTH_THICKNESS_RANGE,
     help: 'Typically 50 to 100 mm in the upper 40 m of North Sea waters (NORSOK N-003, Actions and action effects); 0 for none.',
   }),
   liquidDensityField(1025, SEAWATER_HELP),
@@ -175,6 +176,15 @@ function headOf(r: Reader): PileHead {
   return { kind: 'free' };
 }
 
+/** Pile length from the fixity point or toe to the top (the default fixity depth is 6 diameters, docs/sources.md §S9). */
+function pileLengthM(input: PileInput): number {
+  const f = input.foundation ?? { kind: 'fixity' };
+  // For fixity from a soil type the depth needs EI; the default 6 D stands in here (a plausibility check only).
+  const sixD = DEFAULT_FIXITY_DIAMETERS * input.outerDiameterM;
+  const below = f.kind === 'fixity' ? (f.depthBelowMudlineM ?? sixD) : f.kind === 'fixity-soil' ? sixD : f.embeddedLengthM;
+  return input.waterDepthM + input.topAboveStillWaterM + below;
+}
+
 export const PILE_FORM = defineForm({
   kind: 'pile',
   title: 'Pile',
@@ -217,7 +227,12 @@ export const PILE_FORM = defineForm({
     if (growth > 0) {
       input.marineGrowth = { thicknessM: growth, densityKgPerM3: r.num('growthDensity'), topAboveStillWaterM: gTop, bottomBelowStillWaterM: gBottom };
     }
+    checkStubby('outerDiameter', 'the pile length from its fixity or toe to its top', pileLengthM(input), tube.outerDiameterM, 'outer diameter', err);
     return input;
+  },
+  plausible(r, input, warn) {
+    warnThinWall('wallThickness', input.wallThicknessM, input.outerDiameterM, (v) => r.fmt('wallThickness', v), warn);
+    warnSlenderTheory('outerDiameter', pileLengthM(input), input.outerDiameterM, 'outer diameter', r.choice('beamTheory'), warn);
   },
   validate: validatePileInput,
   coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS, waterDepthM: 'waterDepth', topAboveStillWaterM: 'topAboveWater', waterLevelOffsetM: 'waterLevelOffset', topMassKg: 'topMass', topRotaryInertiaKgM2: 'topRotaryInertia' },

@@ -1,6 +1,6 @@
 /** The plate-panel form: fields, cross-field checks and the mapping to the plate engine's SI input. */
 import { defineForm } from '../../forms/define';
-import { heightField, liquidDensityField, materialFields, POSITIVE, sizeField } from '../../forms/presets';
+import { heightField, liquidDensityField, PROCESS_LIQUID_PLAUSIBLE, materialFields, POSITIVE, sizeField } from '../../forms/presets';
 import type { Choice, ChoiceField, FieldDef } from '../../forms/types';
 import type { EdgeCondition, PlateLiquid } from '../../physics/plate';
 import { MAX_PLATE_MODES } from '../../physics/plate';
@@ -63,7 +63,7 @@ const FIELDS: readonly FieldDef[] = [
     showWhen: WALL,
     help: 'A rigid wall parallel to the panel on each wetted side (a double-skin bulkhead, a narrow tank).',
   }),
-  { ...liquidDensityField(1000, 'Water 1000 kg/m³, fuels about 800 to 850 kg/m³ (common inputs).'), showWhen: WET },
+  { ...liquidDensityField(1000, 'Water 1000 kg/m³, fuels about 800 to 850 kg/m³ (common inputs).', PROCESS_LIQUID_PLAUSIBLE), showWhen: WET },
   {
     key: 'modes',
     label: 'Modes to report',

@@ -15,7 +15,7 @@ import { bool, fail, failText, finite, material, nonNegative, num, oneOf, option
 import { END_CONDITIONS, type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
 import { band, cutSegments, sortLandmarks } from '../common/layout';
 import { riserTopTension, tensionNote } from './tension';
-import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, theoryParts } from '../common/theory';
+import { type BeamTheoryChoice, beamTheoryChoice, resolveBeamTheory, stubbinessLengthM, theoryParts } from '../common/theory';
 import type { Landmark, MemberBuild } from '../common/types';
 
 export interface RiserCaisson {
@@ -217,8 +217,10 @@ export function buildRiserModel(raw: RiserInput): MemberBuild {
     return segment;
   });
 
-  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, L, r.outerDiameterM));
-  const model: MemberModel = { lengthM: L, segments, supports: riserSupports(r), ...theory.model };
+  const supports = riserSupports(r);
+  // Guides split the riser into spans: a short span between guides is stubby even when the riser is not.
+  const theory = theoryParts(resolveBeamTheory(r.beamTheory!, stubbinessLengthM(L, supports.filter((s) => s.kind === 'clamped' || s.kind === 'pinned').map((s) => s.atM)), r.outerDiameterM));
+  const model: MemberModel = { lengthM: L, segments, supports, ...theory.model };
   const tension = riserTopTension(r);
   if (tension.effectiveN !== 0 || r.tensionVariesWithWeight) model.tensionN = tension.effectiveN;
   if (r.tensionVariesWithWeight) model.tensionVariesWithWeight = true;

@@ -1,5 +1,6 @@
 /** The riser / conductor form: fields, cross-field checks and the mapping to RiserInput. */
 import { type EndCondition, endSupports, leavesRigidBodyMotion } from '../common/ends';
+import { stubbinessLengthM } from '../common/theory';
 import { buildRiserModel, type RiserInput, validateRiserInput } from './build';
 import { riserTopTension } from './tension';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
@@ -16,8 +17,10 @@ import {
   POSITIVE,
   SEAWATER_HELP,
   sizeField,
+  TUBE_DIAMETER_MAX,
   yesNoField,
 } from '../../forms/presets';
+import { checkStubby, warnSlenderTheory, warnThinWall } from '../../forms/plausible';
 import type { Choice, FieldDef } from '../../forms/types';
 import { speed } from '../../forms/resonance-fields';
 
@@ -29,7 +32,7 @@ const END_CHOICES: readonly Choice[] = [
 ];
 
 const FIELDS: readonly FieldDef[] = [
-  sizeField('outerDiameter', 'Outer diameter', '273'),
+  sizeField('outerDiameter', 'Outer diameter', '273', { max: TUBE_DIAMETER_MAX }),
   sizeField('wallThickness', 'Wall thickness', '12.7'),
   heightField('length', 'Length, bottom to top', '40', { min: POSITIVE, help: 'All heights on this form are measured up from the bottom end.' }),
   {
@@ -164,8 +167,9 @@ export const RISER_FORM = defineForm({
     const outer = tube.outerDiameterM + 2 * coating + 2 * growth;
     if (dc !== undefined && !(dc > outer + 2 * offset)) {
       const what = growth > 0 ? 'with coating and marine growth' : 'with coating';
-      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter ${what} plus twice the offset (${r.fmt('caissonDiameter', outer + 2 * offset)})`);
+      err('caissonDiameter', `caisson inner diameter must be more than the riser's outer diameter ${what} plus twice the offset (${r.fmt('caissonDiameter', outer + 2 * offset)}). A member touching the wall is outside the section model (for a circle touching a plane wall, 2D potential flow gives the finite limit Ca = π²/3 − 1 = 2.29, docs/sources.md §S3.3).`);
     }
+    checkStubby('length', 'length', length, tube.outerDiameterM, 'outer diameter', err);
     const bottom = r.choice('bottomEnd') as EndCondition;
     const top = r.choice('topEnd') as EndCondition;
     const tension = r.num('topTension');
@@ -207,6 +211,12 @@ export const RISER_FORM = defineForm({
       }
     }
     return input;
+  },
+  plausible(r, input, warn) {
+    warnThinWall('wallThickness', input.wallThicknessM, input.outerDiameterM, (v) => r.fmt('wallThickness', v), warn);
+    const held = [...endSupports(input.bottom, 0), ...input.guideElevationsM.map((atM) => ({ atM, kind: 'pinned' })), ...endSupports(input.top, input.lengthM)];
+    const span = stubbinessLengthM(input.lengthM, held.filter((s) => s.kind === 'clamped' || s.kind === 'pinned').map((s) => s.atM));
+    warnSlenderTheory(span < input.lengthM ? 'guides' : 'length', span, input.outerDiameterM, 'outer diameter', r.choice('beamTheory'), warn);
   },
   validate: validateRiserInput,
   coreFields: { ...COMMON_CORE_FIELDS, ...TUBE_CORE_FIELDS },

@@ -2,14 +2,18 @@
 import { buildStemModel, type StemInput, validateStemInput } from './build';
 import { COMMON_CORE_FIELDS, commonInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
-import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import { BEAM_THEORY_FIELD, END_EFFECT_FIELD, liquidDensityField, PROCESS_LIQUID_PLAUSIBLE, materialFields, NON_NEGATIVE, POSITIVE, sizeField } from '../../forms/presets';
+import { checkStubby, warnSlenderTheory } from '../../forms/plausible';
 import type { FieldDef } from '../../forms/types';
 import { WATER_TEMPERATURE_RANGE_C } from '../../physics/practice/liquid-properties';
 
+/** Thermowells and probes: about 5 to 100 mm across (common practice); outside that, check the unit. */
+const STEM_DIAMETER_PLAUSIBLE = { min: 0.005, max: 0.1, basis: 'sensor stems are about 5 to 100 mm across, common practice' };
+
 const FIELDS: readonly FieldDef[] = [
   sizeField('insertionLength', 'Insertion length', '250', { help: 'From the support face (pipe or vessel wall, or nozzle weld) to the tip.' }),
-  sizeField('rootDiameter', 'Root diameter', '28'),
-  sizeField('tipDiameter', 'Tip diameter', '22', { help: 'Same as the root diameter for a straight stem.' }),
+  sizeField('rootDiameter', 'Root diameter', '28', { plausible: STEM_DIAMETER_PLAUSIBLE }),
+  sizeField('tipDiameter', 'Tip diameter', '22', { plausible: STEM_DIAMETER_PLAUSIBLE, help: 'Same as the root diameter for a straight stem.' }),
   sizeField('boreDiameter', 'Bore diameter', '7', { min: NON_NEGATIVE, help: '0 for a solid bar.' }),
   ...materialFields('stainless-316'),
   {
@@ -21,7 +25,7 @@ const FIELDS: readonly FieldDef[] = [
     default: '0',
     min: NON_NEGATIVE,
   },
-  liquidDensityField(1000, 'Process liquid: water 1000 kg/m³, light oils and fuels about 800 to 850 kg/m³ (common inputs). Not used when a water temperature is given.'),
+  liquidDensityField(1000, 'Process liquid: water 1000 kg/m³, light oils and fuels about 800 to 850 kg/m³ (common inputs). Not used when a water temperature is given.', PROCESS_LIQUID_PLAUSIBLE),
   {
     key: 'waterTemperature',
     label: 'Water temperature (°C)',
@@ -85,7 +89,7 @@ export const STEM_FORM = defineForm({
     }
     const around = r.opt('surroundingDiameter');
     if (around !== undefined && !(around > Math.max(root, tip))) {
-      err('surroundingDiameter', `surrounding tube inner diameter must be more than the stem's largest diameter (${r.fmt('surroundingDiameter', Math.max(root, tip))})`);
+      err('surroundingDiameter', `surrounding tube inner diameter must be more than the stem's largest diameter (${r.fmt('surroundingDiameter', Math.max(root, tip))}). A stem touching the wall is outside the section model (for a circle touching a plane wall, 2D potential flow gives the finite limit Ca = π²/3 − 1 = 2.29, docs/sources.md §S3.3).`);
     }
     const input: StemInput = {
       insertionLengthM: r.num('insertionLength'),
@@ -106,7 +110,11 @@ export const STEM_FORM = defineForm({
       if (!(shielded < input.insertionLengthM)) err('shieldedLength', `the length inside the nozzle must be less than the insertion length (${r.fmt('insertionLength', input.insertionLengthM)})`);
       input.shieldedLengthM = shielded;
     }
+    checkStubby('insertionLength', 'insertion length', input.insertionLengthM, Math.max(root, tip), 'root diameter', err);
     return input;
+  },
+  plausible(r, input, warn) {
+    warnSlenderTheory('insertionLength', input.insertionLengthM, Math.max(input.rootDiameterM, input.tipDiameterM), 'diameter', r.choice('beamTheory'), warn);
   },
   validate: validateStemInput,
   coreFields: { ...COMMON_CORE_FIELDS },

@@ -14,7 +14,7 @@ import { isMechanism, MECHANISM_MESSAGE } from './restraint';
 import type { MemberOutcome, MemberResult, ModeSetResult } from './result';
 import { defaultSectionSolver, SECTION_PANELS_MAX, type SectionSolver } from './section-bridge';
 import { parseMemberModel } from './validate';
-import { memberWarnings } from './warnings';
+import { highFrequencyWarning, memberWarnings } from './warnings';
 import { massZones } from './zones';
 
 export interface SolveMemberOptions {
@@ -204,6 +204,8 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
     },
     warnings: memberWarnings(model, plan, converged, history[history.length - 1], tol),
   };
+  const high = highFrequencyWarning(Math.min(dry.frequenciesHz[0] ?? 0, wet?.frequenciesHz[0] ?? Infinity));
+  if (high) result.warnings.push(high);
   if (precisionStop && !converged) {
     result.warnings.push(`Finer meshes than ${history[history.length - 1]} elements would lose more than ${100 * PRECISION_LIMIT} % of the frequencies to rounding in double precision, so refinement stopped there.`);
   }

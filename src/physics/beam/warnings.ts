@@ -11,6 +11,23 @@ export function maxDepthM(model: MemberModel): number {
   return d;
 }
 
+/**
+ * Frequency above which the answer is flagged, Hz. Structural screening deals with flow and machinery
+ * excitation well below this; at kilohertz frequencies a small member's bending wavelength nears its
+ * section size and local (shell, acoustic) behaviour, which a beam model leaves out, takes over
+ * (common practice, no single source). Also a sign of a unit slip (a 1 mm stem typed for 10 mm).
+ */
+export const HIGH_FREQUENCY_HZ = 5000;
+
+/** A warning when the lowest frequency is above HIGH_FREQUENCY_HZ, or null. */
+export function highFrequencyWarning(lowestHz: number): string | null {
+  if (!(lowestHz > HIGH_FREQUENCY_HZ)) return null;
+  return (
+    `The lowest frequency, ${lowestHz.toPrecision(3)} Hz, is above ${HIGH_FREQUENCY_HZ} Hz: outside what the beam model represents ` +
+    '(local shell and acoustic behaviour take over); check the sizes and their units.'
+  );
+}
+
 export function memberWarnings(model: MemberModel, plan: AddedMassPlan | null, converged: boolean, elements: number, tol: number): string[] {
   const out: string[] = [];
   const slender = model.lengthM / maxDepthM(model);

@@ -7,6 +7,8 @@ interface Props {
   values: FieldValues;
   system: UnitSystem;
   errors: FieldErrors;
+  /** Accepted values outside their soft range: a note under the field, not an error. */
+  warnings?: FieldErrors;
   placeholderOf: (key: string) => string;
   onInput: (key: string, text: string) => void;
   idPrefix: string;
@@ -16,11 +18,11 @@ interface Props {
 }
 
 /** Main fields, then the advanced ones under "More" (opened by itself when one of them has a message). */
-export function FieldList({ fields, values, system, errors, placeholderOf, onInput, idPrefix, moreLabel, after }: Props) {
+export function FieldList({ fields, values, system, errors, warnings = {}, placeholderOf, onInput, idPrefix, moreLabel, after }: Props) {
   const shown = fields.filter((f) => isShown(fields, f, values));
   const main = shown.filter((f) => !f.advanced);
   const more = shown.filter((f) => f.advanced);
-  const moreHasError = more.some((f) => errors[f.key]);
+  const moreHasError = more.some((f) => errors[f.key] || warnings[f.key]);
   const render = (f: FieldDef) => {
     const input = (
       <FieldInput
@@ -34,8 +36,20 @@ export function FieldList({ fields, values, system, errors, placeholderOf, onInp
         idPrefix={idPrefix}
       />
     );
-    const extra = after?.(f);
-    return extra ? (
+    const note = !errors[f.key] && warnings[f.key];
+    const extra = (
+      <>
+        {note && (
+          <p class="field-warning" data-testid={`warning-${f.key}`}>
+            <span aria-hidden="true">⚠ </span>
+            {note}
+          </p>
+        )}
+        {after?.(f)}
+      </>
+    );
+    const hasExtra = Boolean(note) || Boolean(after?.(f));
+    return hasExtra ? (
       <div class="field-stack" key={f.key}>
         {input}
         {extra}

@@ -48,6 +48,7 @@ export function MemberScreen() {
               values={doc.inputs}
               system={doc.unitSystem}
               errors={state.errors}
+              warnings={state.warnings}
               placeholderOf={(k) => placeholderOf(form, k, doc.inputs, doc.unitSystem)}
               onInput={(k, t) => model.setField(k, t)}
               idPrefix="m"
@@ -63,6 +64,7 @@ export function MemberScreen() {
               values={doc.excitation}
               system={doc.unitSystem}
               errors={state.excitationErrors}
+              warnings={state.warnings}
               placeholderOf={(k) => kindOf(doc.kind).resonance.fields.find((f) => f.key === k)?.emptyMeans ?? ''}
               onInput={(k, t) => model.setExcitation(k, t)}
               idPrefix="x"

@@ -23,6 +23,13 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
       )}
       {!a && !stale && <p>Fill in the member to see its frequencies.</p>}
       {state.solverMessage && <p class="field-error" role="alert">{state.solverMessage}</p>}
+      {Object.keys(state.warnings).length > 0 && (
+        <ul class="field-warning quick-warnings" data-testid="quick-warnings">
+          {Object.values(state.warnings).map((w) => (
+            <li key={w}>⚠ {w}</li>
+          ))}
+        </ul>
+      )}
       {a && !a.ok && <p class="field-error" data-testid="solve-failure">{a.message}</p>}
       {fig && (
         <dl class="quick-figures">

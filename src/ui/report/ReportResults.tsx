@@ -81,7 +81,7 @@ export function ReportDetails({ doc, results, children }: Props) {
       {screening && <ReportResonance screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
       <div class="report-section report-columns">
         <div>
-          <DiagnosticsPanel member={member} units={units} />
+          <DiagnosticsPanel member={member} units={units} inputWarnings={results.inputWarnings} />
           {children}
         </div>
         <AssumptionsPanel member={member} build={build} />

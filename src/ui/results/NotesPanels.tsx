@@ -5,11 +5,20 @@ import { assumptionLines, meshText, tensionText } from './assumptions';
 import type { DisplayUnits } from './display-units';
 
 /** Solver warnings first, then how the answer was reached: beam theory, mesh, axial load. */
-export function DiagnosticsPanel({ member, units }: { member: MemberResult; units: DisplayUnits }) {
+export function DiagnosticsPanel({ member, units, inputWarnings = [] }: { member: MemberResult; units: DisplayUnits; inputWarnings?: readonly string[] }) {
   const tension = tensionText(member, units);
   return (
     <section class="results-block" aria-labelledby="diagnostics-title">
       <h2 id="diagnostics-title">Warnings and solver report</h2>
+      {inputWarnings.length > 0 && (
+        <ul class="warning-list" data-testid="input-warnings">
+          {inputWarnings.map((w) => (
+            <li key={w}>
+              <strong>Warning:</strong> {w}
+            </li>
+          ))}
+        </ul>
+      )}
       {member.warnings.length > 0 ? (
         <ul class="warning-list">
           {member.warnings.map((w) => (

@@ -74,7 +74,7 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
         <MassTable member={member} units={units} />
         {member.wet && sectionPanel}
         {screening && <ResonancePanel screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
-        <DiagnosticsPanel member={member} units={units} />
+        <DiagnosticsPanel member={member} units={units} inputWarnings={results.inputWarnings} />
         <AssumptionsPanel member={member} build={build} />
       </div>
       <CautionsPanel />

@@ -13,7 +13,7 @@ import type { KindBuild } from '../../kinds/common/types';
 import type { FieldErrors } from '../../forms';
 import { readCaseOnDemand } from './read-on-demand';
 import { revisionOf } from '../../store';
-import { requestOf } from '../../app/read-case';
+import { requestOf, warningLines } from '../../app/read-case';
 import { answerFigures } from '../../app/answer-figures';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
@@ -26,6 +26,8 @@ export interface Results {
   build: KindBuild;
   /** Content key of the case these results were computed for. */
   forKey: string;
+  /** Accepted inputs outside their soft range, as sentences (warningLines), shown with the results and in the report. */
+  inputWarnings?: string[];
 }
 
 export interface ModelState {
@@ -35,6 +37,8 @@ export interface ModelState {
   saved: Case | null;
   errors: FieldErrors;
   excitationErrors: FieldErrors;
+  /** Accepted values outside their soft range, by field key (member and resonance fields). */
+  warnings: FieldErrors;
   results: Results | null;
   computing: boolean;
   /** A solver problem in words (timeout, crash), if any. */
@@ -84,6 +88,7 @@ export class AppModel {
     saved: null,
     errors: {},
     excitationErrors: {},
+    warnings: {},
     results: null,
     computing: false,
     solverMessage: null,
@@ -204,10 +209,11 @@ export class AppModel {
     if (!doc) return;
     const reading = readCaseOnDemand(doc, () => this.recompute(), (m) => this.set({ solverMessage: m }));
     if (!reading) return; // read again once the unit reader has loaded
-    this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors });
+    this.set({ errors: reading.ok ? {} : reading.errors, excitationErrors: reading.excitationErrors, warnings: reading.ok ? reading.warnings : {} });
     if (!reading.ok) return; // last good results stay, marked out of date
     const key = contentKey(doc);
     const build = reading.build;
+    const inputWarnings = warningLines(reading.warnings);
     this.set({ computing: true });
     void this.solver
       .request(requestOf(reading))
@@ -216,7 +222,7 @@ export class AppModel {
       if (ans.status === 'superseded') return;
       if (ans.status === 'done') {
         const current = this.state.doc && contentKey(this.state.doc) === key;
-        this.set({ results: { answer: ans.value, build, forKey: key }, computing: !current, solverMessage: null });
+        this.set({ results: { answer: ans.value, build, forKey: key, inputWarnings }, computing: !current, solverMessage: null });
       } else {
         this.set({ computing: false, solverMessage: caseSolverWords(ans, doc) });
       }
