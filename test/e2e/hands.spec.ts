@@ -1,5 +1,6 @@
 /**
- * In the surveyor's hands, at both tablet sizes with touch: a saved case reopens after a reload.
+ * In the surveyor's hands, at both tablet sizes with touch: a saved case reopens after a reload; a demo is marked
+ * as one and is not "unsaved changes" until edited; a new case's verdict says which defaults it rests on.
  */
 import { test, expect } from '@playwright/test';
 
@@ -24,6 +25,34 @@ for (const size of SIZES) {
       await expect(page.getByTestId('save-state')).toHaveText('Saved on this device');
       await expect(page.getByText('No case is open')).toHaveCount(0);
       await page.screenshot({ path: `test-results/hands-reopen-${size.viewport.width}.png` });
+    });
+
+    test('the first start shows the demo marked as a demo, unchanged until edited', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      await expect(page.getByTestId('demo-badge')).toHaveText('Demo case');
+      await expect(page.getByTestId('save-state')).toHaveText('Not changed');
+      await page.locator('[data-field="outerDiameter"] input').fill('813 mm');
+      await expect(page.getByTestId('save-state')).toHaveText('Unsaved changes (kept as a draft)');
+    });
+
+    test('a new pile says its verdict rests on default values, marks each default with its source, and Results lists entered or default', async ({ page }) => {
+      await page.goto('/#/cases');
+      await page.getByRole('button', { name: /^Pile/ }).first().click();
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      await expect(page.getByTestId('demo-badge')).toHaveCount(0);
+      await expect(page.getByTestId('save-state')).toHaveText('Nothing entered yet');
+      await expect(page.getByTestId('rests-on-defaults')).toContainText(/Rests on default values for: .*marine growth thickness/i);
+      await expect(page.getByTestId('default-growthThickness')).toContainText('NORSOK N-003');
+      await page.screenshot({ path: `test-results/hands-defaults-${size.viewport.width}.png`, fullPage: true });
+      await page.locator('[data-field="growthThickness"] input').fill('30 mm');
+      await expect(page.getByTestId('default-growthThickness')).toHaveCount(0);
+      await expect(page.getByTestId('rests-on-defaults')).not.toContainText(/marine growth thickness/i);
+      await page.goto('/#/results');
+      await expect(page.getByTestId('rests-on-defaults')).toBeVisible();
+      await page.getByTestId('results-inputs').locator('summary').click();
+      await expect(page.getByTestId('results-inputs').locator('tr', { hasText: 'Marine growth thickness' })).toContainText('entered');
+      await expect(page.getByTestId('results-inputs').locator('tr', { hasText: 'Fixity depth' })).toContainText('default');
     });
   });
 }

@@ -13,6 +13,7 @@ import { AnswerBar } from './AnswerBar';
 import { kindOf } from '../../kinds/registry';
 import { MemberRange } from './MemberRange';
 import { RangesBar } from './RangesBar';
+import { DefaultMark } from './RestsOnDefaults';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -52,7 +53,12 @@ export function MemberScreen() {
               onInput={(k, t) => model.setField(k, t)}
               idPrefix="m"
               moreLabel="More member details"
-              after={(f) => <MemberRange field={f} doc={doc} model={model} disabled={received} />}
+              after={(f) => (
+                <>
+                  <DefaultMark doc={doc} fieldKey={f.key} />
+                  <MemberRange field={f} doc={doc} model={model} disabled={received} />
+                </>
+              )}
             />
             <RangesBar doc={doc} model={model} disabled={received} />
           </fieldset>

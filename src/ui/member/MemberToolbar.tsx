@@ -6,6 +6,8 @@ import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
 import { saveOpenCase } from '../cases/open-case';
 import { kindOf } from '../../kinds/registry';
+import { isUntouchedStart } from '../cases/new-case';
+import { demoOf } from './defaults-in-use';
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
@@ -31,6 +33,10 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
     setMessage({ ok: r.ok, text: r.text });
   };
   const unsaved = model.unsaved();
+  const demo = state.mode === 'editing' ? demoOf(doc, state.saved !== null) : null;
+  // A demo or a new case as it was opened holds nothing to lose: not "unsaved changes" until it is edited.
+  const untouched = unsaved && state.mode === 'editing' && state.saved === null && isUntouchedStart(doc);
+  const words = !unsaved ? 'Saved on this device' : untouched ? (demo ? 'Not changed' : 'Nothing entered yet') : 'Unsaved changes (kept as a draft)';
   return (
     <div class="toolbar">
       <div class="segmented" role="group" aria-label="Units">
@@ -43,7 +49,8 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
       <button type="button" class="btn primary" onClick={save} disabled={state.mode !== 'editing'}>
         Save case
       </button>
-      <span class="save-state" data-testid="save-state">{unsaved ? 'Unsaved changes (kept as a draft)' : 'Saved on this device'}</span>
+      {demo && <span class="demo-badge" data-testid="demo-badge" title={`Worked example: ${demo}`}>Demo case</span>}
+      <span class="save-state" data-testid="save-state">{words}</span>
       <p class={message?.ok === false ? 'status error' : 'status'} role="status" aria-live="polite">{message?.text ?? ''}</p>
       {state.storageMessage && <p class="status error" role="alert">{state.storageMessage}</p>}
     </div>

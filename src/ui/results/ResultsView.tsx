@@ -11,6 +11,8 @@ import { StatusBanner } from './StatusBanner';
 import { PlateResultsBody } from '../plate/PlateResultsView';
 import { failureText } from './summary';
 import { FailurePanel, SummaryPanel } from './SummaryPanel';
+import { RestsOnDefaults } from '../member/RestsOnDefaults';
+import { ResultsInputs } from './ResultsInputs';
 import './results.css';
 
 export interface ResultsViewProps {
@@ -68,6 +70,8 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
       {banner}
       <div class="results-body">
         <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
+        <RestsOnDefaults doc={doc} />
+        <ResultsInputs doc={doc} />
         <ModesTable member={member} />
         {bandPanel}
         <ModeShapePanel build={build} member={member} units={units} />
