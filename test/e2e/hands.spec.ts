@@ -1,8 +1,13 @@
 /**
  * In the surveyor's hands, at both tablet sizes with touch: a saved case reopens after a reload; a demo is marked
- * as one and is not "unsaved changes" until edited; a new case's verdict says which defaults it rests on.
+ * as one and is not "unsaved changes" until edited; a new case's verdict says which defaults it rests on; units
+ * typed as a mariner or a drawing writes them are read and echoed; the unit chip enters values with digits only;
+ * the SI/US switch leaves typed text as typed.
  */
-import { test, expect } from '@playwright/test';
+import { test, expect, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
+
+const input = (page: Page, key: string) => page.locator(`[data-field="${key}"] input`);
 
 const SIZES = [
   { name: 'landscape 1024×768', viewport: { width: 1024, height: 768 } },
@@ -53,6 +58,70 @@ for (const size of SIZES) {
       await page.getByTestId('results-inputs').locator('summary').click();
       await expect(page.getByTestId('results-inputs').locator('tr', { hasText: 'Marine growth thickness' })).toContainText('entered');
       await expect(page.getByTestId('results-inputs').locator('tr', { hasText: 'Fixity depth' })).toContainText('default');
+    });
+
+    test('1.5 kt, 24" and 2\' 6" are read and the value understood is echoed beside the field', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      await input(page, 'currentSurface').fill('1.5 kt');
+      // 1.5 × 1852 m / 3600 s = 0.7717 m/s (international knot).
+      await expect(page.getByTestId('echo-currentSurface')).toHaveText('= 0.7717 m/s');
+      await expect(page.locator('[data-field="currentSurface"] select.unit-chip')).toHaveValue('kt');
+      await input(page, 'outerDiameter').fill('24"');
+      await expect(page.getByTestId('echo-outerDiameter')).toHaveText(/^= 609\.6 mm$/);
+      await input(page, 'outerDiameter').fill(`2' 6"`);
+      await expect(page.getByTestId('echo-outerDiameter')).toHaveText(/^= 762 mm$/);
+      await expect(page.locator('[data-field="outerDiameter"] .field-error')).toHaveCount(0);
+      await expect(page.getByTestId('stale-note')).toHaveCount(0);
+      await page.screenshot({ path: `test-results/hands-units-${size.viewport.width}.png` });
+    });
+
+    test('the unit chip enters a value with the numeric keypad only', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      const od = input(page, 'outerDiameter');
+      await expect(od).toHaveAttribute('inputmode', 'decimal');
+      await od.fill('');
+      await od.pressSequentially('30', { delay: 10 }); // digits only, as on the decimal keypad
+      await page.locator('[data-field="outerDiameter"] select.unit-chip').selectOption('in');
+      await expect(od).toHaveValue('30 in');
+      await expect(page.getByTestId('echo-outerDiameter')).toHaveText('= 762 mm');
+      // A unit chosen first, on an empty field, follows the digits when the field is left.
+      const cur = input(page, 'currentSurface');
+      await cur.fill('');
+      await page.locator('[data-field="currentSurface"] select.unit-chip').selectOption('kt');
+      await cur.pressSequentially('2', { delay: 10 });
+      await cur.blur();
+      await expect(cur).toHaveValue('2 kt');
+    });
+
+    test('switching to US units and back leaves every typed text as typed', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      const demoWet = (await page.getByTestId('quick-wet').textContent())!;
+      await input(page, 'outerDiameter').fill('29.5 in');
+      await input(page, 'currentSurface').fill('1.5 kt');
+      await input(page, 'waterDepth').fill('8');
+      await expect(page.getByTestId('stale-note')).toHaveCount(0);
+      // The answer to these inputs (the demo's gives way shortly after the last keystroke).
+      await expect(page.getByTestId('quick-wet')).not.toHaveText(demoWet);
+      const wet = await page.getByTestId('quick-wet').textContent();
+      await page.getByRole('button', { name: 'US units' }).click();
+      await expect(input(page, 'outerDiameter')).toHaveValue('29.5 in');
+      await expect(input(page, 'currentSurface')).toHaveValue('1.5 kt');
+      await expect(input(page, 'waterDepth')).toHaveValue('8 m');
+      await expect(page.getByTestId('quick-wet')).toHaveText(wet!);
+      await page.getByRole('button', { name: 'SI units' }).click();
+      await expect(input(page, 'outerDiameter')).toHaveValue('29.5 in');
+      await expect(input(page, 'waterDepth')).toHaveValue('8 m');
+    });
+
+    test('axe finds no serious or critical violation on the Member screen', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      const r = await new AxeBuilder({ page }).analyze();
+      const bad = r.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+      expect(bad.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
     });
   });
 }
