@@ -116,12 +116,36 @@ for (const size of SIZES) {
       await expect(input(page, 'waterDepth')).toHaveValue('8 m');
     });
 
-    test('axe finds no serious or critical violation on the Member screen', async ({ page }) => {
+    test('the unit choice radios, the range checkboxes and the cautions link are tap targets of at least 44 px', async ({ page }) => {
+      await page.goto('/#/cases');
+      await expect(page.locator('label.radio').first()).toBeVisible();
+      const targets = [
+        ...(await page.locator('label.radio').all()),
+        page.getByRole('link', { name: 'Read the cautions' }),
+      ];
+      expect(targets.length).toBeGreaterThanOrEqual(3);
+      for (const t of targets) {
+        const box = (await t.boundingBox())!;
+        expect(box.height, `height of "${await t.textContent()}"`).toBeGreaterThanOrEqual(44);
+        expect(box.width, `width of "${await t.textContent()}"`).toBeGreaterThanOrEqual(44);
+      }
+      await page.goto('/#/member');
+      const range = page.locator('[data-range] label.range-switch').first();
+      const box = (await range.boundingBox())!;
+      expect(box.height).toBeGreaterThanOrEqual(44);
+    });
+
+    test('axe finds no serious or critical violation on the Member, Results and Cases screens', async ({ page }) => {
       await page.goto('/');
       await expect(page.getByTestId('quick-wet')).toContainText('Hz');
-      const r = await new AxeBuilder({ page }).analyze();
-      const bad = r.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-      expect(bad.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
+      for (const screen of ['member', 'results', 'cases']) {
+        await page.goto(`/#/${screen}`);
+        await expect(page.locator('h1')).toBeVisible();
+        await page.waitForTimeout(300);
+        const r = await new AxeBuilder({ page }).analyze();
+        const bad = r.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+        expect(bad.map((v) => `${screen} ${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
+      }
     });
   });
 }
