@@ -116,6 +116,22 @@ for (const size of SIZES) {
       await expect(input(page, 'waterDepth')).toHaveValue('8 m');
     });
 
+    test('a photo picked on the tablet is kept with the case on the device and shown as a thumbnail in the report', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      await expect(page.getByTestId('site-evidence')).toContainText('not in the case link or the case file');
+      // A 1 × 1 PNG, as the file picker would hand over.
+      const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAQAAAC1HAwCAAAAC0lEQVR42mNkYAAAAAYAAjCB0C8AAAAASUVORK5CYII=', 'base64');
+      await expect(page.getByTestId('photo-input')).toHaveAttribute('capture', 'environment');
+      await page.getByTestId('photo-input').setInputFiles({ name: 'tag-plate.png', mimeType: 'image/png', buffer: png });
+      await expect(page.locator('.site-evidence img')).toHaveCount(1);
+      await expect(page.locator('.site-evidence img')).toHaveAttribute('src', /^data:image\/jpeg;base64,/);
+      await page.reload();
+      await expect(page.locator('.site-evidence img')).toHaveCount(1);
+      await page.goto('/#/report');
+      await expect(page.getByTestId('report-photos').locator('img')).toHaveCount(1);
+    });
+
     test('the unit choice radios, the range checkboxes and the cautions link are tap targets of at least 44 px', async ({ page }) => {
       await page.goto('/#/cases');
       await expect(page.locator('label.radio').first()).toBeVisible();

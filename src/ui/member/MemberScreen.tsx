@@ -14,6 +14,7 @@ import { kindOf } from '../../kinds/registry';
 import { MemberRange } from './MemberRange';
 import { RangesBar } from './RangesBar';
 import { DefaultMark } from './RestsOnDefaults';
+import { SiteEvidence } from './SiteEvidence';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -78,6 +79,10 @@ export function MemberScreen() {
           <fieldset disabled={received}>
             <legend>Case</legend>
             <CaseDetails doc={doc} model={model} readOnly={received} />
+          </fieldset>
+          <fieldset>
+            <legend>Site evidence</legend>
+            <SiteEvidence caseId={doc.id} readOnly={received} />
           </fieldset>
         </div>
         <aside class="member-side">
