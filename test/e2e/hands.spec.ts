@@ -132,6 +132,27 @@ for (const size of SIZES) {
       await expect(page.getByTestId('report-photos').locator('img')).toHaveCount(1);
     });
 
+    test('two piles side by side: the Section view gives their added mass moving together, in opposition and one at a time', async ({ page }) => {
+      await page.goto('/#/section');
+      await page.getByRole('button', { name: 'Two piles side by side' }).click();
+      const pattern = page.getByTestId('motion-pattern');
+      await expect(pattern).toBeVisible({ timeout: 30_000 });
+      const read = async () => Number((await page.getByTestId('pattern-x-0').textContent())!.replace(/[^\d.\-]/g, ''));
+      const together = await read();
+      await pattern.getByLabel('In opposition').check();
+      const opposed = await read();
+      await pattern.getByLabel('One at a time').check();
+      const alone = await read();
+      // Side by side across the sway direction, the piles' sway coupling is not zero, so the three differ and the
+      // single pile lies between the two patterns (its own term, plus or minus the coupling).
+      expect(together).not.toBe(opposed);
+      expect(Math.min(together, opposed)).toBeLessThan(alone);
+      expect(Math.max(together, opposed)).toBeGreaterThan(alone);
+      const box = (await pattern.locator('label.pattern-radio').first().boundingBox())!;
+      expect(box.height).toBeGreaterThanOrEqual(44);
+      await page.screenshot({ path: `test-results/hands-pattern-${size.viewport.width}.png`, fullPage: true });
+    });
+
     test('the unit choice radios, the range checkboxes and the cautions link are tap targets of at least 44 px', async ({ page }) => {
       await page.goto('/#/cases');
       await expect(page.locator('label.radio').first()).toBeVisible();
