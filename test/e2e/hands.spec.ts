@@ -150,7 +150,7 @@ for (const size of SIZES) {
       expect(Math.max(together, opposed)).toBeGreaterThan(alone);
       const box = (await pattern.locator('label.pattern-radio').first().boundingBox())!;
       expect(box.height).toBeGreaterThanOrEqual(44);
-      await page.screenshot({ path: `test-results/hands-pattern-${size.viewport.width}.png`, fullPage: true });
+      await pattern.screenshot({ path: `test-results/hands-pattern-${size.viewport.width}.png` });
     });
 
     test('the unit choice radios, the range checkboxes and the cautions link are tap targets of at least 44 px', async ({ page }) => {
