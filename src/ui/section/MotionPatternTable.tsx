@@ -1,4 +1,4 @@
-import { useId, useState } from 'preact/hooks';
+import { useState } from 'preact/hooks';
 import type { SectionResult } from '../../physics/section';
 import { unitLabel } from '../../units';
 import { patternAddedMass, type MotionPattern } from './motion-pattern';
@@ -14,9 +14,9 @@ const PATTERNS: readonly { value: MotionPattern; label: string }[] = [
  * For two or more bodies: the added mass each feels when they move together, in opposition (neighbours in body
  * order move opposite ways) or one at a time (the others held still), from the full matrix above.
  */
+// One Section view per page, so one radio group name serves.
 export function MotionPatternTable({ result, units }: { result: SectionResult; units: SectionUnits }) {
   const [pattern, setPattern] = useState<MotionPattern>('together');
-  const id = useId();
   const n = result.bodies.length;
   if (n < 2) return null;
   const x = patternAddedMass(result.addedMass, pattern, 'x');
@@ -28,7 +28,7 @@ export function MotionPatternTable({ result, units }: { result: SectionResult; u
         <legend>How the bodies move</legend>
         {PATTERNS.map((p) => (
           <label key={p.value} class="pattern-radio">
-            <input type="radio" name={`${id}-pattern`} value={p.value} checked={pattern === p.value} onChange={() => setPattern(p.value)} />
+            <input type="radio" name="section-motion-pattern" value={p.value} checked={pattern === p.value} onChange={() => setPattern(p.value)} />
             {p.label}
           </label>
         ))}
