@@ -84,6 +84,25 @@ const NUMBER_THEN_REST = /^([+-]?(?:\d+(?:\.\d+)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*
  * would: a bare number stays a number, a number with a unit becomes its SI value. Null for anything else.
  */
 export function quickEvaluate(text: string): { value: number | QuickUnit; namedUnits: boolean } | null {
+  // A sum of quantities of one kind, as `2' 6"` and `2 ft 6 in` are rewritten to (`2 ft + 6 in`).
+  if (text.includes('+', 1)) return quickSum(text.split(/\s\+\s/));
+  return quickTerm(text);
+}
+
+function quickSum(parts: readonly string[]): { value: QuickUnit; namedUnits: boolean } | null {
+  let total = 0;
+  let dims: readonly number[] | null = null;
+  for (const p of parts) {
+    const q = quickTerm(p);
+    if (!q || !(q.value instanceof QuickUnit)) return null; // a bare number in a sum: let mathjs say what is wrong
+    if (dims && q.value.dimensions.some((e, i) => e !== dims![i])) return null;
+    dims = q.value.dimensions;
+    total += q.value.value;
+  }
+  return dims ? { value: new QuickUnit(total, dims), namedUnits: true } : null;
+}
+
+function quickTerm(text: string): { value: number | QuickUnit; namedUnits: boolean } | null {
   const m = NUMBER_THEN_REST.exec(text.trim());
   if (!m) return null;
   const n = Number(m[1]);

@@ -50,12 +50,12 @@ test.describe('pile form', () => {
     await expect(page.getByTestId('stale-note')).toHaveCount(0);
   });
 
-  test('the SI / US toggle re-expresses the values and keeps the answer', async ({ page }) => {
+  test('the SI / US toggle keeps the digits typed, pins their unit, and keeps the answer', async ({ page }) => {
     await page.goto('/#/member');
     await expect(page.getByTestId('quick-wet')).toContainText('Hz');
     const before = await page.getByTestId('quick-wet').textContent();
     await page.getByRole('button', { name: 'US units' }).click();
-    await expect(field(page, 'outerDiameter')).toHaveValue('30'); // 762 mm = 30 in exactly
+    await expect(field(page, 'outerDiameter')).toHaveValue('762 mm'); // the digits as typed, with the unit they meant
     await expect(page.getByTestId('quick-wet')).toHaveText(before!);
   });
 

@@ -62,6 +62,19 @@ describe('the case a tab opens at start', () => {
     expect(unwrap(await store.listCases()).cases).toHaveLength(1);
   });
 
+  it('a saved case (no draft left) reopens as saved when it was the last case open, and a deleted one falls back to the list', async () => {
+    const store = await harness().open({ tabId: 'T' });
+    const other = { ...pile, id: '00000000-0000-4000-8000-0000000000cc', name: 'another saved pile' };
+    unwrap(await store.saveCase(other));
+    unwrap(await store.saveCase({ ...pile, name: 'saved, then reloaded' }));
+    unwrap(await store.clearDraft());
+    expect(await firstCase(store, false, null, null)).toBeNull();
+    const first = await firstCase(store, false, null, pile.id);
+    expect(first).toMatchObject({ mode: 'editing', saved: true, doc: { name: 'saved, then reloaded' } });
+    expect(first?.baseRevision).not.toBeNull();
+    expect(await firstCase(store, false, null, '00000000-0000-4000-8000-0000000000dd')).toBeNull();
+  });
+
   it('a received case kept before an update reopens as received', async () => {
     const store = await harness().open({ tabId: 'T' });
     unwrap(await store.saveDraft({ ...pile, name: 'from a link' }, null, true));

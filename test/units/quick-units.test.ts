@@ -27,7 +27,17 @@ describe('the quick unit table agrees with mathjs', () => {
   it('reads a bare number as a number and refuses what it does not know, leaving it to mathjs', () => {
     expect(quickEvaluate('12')).toEqual({ value: 12, namedUnits: false });
     expect(quickEvaluate('-1.5e3')).toEqual({ value: -1500, namedUnits: false });
-    for (const t of ['2 ft + 6 in', '1/2 in', '3 furlong', '5 mm/m', '2 * 3 m', 'mm', '']) expect(quickEvaluate(t), t).toBeNull();
+    for (const t of ['2 ft + 6 kg', '2 ft + 6', '1/2 in', '3 furlong', '5 mm/m', '2 * 3 m', 'mm', '']) expect(quickEvaluate(t), t).toBeNull();
+  });
+});
+
+describe('sums of feet and inches', () => {
+  it('reads 2 ft + 6 in (what 2\' 6" and 2 ft 6 in are rewritten to) as 0.762 m, with the dimensions of a length', () => {
+    const q = quickEvaluate('2 ft + 6 in');
+    if (!q || !(q.value instanceof QuickUnit)) throw new Error('2 ft + 6 in was not read');
+    // 30 in × 0.0254 m/in = 0.762 m (international inch, exact by definition); rtol for rounding only.
+    expectClose(q.value.value, 0.762, { rtol: 1e-12, label: '2 ft + 6 in in m' });
+    expect(q.value.dimensions).toEqual(DIMENSIONS.length.exponents);
   });
 });
 

@@ -1,3 +1,4 @@
+import type { ComponentChildren } from 'preact';
 import { describedBy, FieldShell, type ShellProps } from './FieldShell';
 
 interface Props extends ShellProps {
@@ -8,12 +9,17 @@ interface Props extends ShellProps {
   /** 'decimal' brings up the number keypad on tablets; 'text' for lists. */
   mode?: 'decimal' | 'text';
   onInput: (text: string) => void;
+  onBlur?: () => void;
+  /** In place of the plain unit label: a unit chip to pick the unit from. */
+  unitSlot?: ComponentChildren;
+  /** Under the field: the value understood ("= 0.772 m/s"). */
+  echo?: ComponentChildren;
 }
 
 /** A text field with its unit beside it. */
-export function TextField({ value, unit, placeholder, mode = 'decimal', onInput, ...shell }: Props) {
+export function TextField({ value, unit, placeholder, mode = 'decimal', onInput, onBlur, unitSlot, echo, ...shell }: Props) {
   return (
-    <FieldShell {...shell}>
+    <FieldShell {...shell} under={echo}>
       <input
         id={shell.id}
         type="text"
@@ -25,8 +31,9 @@ export function TextField({ value, unit, placeholder, mode = 'decimal', onInput,
         aria-describedby={describedBy(shell.id, shell.error, shell.help)}
         aria-invalid={shell.error ? true : undefined}
         onInput={(e) => onInput((e.target as HTMLInputElement).value)}
+        onBlur={onBlur}
       />
-      {unit && <span class="unit" aria-hidden="true">{unit}</span>}
+      {unitSlot ?? (unit && <span class="unit" aria-hidden="true">{unit}</span>)}
     </FieldShell>
   );
 }

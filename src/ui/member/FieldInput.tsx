@@ -2,6 +2,7 @@ import type { FieldDef, UnitSystem } from '../../forms';
 import { unitLabel } from '../../units';
 import { describedBy, FieldShell } from '../controls/FieldShell';
 import { TextField } from '../controls/TextField';
+import { QuantityInput } from './QuantityInput';
 
 interface Props {
   field: FieldDef;
@@ -21,10 +22,13 @@ interface Props {
 export function FieldInput({ field, value, system, error, placeholder, onInput, idPrefix }: Props) {
   const id = `${idPrefix}-${field.key}`;
   const shell = { id, label: field.label, error, help: field.help, fieldKey: field.key };
+  if (field.type === 'quantity') {
+    return <QuantityInput field={field} value={value} system={system} error={error} placeholder={placeholder} onInput={onInput} id={id} />;
+  }
   if (field.type !== 'choice') {
     const unit = field.units[system];
     return (
-      <TextField {...shell} value={value} unit={unit ? unitLabel(unit) : undefined} placeholder={placeholder} mode={field.type === 'quantity' ? 'decimal' : 'text'} onInput={onInput} />
+      <TextField {...shell} value={value} unit={unit ? unitLabel(unit) : undefined} placeholder={placeholder} mode="text" onInput={onInput} />
     );
   }
   return (

@@ -13,6 +13,8 @@ import { AnswerBar } from './AnswerBar';
 import { kindOf } from '../../kinds/registry';
 import { MemberRange } from './MemberRange';
 import { RangesBar } from './RangesBar';
+import { DefaultMark } from './RestsOnDefaults';
+import { SiteEvidence } from './SiteEvidence';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
@@ -53,7 +55,12 @@ export function MemberScreen() {
               onInput={(k, t) => model.setField(k, t)}
               idPrefix="m"
               moreLabel="More member details"
-              after={(f) => <MemberRange field={f} doc={doc} model={model} disabled={received} />}
+              after={(f) => (
+                <>
+                  <DefaultMark doc={doc} fieldKey={f.key} />
+                  <MemberRange field={f} doc={doc} model={model} disabled={received} />
+                </>
+              )}
             />
             <RangesBar doc={doc} model={model} disabled={received} />
           </fieldset>
@@ -74,6 +81,10 @@ export function MemberScreen() {
           <fieldset disabled={received}>
             <legend>Case</legend>
             <CaseDetails doc={doc} model={model} readOnly={received} />
+          </fieldset>
+          <fieldset>
+            <legend>Site evidence</legend>
+            <SiteEvidence caseId={doc.id} readOnly={received} />
           </fieldset>
         </div>
         <aside class="member-side">

@@ -1,11 +1,22 @@
 import { useState } from 'preact/hooks';
 import type { UnitSystem } from '../../forms';
-import { convertExcitationValues } from '../../forms/excitation';
-import { convertRangeTexts } from '../../forms/ranges';
+import { pinFieldUnits } from '../../forms/pin-units';
+import type { RangeTexts } from '../../forms/ranges';
+import type { FieldDef } from '../../forms';
 import type { AppModel, ModelState } from '../state/app-model';
 import { useServices } from '../state/context';
 import { saveOpenCase } from '../cases/open-case';
 import { kindOf } from '../../kinds/registry';
+import { isUntouchedStart } from '../cases/new-case';
+import { demoOf } from './defaults-in-use';
+
+/** The low and high of each range with their bare numbers' unit pinned (see pin-units.ts). */
+function pinRangeUnits(fields: readonly FieldDef[], texts: RangeTexts, system: UnitSystem): RangeTexts {
+  const keys = Object.keys(texts);
+  const lows = pinFieldUnits(fields, Object.fromEntries(keys.map((k) => [k, texts[k].low])), system);
+  const highs = pinFieldUnits(fields, Object.fromEntries(keys.map((k) => [k, texts[k].high])), system);
+  return Object.fromEntries(keys.map((k) => [k, { ...texts[k], low: lows[k], high: highs[k] }]));
+}
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
@@ -14,12 +25,13 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
   const doc = state.doc!;
   const setSystem = (to: UnitSystem) => {
     if (to === doc.unitSystem) return;
+    // Display units only: what was typed stays as typed; bare numbers get the unit they were typed in.
     model.edit((d) => ({
       ...d,
       unitSystem: to,
-      inputs: kindOf(d.kind).form.convertValues(d.inputs, d.unitSystem, to),
-      excitation: convertExcitationValues(kindOf(d.kind).resonance, d.excitation, d.unitSystem, to),
-      ...(d.ranges ? { ranges: convertRangeTexts(kindOf(d.kind).form.fields, d.ranges, d.unitSystem, to) } : {}),
+      inputs: pinFieldUnits(kindOf(d.kind).form.fields, d.inputs, d.unitSystem),
+      excitation: pinFieldUnits(kindOf(d.kind).resonance.fields, d.excitation, d.unitSystem),
+      ...(d.ranges ? { ranges: pinRangeUnits(kindOf(d.kind).form.fields, d.ranges, d.unitSystem) } : {}),
     }));
   };
   const save = async () => {
@@ -31,6 +43,10 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
     setMessage({ ok: r.ok, text: r.text });
   };
   const unsaved = model.unsaved();
+  const demo = state.mode === 'editing' ? demoOf(doc, state.saved !== null) : null;
+  // A demo or a new case as it was opened holds nothing to lose: not "unsaved changes" until it is edited.
+  const untouched = unsaved && state.mode === 'editing' && state.saved === null && isUntouchedStart(doc);
+  const words = !unsaved ? 'Saved on this device' : untouched ? (demo ? 'Not changed' : 'Nothing entered yet') : 'Unsaved changes (kept as a draft)';
   return (
     <div class="toolbar">
       <div class="segmented" role="group" aria-label="Units">
@@ -43,7 +59,8 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
       <button type="button" class="btn primary" onClick={save} disabled={state.mode !== 'editing'}>
         Save case
       </button>
-      <span class="save-state" data-testid="save-state">{unsaved ? 'Unsaved changes (kept as a draft)' : 'Saved on this device'}</span>
+      {demo && <span class="demo-badge" data-testid="demo-badge" title={`Worked example: ${demo}`}>Demo case</span>}
+      <span class="save-state" data-testid="save-state">{words}</span>
       <p class={message?.ok === false ? 'status error' : 'status'} role="status" aria-live="polite">{message?.text ?? ''}</p>
       {state.storageMessage && <p class="status error" role="alert">{state.storageMessage}</p>}
     </div>

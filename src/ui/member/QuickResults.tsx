@@ -5,6 +5,7 @@ import { VerdictBadge } from '../results/VerdictBadge';
 import { hashFor } from '../shell/router';
 import { MemberSectionLink } from '../section/MemberSectionLink';
 import { QuickBand } from './QuickBand';
+import { RestsOnDefaults } from './RestsOnDefaults';
 
 /** The answer beside the form: lowest dry and wet frequency and the verdict, marked when out of date. */
 export function QuickResults({ state, stale }: { state: ModelState; stale: boolean }) {
@@ -49,6 +50,7 @@ export function QuickResults({ state, stale }: { state: ModelState; stale: boole
           </div>
         </dl>
       )}
+      {fig && state.doc && <RestsOnDefaults doc={state.doc} />}
       <QuickBand />
       <div class="quick-links">
         <a class="btn" href={hashFor('results')}>All results</a>

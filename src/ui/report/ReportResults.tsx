@@ -1,7 +1,8 @@
 import type { ComponentChildren } from 'preact';
 import type { Case } from '../../case';
 import type { Results } from '../state/app-model';
-import { displayUnits, sentence } from '../results/display-units';
+import { sentence } from '../results/display-units';
+import { displayUnitsAsTyped, speedTextsOf } from '../results/display-units-of-case';
 import { MassTable } from '../results/MassTable';
 import { ModesTable } from '../results/ModesTable';
 import { AssumptionsPanel, DiagnosticsPanel } from '../results/NotesPanels';
@@ -47,7 +48,7 @@ export function ReportKeyResults({ doc, results, current }: Props) {
       ) : (
         <>
           <div class="report-section">
-            <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={results.answer} />
+            <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={results.answer} speedUnit={displayUnitsAsTyped(doc.unitSystem, speedTextsOf(doc)).speed} />
           </div>
           <div class="report-section">
             <ModesTable member={results.answer.member} />
@@ -67,7 +68,7 @@ export function ReportDetails({ doc, results, children }: Props) {
   if (answer.engine === 'plate' || build.engine === 'plate') {
     return answer.engine === 'plate' && build.engine === 'plate' ? <PlateReportDetails answer={answer} build={build}>{children}</PlateReportDetails> : <>{children}</>;
   }
-  const units = displayUnits(doc.unitSystem);
+  const units = displayUnitsAsTyped(doc.unitSystem, speedTextsOf(doc));
   const { member, screening } = answer;
   return (
     <>

@@ -6,6 +6,7 @@ import { CautionsPanel } from '../results/NotesPanels';
 import { InputsTable } from './InputsTable';
 import { inputRows } from './report-inputs';
 import { ReportHeader } from './ReportHeader';
+import { ReportPhotos } from './ReportPhotos';
 import { ReportDetails, ReportKeyResults } from './ReportResults';
 import { ReportSignOff } from './ReportSignOff';
 import { CaseQr } from './CaseQr';
@@ -62,6 +63,7 @@ export function ReportView({ doc, results, link, appVersion, band }: ReportViewP
           </div>
         </section>
         {band}
+        <ReportPhotos caseId={doc.id} />
         <ReportDetails doc={doc} results={results} current={current}>
         <section class="report-section report-link" aria-labelledby="report-link-title">
           <h2 id="report-link-title">Case link</h2>

@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import type { Case } from '../../case';
 import type { Results } from '../state/app-model';
-import { displayUnits } from './display-units';
+import { displayUnitsAsTyped, speedTextsOf } from './display-units-of-case';
 import { MassTable } from './MassTable';
 import { ModeShapePanel } from './ModeShape';
 import { ModesTable } from './ModesTable';
@@ -11,6 +11,8 @@ import { StatusBanner } from './StatusBanner';
 import { PlateResultsBody } from '../plate/PlateResultsView';
 import { failureText } from './summary';
 import { FailurePanel, SummaryPanel } from './SummaryPanel';
+import { RestsOnDefaults } from '../member/RestsOnDefaults';
+import { ResultsInputs } from './ResultsInputs';
 import './results.css';
 
 export interface ResultsViewProps {
@@ -61,13 +63,15 @@ export function ResultsView({ doc, results, stale, computing, errorsCount, secti
       </div>
     );
   }
-  const units = displayUnits(doc.unitSystem);
+  const units = displayUnitsAsTyped(doc.unitSystem, speedTextsOf(doc));
   const { member, screening } = answer;
   return (
     <div class={stale ? 'results results-stale' : 'results'} aria-busy={computing}>
       {banner}
       <div class="results-body">
-        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} />
+        <SummaryPanel kind={doc.kind} system={doc.unitSystem} answer={answer} speedUnit={units.speed} />
+        <RestsOnDefaults doc={doc} />
+        <ResultsInputs doc={doc} />
         <ModesTable member={member} />
         {bandPanel}
         <ModeShapePanel build={build} member={member} units={units} />

@@ -7,8 +7,8 @@ import { VerdictBadge } from './VerdictBadge';
 type Solved = BeamSolved;
 
 /** The answer in a few lines: verdict (word and icon), what drives it, lowest frequencies, lock-in onset. */
-export function SummaryPanel({ kind, system, answer }: { kind: MemberKind; system: UnitSystem; answer: Solved }) {
-  const s = summarise(kind, system, answer);
+export function SummaryPanel({ kind, system, answer, speedUnit }: { kind: MemberKind; system: UnitSystem; answer: Solved; speedUnit?: string }) {
+  const s = summarise(kind, system, answer, speedUnit);
   return (
     <section class="panel results-summary" aria-labelledby="results-summary-title">
       <h2 id="results-summary-title">Summary</h2>

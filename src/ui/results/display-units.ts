@@ -28,6 +28,27 @@ export function displayUnits(system: UnitSystem): DisplayUnits {
   return UNITS[system];
 }
 
+/** Speed units as typed: "1.5 kt", "3 knots", "0.8 m/s", "2 ft/s" (the last word of the entry). */
+const TYPED_SPEED: readonly (readonly [RegExp, string])[] = [
+  [/\d\s*(?:kts?|knots?|kn)\s*$/i, 'knot'],
+  [/\d\s*m\/s\s*$/, 'm/s'],
+  [/\d\s*ft\/s\s*$/, 'ft/s'],
+];
+
+/**
+ * The units results follow for a case: the system's, except speeds, which follow the unit the currents and flow
+ * speeds were typed in when they all name the same one (critical currents in knots when the current was typed
+ * in knots). `speedTexts` are the case's speed entries as typed.
+ */
+export function displayUnitsAsTyped(system: UnitSystem, speedTexts: readonly string[]): DisplayUnits {
+  const named = new Set<string>();
+  for (const t of speedTexts) {
+    const hit = TYPED_SPEED.find(([re]) => re.test(t.trim()));
+    if (hit) named.add(hit[1]);
+  }
+  return named.size === 1 ? { ...UNITS[system], speed: [...named][0] } : UNITS[system];
+}
+
 /** Significant figures of elevations: four, so that 15.87 m and 16.07 m stay apart. */
 export const Z_DIGITS = 4;
 /** Significant figures of everything else shown (masses per metre, speeds, ratios). */

@@ -67,11 +67,11 @@ export function marginPhrase(check: Pick<CheckResult, 'verdict' | 'marginPercent
 }
 
 /** The sentence about the speed at which a shedding check begins; null when the check has none. */
-export function onsetSentence(kind: MemberKind, system: UnitSystem, s: ScreeningResult, mode: number, check: CheckResult): string | null {
+export function onsetSentence(kind: MemberKind, system: UnitSystem, s: ScreeningResult, mode: number, check: CheckResult, speedUnit?: string): string | null {
   const u = check.criticalSpeedMPerS;
   const point = s.modes[mode - 1]?.shedding ?? null;
   if (u === null || !Number.isFinite(u) || point === null) return null;
-  const units = displayUnits(system);
+  const units = { ...displayUnits(system), ...(speedUnit ? { speed: speedUnit } : {}) };
   const word = flowWord(kind);
   const at = `at ${zText(point.atZM, units)}, where mode ${mode} moves most under the liquid`;
   const now = `the ${word} there is ${qty(point.flowSpeedMPerS, units.speed)}`;
@@ -117,7 +117,7 @@ export interface Summary {
   notes: string[];
 }
 
-export function summarise(kind: MemberKind, system: UnitSystem, answer: Solved): Summary {
+export function summarise(kind: MemberKind, system: UnitSystem, answer: Solved, speedUnit?: string): Summary {
   const { member, screening } = answer;
   const dry = member.dry.frequenciesHz[0];
   const wet = member.wet?.frequenciesHz[0];
@@ -144,10 +144,10 @@ export function summarise(kind: MemberKind, system: UnitSystem, answer: Solved):
   const { mode, check } = driving;
   const basis = `${check.frequencyBasis} ${formatHz(check.frequencyHz)}`;
   const verdictLine = `Mode ${mode} against ${check.label} (${basis}): ${VERDICT_WORDS[check.verdict]}, ${marginPhrase(check, screening.limits.separationMargin.value)}.`;
-  let onsetLine = onsetSentence(kind, system, screening, mode, check);
+  let onsetLine = onsetSentence(kind, system, screening, mode, check, speedUnit);
   if (onsetLine === null) {
     const low = lowestOnset(screening);
-    const sentence = low && onsetSentence(kind, system, screening, low.mode, low.check);
+    const sentence = low && onsetSentence(kind, system, screening, low.mode, low.check, speedUnit);
     if (low && sentence) onsetLine = `Lowest onset of any shedding check (mode ${low.mode}): ${sentence}`;
   }
   return { verdict: screening.verdict, verdictLine, onsetLine, severityLine: severitySentence(screening), frequencyLine, notes };

@@ -3,6 +3,7 @@ import type { UnitSystem } from '../../units';
 import { CAUTION_LINE } from '../../text/cautions';
 import { BodyTable, EnergyTable, MatrixTable } from './NumberTables';
 import { describeBody, sectionUnits } from './numbers';
+import { MotionPatternTable } from './MotionPatternTable';
 
 interface Props {
   input: SectionInput;
@@ -40,6 +41,7 @@ export function SectionNumbers({ input, result, system, onSystem, checking, stal
         <BodyTable key={k} result={result} k={k} units={units} describe={describeBody(input.bodies[k], formatLength)} />
       ))}
       <MatrixTable result={result} units={units} />
+      <MotionPatternTable result={result} units={units} />
       {result.energyChecks.length > 0 ? (
         <>
           <EnergyTable result={result} units={units} />

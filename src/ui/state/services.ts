@@ -78,11 +78,12 @@ async function fromDraft(store: CaseStore, draft: Draft): Promise<FirstCase> {
 /**
  * What to open at start. This tab's own draft first (a reload or an update in this tab). A new tab takes the
  * newest draft of a tab that was closed — a surveyor who closed the tab and opens the app again expects to find
- * the work where they left it; other closed tabs' drafts are offered on the Cases screen. Else, on a device with
+ * the work where they left it; other closed tabs' drafts are offered on the Cases screen. Else the saved case last
+ * open (this tab's after a reload, the device's in a new tab: `lastCaseId`). Else, on a device with
  * no saved cases, the demo pile (a first look shows a real answer); else nothing (the Cases list).
  * Never throws: a draft or list that cannot be read is passed over (and listed on the Cases screen).
  */
-export async function firstCase(store: CaseStore | null, fresh = false, liveTabs: Set<string> | null = null): Promise<FirstCase | null> {
+export async function firstCase(store: CaseStore | null, fresh = false, liveTabs: Set<string> | null = null, lastCaseId: string | null = null): Promise<FirstCase | null> {
   const demo = (): FirstCase => ({ doc: caseFromDemo(DEMO_CASES[0]), mode: 'editing', saved: false, baseRevision: null });
   if (!store) return demo();
   try {
@@ -96,6 +97,11 @@ export async function firstCase(store: CaseStore | null, fresh = false, liveTabs
         const taken = await store.adoptDraft(d.key);
         if (taken.ok) return await fromDraft(store, taken.value);
       }
+    }
+    if (lastCaseId) {
+      // The case open when the app last closed, saved since (a saved case keeps no draft): reopen it as saved.
+      const last = await store.getCase(lastCaseId);
+      if (last.ok) return { doc: last.value, mode: 'editing', saved: true, baseRevision: revisionOf(last.value) };
     }
     // One light row and the count (no full case parsed); the whole light list only when no case is readable.
     const first = await store.listRows('updated', 1);

@@ -6,6 +6,7 @@ import { followStoreChanges } from './remote-changes';
 import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks } from './services';
 import { openTabs, tabIdentity } from './tab';
 import { openDeviceStoreOnce } from './early-store';
+import { lastOpenCase, rememberOpenCase } from './last-case';
 
 /**
  * Creates the services once, opens the device store, and opens the first case (this tab's draft, a closed tab's
@@ -41,7 +42,7 @@ export function useBoot(openingLink: boolean): AppServices {
           unfollow = followStoreChanges(store, model);
         }
         if (!openingLink && !model.get().doc) {
-          const first = await firstCase(store, tab.fresh, await openTabs());
+          const first = await firstCase(store, tab.fresh, await openTabs(), lastOpenCase(tab.fresh));
           if (first && !cancelled) {
             model.open(first.doc, first.mode, first.saved, first.baseRevision);
             // A first start (or a return to unsaved work) lands on the form, not an empty list.
@@ -55,6 +56,17 @@ export function useBoot(openingLink: boolean): AppServices {
         if (!cancelled) setServices({ model, section, sectionSolver, store, storeMessage: opened.message, storeRetryable: opened.retryable });
       }
     })();
+    // Remember the open case (saved or not) so the next start reopens it; a received case is not the user's own.
+    let lastId: string | null | undefined;
+    const unremember = model.subscribe(() => {
+      const { doc, mode } = model.get();
+      if (!doc && lastId === undefined) return; // nothing opened yet this start: keep what the last start left
+      const id = doc && mode === 'editing' ? doc.id : doc ? lastId ?? null : null;
+      if (id !== lastId) {
+        lastId = id;
+        rememberOpenCase(id);
+      }
+    });
     const offUpdate = onBeforeUpdate(() => model.flushDraft({ everyCase: true }));
     // Synchronous: an IndexedDB write started here may never commit before the page is gone.
     const keepCopy = () => {
@@ -76,6 +88,7 @@ export function useBoot(openingLink: boolean): AppServices {
     return () => {
       cancelled = true;
       unfollow();
+      unremember();
       offUpdate();
       document.removeEventListener('visibilitychange', onHide);
       removeEventListener('pagehide', onPageHide);
