@@ -49,7 +49,7 @@ test('a link copied in one browser opens the same results in a fresh one, marked
   await page.goto('/');
   await expect(page.getByTestId('quick-wet')).toContainText('Hz');
   await page.goto('/#/results');
-  const firstRow = page.locator('table').first().locator('tbody tr').first();
+  const firstRow = page.locator('table.modes-table').locator('tbody tr').first();
   await expect(firstRow).toContainText('Hz');
   const rowText = (await firstRow.textContent())!;
   await page.getByRole('button', { name: 'Copy link' }).click();
@@ -66,7 +66,7 @@ test('a link copied in one browser opens the same results in a fresh one, marked
   await other.goto(link);
   await expect(other).toHaveURL(/#\/results$/);
   await expect(other.getByText(/Received case/i).first()).toBeVisible();
-  await expect(other.locator('table').first().locator('tbody tr').first()).toHaveText(rowText);
+  await expect(other.locator('table.modes-table').locator('tbody tr').first()).toHaveText(rowText);
   await other.getByRole('button', { name: 'Save to my cases' }).click();
   await expect(other.getByText(/Saved/).first()).toBeVisible();
   await other.screenshot({ path: 'screenshots/received-portrait.png' });

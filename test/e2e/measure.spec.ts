@@ -57,7 +57,7 @@ test('a recording from synthetic motion events gives the spectrum, the picked pe
   await expect(page.getByTestId('motion-trace')).toBeVisible({ timeout: 5_000 });
   await expect(page.getByTestId('record-rate')).toContainText(/Sample rate achieved: [0-9.]+ Hz/);
   await page.screenshot({ path: 'screenshots/measure-recording-1024.png' });
-  await expect(page.getByTestId('spectrum-plot')).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByTestId('spectrum-plot')).toBeVisible({ timeout: 60_000 });
   const rate = number(await page.getByTestId('record-rate').textContent());
   expect(rate).toBeGreaterThan(40);
   await expect(page.getByTestId('predicted-wet-1')).toHaveCount(1);

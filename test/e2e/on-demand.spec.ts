@@ -41,8 +41,8 @@ test('a value typed before the unit reader has arrived is read once it does, and
   await page.goto('/');
   await expect(page.getByTestId('quick-wet')).toContainText('Hz');
   const before = await page.getByTestId('quick-wet').textContent();
-  await field(page, 'outerDiameter').fill('2 ft + 6 in'); // 762 mm, the demo's own diameter, written another way
-  await field(page, 'wallThickness').fill('20 mm');
+  await field(page, 'outerDiameter').fill('1524 mm / 2'); // 762 mm, the demo's own diameter: arithmetic the quick reader leaves to mathjs
+  await field(page, 'wallThickness').fill('40 mm / 2');
   await expect.poll(() => held.length, { message: 'the unit reader was asked for' }).toBeGreaterThan(0);
   await expect(page.getByTestId('quick-wet')).toHaveText(before!); // the last answer stays while it loads
   for (const r of held) await r.continue();

@@ -98,6 +98,8 @@ test('a plate panel entered with the form gives the numbers of wetmode plate, dr
   await page.reload();
   await page.goto('/#/cases');
   await page.locator('li', { hasText: 'Marrow Creek T-7 cross baffle' }).first().getByRole('button', { name: /^Open/ }).click();
+  // Opening a case moves to its Member screen; go on to Results once it has.
+  await expect(page.getByRole('heading', { level: 1, name: 'Plate panel' })).toBeVisible();
   await page.goto('/#/results');
   await expect(table.locator('tbody tr').first().locator('td').nth(1)).toHaveText(wet);
 
