@@ -27,16 +27,26 @@ interface Huffman {
   symbols: Uint16Array;
 }
 
-function huffman(lengths: ArrayLike<number>, n: number): Huffman {
+/**
+ * `incomplete`: which incomplete codes may stand: 'any' for the fixed codes (RFC 1951 §3.2.6 defines 30 distance
+ * codes of 5 bits, two slots unused), 'single' for a block's own literal/length and distance codes, 'none' for
+ * its code-length code. An over-subscribed code cannot be decoded unambiguously
+ * and is always refused. An incomplete one is refused too, except a literal/length or distance code of a single
+ * one-bit code (or none at all), which RFC 1951 §3.2.7 allows for a distance code of one symbol; this is exactly
+ * what zlib accepts (its inftrees.c), so one link gets one answer in Node and in every browser.
+ */
+function huffman(lengths: ArrayLike<number>, n: number, incomplete: 'any' | 'single' | 'none'): Huffman {
   const counts = new Uint16Array(16);
   for (let i = 0; i < n; i++) counts[lengths[i]]++;
   counts[0] = 0;
-  // An over-subscribed code cannot be decoded unambiguously: refuse it (an incomplete one is allowed, as zlib does).
   let left = 1;
+  let max = 0;
   for (let len = 1; len < 16; len++) {
     left = left * 2 - counts[len];
     if (left < 0) throw new Corrupt();
+    if (counts[len] > 0) max = len;
   }
+  if (left > 0 && max > 0 && incomplete !== 'any' && !(incomplete === 'single' && max === 1)) throw new Corrupt();
   const offs = new Uint16Array(16);
   for (let len = 1; len < 15; len++) offs[len + 1] = offs[len] + counts[len];
   const symbols = new Uint16Array(n);
@@ -50,9 +60,9 @@ const FIXED_LIT = (() => {
   l.fill(9, 144, 256);
   l.fill(7, 256, 280);
   l.fill(8, 280, 288);
-  return huffman(l, 288);
+  return huffman(l, 288, 'any');
 })();
-const FIXED_DIST = huffman(new Uint8Array(30).fill(5), 30);
+const FIXED_DIST = huffman(new Uint8Array(30).fill(5), 30, 'any');
 
 class Reader {
   pos = 0;
@@ -146,7 +156,7 @@ function dynamicTables(r: Reader): [Huffman, Huffman] {
   if (nlen > 286 || ndist > 30) throw new Corrupt();
   const cl = new Uint8Array(19);
   for (let i = 0; i < ncode; i++) cl[CL_ORDER[i]] = r.bits(3);
-  const clCode = huffman(cl, 19);
+  const clCode = huffman(cl, 19, 'none');
   const lengths = new Uint8Array(nlen + ndist);
   for (let i = 0; i < nlen + ndist; ) {
     const sym = r.decode(clCode);
@@ -168,7 +178,7 @@ function dynamicTables(r: Reader): [Huffman, Huffman] {
   }
   // A block must be able to end: the end-of-block code needs a length.
   if (lengths[256] === 0) throw new Corrupt();
-  return [huffman(lengths, nlen), huffman(lengths.subarray(nlen), ndist)];
+  return [huffman(lengths, nlen, 'single'), huffman(lengths.subarray(nlen), ndist, 'single')];
 }
 
 /** Inflates a whole deflate-raw stream; refuses a cut stream, a bad code, and anything after the final block. */
