@@ -48,7 +48,8 @@ describe('citations inside the repository', () => {
 
   it('no file in src/ or test/ cites a document outside the repository or a tracker number', () => {
     // Each pattern is one way of pointing at something a clone does not contain.
-    const patterns = [/check[- ]values/i, /design notes/i, /shared\/docs/i, /\bissue #?\d+/i];
+    // Built from parts so that this file does not itself contain the citations it forbids.
+    const patterns = [/check[- ]values/i, new RegExp(['design', 'notes'].join(' '), 'i'), new RegExp(['shared', 'docs'].join('\\/'), 'i'), /\bissue #?\d+/i];
     const found = patterns.flatMap((re) => hits(re));
     expect(found, `cite docs/sources.md §… or the published source instead:\n${found.join('\n')}`).toEqual([]);
   });
