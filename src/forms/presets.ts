@@ -147,6 +147,11 @@ export function sizeField(key: string, label: string, def: string, extra: Partia
  */
 export const TUBE_DIAMETER_MAX: Bound = { valueSI: 20, inclusive: true };
 
+/** A lumped mass carried by the member (a top or deck mass): tonnes in SI, pounds in US units, zero or more. */
+export function massField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
+  return { key, label, type: 'quantity', dimension: 'mass', units: { si: 't', us: 'lb' }, default: def, min: NON_NEGATIVE, ...extra };
+}
+
 /** A length or height along the member: m in SI, feet in US units. */
 export function heightField(key: string, label: string, def: string, extra: Partial<QuantityField> = {}): QuantityField {
   return { key, label, type: 'quantity', dimension: 'length', units: { si: 'm', us: 'ft' }, default: def, ...extra };

@@ -3,7 +3,7 @@ import { buildPileModel, DEFAULT_FIXITY_DIAMETERS, type PileFoundation, type Pil
 import { SOIL_PRESETS, type SoilPresetId } from '../../physics/practice/soil-presets';
 import { COMMON_CORE_FIELDS, commonInput, TUBE_CORE_FIELDS, tubeInput } from '../../forms/common-input';
 import { defineForm } from '../../forms/define';
-import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, GROWTH_THICKNESS_RANGE, heightField, TUBE_DIAMETER_MAX, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
+import { BEAM_THEORY_FIELD, densityField, END_EFFECT_FIELD, GROWTH_THICKNESS_RANGE, heightField, massField, TUBE_DIAMETER_MAX, liquidDensityField, materialFields, NON_NEGATIVE, POSITIVE, SEAWATER_HELP, sizeField } from '../../forms/presets';
 import { checkStubby, warnSlenderTheory, warnThinWall } from '../../forms/plausible';
 import type { Reader } from '../../forms/read';
 import type { FieldDef } from '../../forms/types';
@@ -76,16 +76,7 @@ const FIELDS: readonly FieldDef[] = [
     showWhen: { key: 'foundation', values: ['soil-springs-linear'] },
     help: 'Rise of the spring modulus per metre of depth. Submerged sand: loose 1.3, medium 4.4, dense 10.7 MN/m³ (K. Terzaghi, Evaluation of coefficients of subgrade reaction, Géotechnique 5, 1955).',
   },
-  {
-    key: 'topMass',
-    label: 'Top mass',
-    type: 'quantity',
-    dimension: 'mass',
-    units: { si: 't', us: 'lb' },
-    default: '0',
-    min: NON_NEGATIVE,
-    help: 'Share of the deck that sways with the pile head (deck sway mass), or anything else carried at the top.',
-  },
+  massField('topMass', 'Top mass', '0', { help: 'Share of the deck that sways with the pile head (deck sway mass), or anything else carried at the top.' }),
   {
     key: 'headRestraint',
     label: 'Pile head',
