@@ -81,18 +81,19 @@ describe('wet modes: added mass on the submerged length', () => {
     expect(off.addedMass!.endEffect).toBeNull();
   });
 
+  /** PIPE in two equal segments (one distinct section) inside a rigid 1 m pipe centred at `centerM`. */
+  const pipeInPipe = (centerM: [number, number]): MemberModel => ({
+    lengthM: L,
+    segments: [
+      { ...PIPE, fromM: 0, toM: 4 },
+      { ...PIPE, fromM: 4, toM: L },
+    ],
+    supports: cantilever,
+    liquid: { densityKgPerM3: RHO, fromM: 0, toM: L, boundaries: [{ kind: 'enclosure', shape: 'circle', diameterM: 1.0, centerM }] },
+  });
+
   it('a tube centred in a round pipe takes Fritz’s annulus in closed form, with no section solve', () => {
-    const liquid = { densityKgPerM3: RHO, fromM: 0, toM: L, boundaries: [{ kind: 'enclosure' as const, shape: 'circle' as const, diameterM: 1.0 }] };
-    const model: MemberModel = {
-      lengthM: L,
-      segments: [
-        { ...PIPE, fromM: 0, toM: 4 },
-        { ...PIPE, fromM: 4, toM: L },
-      ],
-      supports: cantilever,
-      liquid,
-    };
-    const r = solved(model);
+    const r = solved(pipeInPipe([0, 0]));
     expect(r.addedMass!.sectionSolves).toBe(0);
     const r1 = 0.25;
     const r2 = 0.5;
@@ -105,17 +106,7 @@ describe('wet modes: added mass on the submerged length', () => {
   it('an off-centre tube in a pipe uses the section solver once per distinct section, its estimate honest against Fritz', () => {
     // A small offset (1 µm in a 250 mm gap) leaves Fritz's value unchanged to about 1e-10 but is not concentric,
     // so the solver runs: two identical segments are one section, so one solver call.
-    const liquid = { densityKgPerM3: RHO, fromM: 0, toM: L, boundaries: [{ kind: 'enclosure' as const, shape: 'circle' as const, diameterM: 1.0, centerM: [1e-6, 0] as [number, number] }] };
-    const model: MemberModel = {
-      lengthM: L,
-      segments: [
-        { ...PIPE, fromM: 0, toM: 4 },
-        { ...PIPE, fromM: 4, toM: L },
-      ],
-      supports: cantilever,
-      liquid,
-    };
-    const r = solved(model);
+    const r = solved(pipeInPipe([1e-6, 0]));
     expect(r.addedMass!.sectionSolves).toBe(1);
     const r1 = 0.25;
     const r2 = 0.5;
