@@ -26,8 +26,12 @@ export function unitFactor(unit: string): number {
   return f;
 }
 
-/** Pretty label of a unit as typed: `kg/m^3` → `kg/m³`, `kN m/rad` → `kN·m/rad`. */
+/**
+ * Pretty label of a unit as typed: `kg/m^3` → `kg/m³`, `kN m/rad` → `kN·m/rad`, `knot` → `kn` (the knot's
+ * symbol on charts and in sailing directions; the reader also takes `kt`, `kts` and `knot`).
+ */
 export function unitLabel(unit: string): string {
+  if (unit === 'knot') return 'kn';
   return unit.replace(/\^2/g, '²').replace(/\^3/g, '³').replace(/ (?=[A-Za-z])/g, '·');
 }
 
@@ -56,26 +60,4 @@ export function formatForEntry(valueSI: number, unit: string): string {
 /** The usual display unit of a dimension in a unit system. */
 export function defaultUnit(dimension: Dimension, system: UnitSystem): string {
   return DIMENSIONS[dimension].units[system][0];
-}
-
-/**
- * Units the understood value is echoed in, beside a field: the SI unit when something else was typed, else the
- * unit a US drawing or a mariner would use (knots for currents).
- */
-const ECHO_ALTERNATE: Partial<Record<Dimension, string>> = { speed: 'knot' };
-
-/**
- * The understood value in the other system, for the echo beside a field: `1.5 kn` → "= 0.772 m/s",
- * `610 mm` → "= 24.02 in", `24"` → "= 609.6 mm". A bare number takes `shownUnit`. Empty where both systems
- * use the same unit (times, angles, ratios, frequencies).
- */
-export function echoQuantity(valueSI: number, dimension: Dimension, typedText: string, shownUnit: string): string {
-  const units = DIMENSIONS[dimension].units;
-  const si = units.si[0];
-  const us = ECHO_ALTERNATE[dimension] ?? units.us[0];
-  if (si === us || !Number.isFinite(valueSI)) return '';
-  const trailing = /[A-Za-z"'][A-Za-z^0-9/ ]*$/.exec(typedText.trim());
-  const typed = trailing ? trailing[0].trim() : shownUnit;
-  const typedIsSi = units.si.includes(typed) || /^(m|mm|cm|km|kg|t|N|kN|MN|Pa|kPa|MPa|GPa)\b/.test(typed);
-  return `= ${formatQuantity(valueSI, typedIsSi ? us : si)}`;
 }

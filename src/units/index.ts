@@ -3,4 +3,6 @@ export { DIMENSIONS, describeExponents, matchesDimension } from './dimensions';
 export type { Dimension, DimensionInfo, UnitSystem } from './dimensions';
 export { parseQuantity, parseQuantityList, splitList, normaliseText } from './parse';
 export type { QuantityOptions, QuantityResult, QuantityListResult } from './parse';
-export { ENTRY_RELATIVE_TOLERANCE, defaultUnit, echoQuantity, formatForEntry, formatNumber, formatQuantity, unitFactor, unitLabel } from './format';
+export { ENTRY_RELATIVE_TOLERANCE, defaultUnit, formatForEntry, formatNumber, formatQuantity, unitFactor, unitLabel } from './format';
+export { echoQuantity, unitTypedIn } from './echo';
+export type { FieldUnits } from './echo';

@@ -11,7 +11,7 @@ describe('display units as typed', () => {
     expect(displayUnitsAsTyped('si', ['1.5 kt']).length).toBe('m');
   });
 
-  it('a critical speed of 0.7717 m/s reads as 1.5 knot (international knot = 1852 m/h, exact by definition)', () => {
-    expect(qty((1.5 * 1852) / 3600, 'knot')).toBe('1.5 knot');
+  it('a critical speed of 0.7717 m/s reads as 1.5 kn (international knot = 1852 m/h, exact by definition)', () => {
+    expect(qty((1.5 * 1852) / 3600, 'knot')).toBe('1.5 kn');
   });
 });

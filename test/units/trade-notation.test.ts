@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { echoQuantity, parseQuantity, type QuantityOptions } from '../../src/units';
+import { echoQuantity, parseQuantity, unitTypedIn, type QuantityOptions } from '../../src/units';
 import { expectClose } from '../helpers/expect-close';
 
 // Conversion factors: NIST Special Publication 811 (2008), Appendix B — exact by definition: in = 0.0254 m,
@@ -48,20 +48,38 @@ describe('trade notation that a surveyor types is read as meant', () => {
 });
 
 describe('the understood value is echoed in the other system', () => {
-  it('knots echo in metres per second and metres per second echo in knots (1 kn = 1852/3600 m/s)', () => {
-    expect(echoQuantity(1.5 * 1852 / 3600, 'speed', '1.5 kt', 'm/s')).toBe('= 0.7717 m/s');
-    expect(echoQuantity(1, 'speed', '1', 'm/s')).toBe('= 1.944 knot');
+  const SPEED = { si: 'm/s', us: 'ft/s' };
+  const DIAMETER = { si: 'mm', us: 'in' };
+  const LENGTH_M = { si: 'm', us: 'ft' };
+
+  it('knots echo in metres per second and metres per second echo in knots (1 kn = 1852/3600 m/s, exact by definition)', () => {
+    expect(echoQuantity((1.5 * 1852) / 3600, 'speed', unitTypedIn('1.5 kt', 'm/s'), SPEED)).toBe('= 0.7717 m/s');
+    expect(echoQuantity(1, 'speed', unitTypedIn('1', 'm/s'), SPEED)).toBe('= 1.944 kn');
   });
 
-  it('inches echo in millimetres, millimetres in inches, a bare number by the shown unit', () => {
-    expect(echoQuantity(0.6096, 'length', '24"', 'mm')).toBe('= 609.6 mm');
-    expect(echoQuantity(0.61, 'length', '610 mm', 'in')).toBe('= 24.02 in');
-    expect(echoQuantity(0.61, 'length', '610', 'mm')).toBe('= 24.02 in');
-    expect(echoQuantity(0.6096, 'length', '24', 'in')).toBe('= 609.6 mm');
+  it('inches echo in millimetres, millimetres in inches, a bare number by the shown unit (1 in = 25.4 mm exactly, NIST SP 811)', () => {
+    expect(echoQuantity(0.6096, 'length', unitTypedIn('24"', 'mm'), DIAMETER)).toBe('= 609.6 mm');
+    expect(echoQuantity(0.61, 'length', unitTypedIn('610 mm', 'in'), DIAMETER)).toBe('= 24.02 in');
+    expect(echoQuantity(0.61, 'length', unitTypedIn('610', 'mm'), DIAMETER)).toBe('= 24.02 in');
+    expect(echoQuantity(0.61, 'length', unitTypedIn('61 cm', 'in'), DIAMETER)).toBe('= 24.02 in');
+    expect(echoQuantity(0.6096, 'length', unitTypedIn('24', 'in'), DIAMETER)).toBe('= 609.6 mm');
+  });
+
+  it('a length in metres echoes in the field\'s own US unit, feet, and feet and inches typed together echo in metres (1 ft = 0.3048 m exactly, NIST SP 811)', () => {
+    expect(echoQuantity(9.5, 'length', unitTypedIn('9.5 m', 'ft'), LENGTH_M)).toBe('= 31.17 ft');
+    expect(echoQuantity(0.762, 'length', unitTypedIn(`2' 6"`, 'm'), LENGTH_M)).toBe('= 0.762 m');
+    expect(echoQuantity(0.762, 'length', unitTypedIn('2 ft 6 in', 'm'), LENGTH_M)).toBe('= 0.762 m');
+  });
+
+  it('the unit typed is the last unit expression of the text; an exponent is part of the number', () => {
+    expect(unitTypedIn('1025 kg/m^3', 'lb/ft^3')).toBe('kg/m^3');
+    expect(unitTypedIn('50 kN m/rad', 'lbf ft/rad')).toBe('kN m/rad');
+    expect(unitTypedIn('3e5', 'mm')).toBe('mm');
+    expect(unitTypedIn('3 kts', 'm/s')).toBe('knot');
   });
 
   it('quantities that read the same in both systems have no echo', () => {
-    expect(echoQuantity(8, 'time', '8 s', 's')).toBe('');
-    expect(echoQuantity(0.2, 'ratio', '20 %', '%')).toBe('');
+    expect(echoQuantity(8, 'time', '8 s', { si: 's', us: 's' })).toBe('');
+    expect(echoQuantity(0.2, 'ratio', '%', { si: '%', us: '%' })).toBe('');
   });
 });

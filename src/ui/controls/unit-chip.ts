@@ -16,7 +16,7 @@ export interface UnitOption {
 export function unitOptions(dimension: Dimension): UnitOption[] {
   const { si, us } = DIMENSIONS[dimension].units;
   const ids = [...new Set([...si, ...us, ...(dimension === 'speed' ? ['knot'] : [])])];
-  return ids.map((id) => (id === 'knot' ? { text: 'kt', label: 'kn' } : { text: id, label: unitLabel(id) }));
+  return ids.map((id) => ({ text: id === 'knot' ? 'kt' : id, label: unitLabel(id) }));
 }
 
 const NUMBERS = String.raw`[+\-−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+\-]?\d+)?`;

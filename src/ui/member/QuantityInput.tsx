@@ -1,7 +1,7 @@
 import { useState } from 'preact/hooks';
 import type { QuantityField, UnitSystem } from '../../forms';
 import { fieldUnit } from '../../forms';
-import { DIMENSIONS, formatQuantity, parseQuantity, unitLabel } from '../../units';
+import { echoQuantity, parseQuantity, unitLabel, unitTypedIn } from '../../units';
 import { TextField } from '../controls/TextField';
 import { UnitChip } from '../controls/UnitChip';
 import { unitInText, unitOptions, withPickedUnit } from '../controls/unit-chip';
@@ -16,20 +16,12 @@ interface Props {
   id: string;
 }
 
-/**
- * The value understood, in the other system and in this field's own unit there ("9.5 m" → "= 31.17 ft", a
- * current in m/s → knots, in knots → m/s), or '' while it does not read (or the unit reader loads).
- */
+/** The value understood, echoed under the field (src/units/echo.ts), or '' while it does not read or the unit reader loads. */
 function echoOf(field: QuantityField, text: string, system: UnitSystem, typedUnit: string): string {
   if (text.trim() === '') return '';
-  const unit = fieldUnit(field, system);
-  const si = field.units.si;
-  const us = field.dimension === 'speed' ? 'knot' : field.units.us;
-  if (si === us || si === '' || us === '') return '';
-  const typedIsSi = DIMENSIONS[field.dimension].units.si.includes(typedUnit) || typedUnit === si;
   try {
-    const r = parseQuantity(text, { dimension: field.dimension, unit });
-    return r.ok && Number.isFinite(r.valueSI) ? `= ${formatQuantity(r.valueSI, typedIsSi ? us : si)}` : '';
+    const r = parseQuantity(text, { dimension: field.dimension, unit: fieldUnit(field, system) });
+    return r.ok ? echoQuantity(r.valueSI, field.dimension, typedUnit, field.units) : '';
   } catch {
     return ''; // the unit reader is loading: the echo comes with the next reading
   }
@@ -61,8 +53,7 @@ export function QuantityInput({ field, value, system, error, placeholder, onInpu
       setPending(null);
     }
   };
-  // A sum such as 2' 6" names no one unit: its last unit says which system it was typed in.
-  const typed = inText ? current : ({ '"': 'in', "'": 'ft', kt: 'knot', kts: 'knot' } as Record<string, string>)[/([A-Za-z"']+)\s*$/.exec(value)?.[1] ?? ''] ?? /([A-Za-z]+)\s*$/.exec(value)?.[1] ?? shownText;
+  const typed = inText ? current : unitTypedIn(value, shownText);
   const echo = echoOf(field, value, system, typed === 'kt' ? 'knot' : typed);
   return (
     <TextField
