@@ -32,6 +32,32 @@ for (const size of SIZES) {
       await page.screenshot({ path: `test-results/hands-reopen-${size.viewport.width}.png` });
     });
 
+    test('while the last field of the form has focus, the lowest wet frequency and the verdict are in view and cover no field', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      const last = page.locator('[data-field] input[inputmode="decimal"]:visible').last();
+      await last.focus();
+      await last.fill('');
+      await last.pressSequentially('1');
+      // Portrait: the answer bar at the bottom of the screen; landscape: the answer panel beside the form.
+      const answer = size.viewport.width <= 900 ? page.getByTestId('answer-bar') : page.getByTestId('quick-wet');
+      await expect(answer).toBeInViewport();
+      await expect(answer).toContainText('Hz');
+      const field = await last.boundingBox();
+      const bar = await answer.boundingBox();
+      expect(field && bar, 'both boxes are laid out').toBeTruthy();
+      if (size.viewport.width <= 900) {
+        // The bar is pinned to the bottom: the field in use must sit wholly above it.
+        expect(field!.y + field!.height, 'bottom of the focused field against the top of the answer bar').toBeLessThanOrEqual(bar!.y + 0.5);
+      }
+      await expect(last).toBeInViewport();
+      await page.screenshot({ path: `test-results/hands-last-field-${size.viewport.width}.png` });
+      // Every unit chip names a unit: counts and plain ratios have none to pick.
+      const chips = await page.locator('select.unit-chip').evaluateAll((els) => els.map((e) => (e as HTMLSelectElement).value));
+      expect(chips.length).toBeGreaterThan(3);
+      expect(chips.filter((v) => v === '')).toEqual([]);
+    });
+
     test('the first start shows the demo marked as a demo, unchanged until edited', async ({ page }) => {
       await page.goto('/');
       await expect(page.getByTestId('quick-wet')).toContainText('Hz');

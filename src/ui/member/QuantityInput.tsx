@@ -37,7 +37,8 @@ export function QuantityInput({ field, value, system, error, placeholder, onInpu
   const options = unitOptions(field.dimension);
   const shown = fieldUnit(field, system);
   const shownText = shown === 'knot' ? 'kt' : shown;
-  const chip = options.length > 1 && options.some((o) => o.text === shownText);
+  // A count or a plain ratio shown without a unit has nothing to pick: no chip (an empty one reads as broken).
+  const chip = shownText !== '' && options.length > 1 && options.some((o) => o.text === shownText);
   const inText = unitInText(value, options);
   const current = inText?.unit ?? pending ?? shownText;
   const pick = (unit: string) => {
