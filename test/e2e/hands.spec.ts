@@ -2,7 +2,8 @@
  * In the surveyor's hands, at both tablet sizes with touch: a saved case reopens after a reload; a demo is marked
  * as one and is not "unsaved changes" until edited; a new case's verdict says which defaults it rests on; units
  * typed as a mariner or a drawing writes them are read and echoed; the unit chip enters values with digits only;
- * the SI/US switch leaves typed text as typed.
+ * the SI/US switch leaves typed text as typed; the answer stays in view while the last field has focus; notices cover
+ * no input and wide tables say they scroll.
  */
 import { test, expect, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
@@ -56,6 +57,37 @@ for (const size of SIZES) {
       const chips = await page.locator('select.unit-chip').evaluateAll((els) => els.map((e) => (e as HTMLSelectElement).value));
       expect(chips.length).toBeGreaterThan(3);
       expect(chips.filter((v) => v === '')).toEqual([]);
+    });
+
+    test('the "ready to work offline" notice covers no input, and a table wider than the screen says it scrolls or fits', async ({ page }) => {
+      await page.goto('/');
+      await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+      await expect(page.getByText('Ready to work offline')).toBeVisible({ timeout: 30_000 });
+      // Whatever sits at the centre of each visible input must be that input: no notice or bar on top of it.
+      const covered = await page.locator('[data-field] input:visible').evaluateAll((inputs) =>
+        inputs
+          .filter((el) => {
+            const r = el.getBoundingClientRect();
+            return r.bottom > 0 && r.top < window.innerHeight;
+          })
+          .filter((el) => {
+            const r = el.getBoundingClientRect();
+            const y = Math.min(Math.max(r.top + r.height / 2, 0), window.innerHeight - 1);
+            const top = document.elementFromPoint(r.left + r.width / 2, y);
+            return top !== el && !el.contains(top);
+          })
+          .map((el) => el.closest('[data-field]')?.getAttribute('data-field')),
+      );
+      expect(covered).toEqual([]);
+      await page.goto('/#/results');
+      const boxes = page.locator('.table-scroll:visible');
+      await expect(page.getByRole('table', { name: /resonance/i }).first()).toBeVisible();
+      expect(await boxes.count()).toBeGreaterThan(1);
+      for (const box of await boxes.all()) {
+        const wide = await box.evaluate((el) => el.scrollWidth > el.clientWidth + 2);
+        // A table that does not fit has a visible cue just before it; one that fits needs none.
+        if (wide) await expect(box.locator('xpath=preceding-sibling::p[@data-testid="scroll-cue"][1]')).toBeVisible();
+      }
     });
 
     test('the first start shows the demo marked as a demo, unchanged until edited', async ({ page }) => {
