@@ -3,7 +3,7 @@
  * The section worker: a thin adapter so the Section view never blocks while solving. Each message is
  * `{ id, request }`; each reply is `{ id, value }` (see SolverClient). The memo lives as long as the worker.
  */
-import { createSectionMemo, solveSectionRequest, type SectionRequest } from './solve-section';
+import { createSectionMemo, solveSectionRequest, type SectionRequest } from '../app/solve-section';
 
 declare const self: DedicatedWorkerGlobalScope;
 

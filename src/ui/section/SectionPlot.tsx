@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'preact/hooks';
 import type { SectionDof, SectionInput } from '../../physics/section';
-import type { SectionField } from '../../worker/solve-section';
+import type { SectionField } from '../../app/solve-section';
 import { legendNumber, mapPixels } from './colour-scale';
 import type { Box } from './geometry';
 import { nearestPoint, valueAt, type MapDisplay } from './map-values';

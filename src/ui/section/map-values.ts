@@ -7,7 +7,7 @@
  * Potential is shown as φ/(U L) with L = r, a dimensionless number of the same order as the speed.
  */
 import type { SectionInput } from '../../physics/section';
-import type { SectionField } from '../../worker/solve-section';
+import type { SectionField } from '../../app/solve-section';
 import { potentialScale, speedScale, type BandScale } from './colour-scale';
 import { farthestRadius } from './geometry';
 

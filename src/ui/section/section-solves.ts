@@ -7,7 +7,7 @@
  */
 import type { SectionInput, SectionResult } from '../../physics/section';
 import type { Answer } from '../../worker/solver-client';
-import type { SectionAnswer, SectionField, SectionMapRequest, SectionRequest } from '../../worker/solve-section';
+import type { SectionAnswer, SectionField, SectionMapRequest, SectionRequest } from '../../app/solve-section';
 import { SECTION_ADVICE, solverFailureWords } from '../state/solver-words';
 
 /** The part of the worker client a view uses (a fake in tests). */

@@ -5,7 +5,7 @@
  */
 import { useEffect, useState } from 'preact/hooks';
 import type { SectionInput } from '../../physics/section';
-import type { SectionMapRequest } from '../../worker/solve-section';
+import type { SectionMapRequest } from '../../app/solve-section';
 import { SectionSolves, type SectionSolver, type SolveState } from './section-solves';
 
 export function useSectionSolve(

@@ -9,7 +9,7 @@ import type { FallbackDraft } from './draft-fallback';
 import { caseFromDemo } from '../../app/create-case';
 import { sameCaseContent, type Case } from '../../case';
 import { AppModel } from './app-model';
-import type { SectionAnswer, SectionRequest } from '../../worker/solve-section';
+import type { SectionAnswer, SectionRequest } from '../../app/solve-section';
 import { SectionModel } from '../section/section-model';
 import type { SectionSolver } from '../section/section-solves';
 import { DEMO_CASES } from '../../kinds/registry';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { SectionInput } from '../../../src/physics/section';
-import type { SectionField } from '../../../src/worker/solve-section';
+import type { SectionField } from '../../../src/app/solve-section';
 import { humanise, locate } from '../../../src/ui/section/messages';
 import { mapDisplay, nearestPoint, valueAt } from '../../../src/ui/section/map-values';
 import { expectClose } from '../../helpers/expect-close';

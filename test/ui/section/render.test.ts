@@ -12,7 +12,7 @@ vi.mock('preact/hooks', () => ({
 
 import { solveSection, type SectionInput } from '../../../src/physics/section';
 import { CAUTION_LINE } from '../../../src/text/cautions';
-import { createSectionMemo, solveSectionRequest } from '../../../src/worker/solve-section';
+import { createSectionMemo, solveSectionRequest } from '../../../src/app/solve-section';
 import { BodyCard } from '../../../src/ui/section/BodyCard';
 import { newBody, openWater } from '../../../src/ui/section/form';
 import { mapView } from '../../../src/ui/section/map-grid';

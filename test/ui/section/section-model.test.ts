@@ -8,7 +8,7 @@ import type { SectionSolver } from '../../../src/ui/section/section-solves';
 import { SURROUND_WORDS } from '../../../src/ui/section/view-words';
 import { CASE_ADVICE, solverFailureWords } from '../../../src/ui/state/solver-words';
 import type { Answer } from '../../../src/worker/solver-client';
-import { createSectionMemo, solveSectionRequest, type SectionAnswer, type SectionRequest } from '../../../src/worker/solve-section';
+import { createSectionMemo, solveSectionRequest, type SectionAnswer, type SectionRequest } from '../../../src/app/solve-section';
 import { expectClose } from '../../helpers/expect-close';
 
 /** The worker's own function run in place of the worker; `hold` keeps matching requests waiting for ever. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createSectionMemo, solveSectionRequest, type SectionRequest } from '../../src/worker/solve-section';
+import { createSectionMemo, solveSectionRequest, type SectionRequest } from '../../src/app/solve-section';
 import type { SectionInput } from '../../src/physics/section';
 import { expectClose } from '../helpers/expect-close';
 
