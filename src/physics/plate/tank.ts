@@ -88,6 +88,10 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   const cosG = new Float64Array(M * qx.x.length);
   for (let m = 0; m < M; m++) for (let q = 0; q < qx.x.length; q++) cosG[m * qx.x.length + q] = Math.cos((m * Math.PI * qx.x[q]) / a);
   const px = integralMatrix(sampleBasis(bx, qx.x).v, nx, cosG, M, qx.w);
+  // Equal edge factors at both ends make X_k of parity (−1)^k about the mid-width, and cos(mπs/a) has parity (−1)^m:
+  // their integral vanishes when k + m is odd. Written as exact zeros, a mode of one parity (the dry solve gives
+  // those exactly) then has whole blocks m of P equal to zero, skipped below.
+  if (bx.p0 === bx.p1) for (let k = 0; k < nx; k++) for (let m = (k + 1) & 1; m < M; m += 2) px[k * M + m] = 0;
   const gamma = new Float64Array(N);
   for (let n = 0; n < N; n++) gamma[n] = ((2 * n + 1) * Math.PI) / (2 * d);
   const qy = composite(0, wet, Math.max(2, Math.ceil((ny + N) / 6)));
@@ -134,12 +138,21 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
     }
     for (let r = 0; r < MN; r++) P[row + r] *= root[r];
   }
+  // live[i·M + m]: block m of mode i's projections is not all zero.
+  const live = new Uint8Array(count * M);
+  for (let i = 0; i < count; i++) for (let m = 0; m < M; m++) {
+    const at = i * MN + m * N;
+    for (let n = 0; n < N; n++) if (P[at + n] !== 0) { live[i * M + m] = 1; break; }
+  }
   const out = new Float64Array(count * count);
   for (let i = 0; i < count; i++) for (let j = 0; j <= i; j++) {
     let s = 0;
-    const ri = i * MN;
-    const rj = j * MN;
-    for (let r = 0; r < MN; r++) s += P[ri + r] * P[rj + r];
+    for (let m = 0; m < M; m++) {
+      if (!live[i * M + m] || !live[j * M + m]) continue;
+      const ri = i * MN + m * N;
+      const rj = j * MN + m * N;
+      for (let n = 0; n < N; n++) s += P[ri + n] * P[rj + n];
+    }
     out[i * count + j] = s;
   }
   if (d > b) {
@@ -182,6 +195,10 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
         for (let i = 0; i < count; i++) {
           let s = 0;
           const at = i * MN + m * N;
+          if (!live[i * M + m]) {
+            R[p * count + i] = 0;
+            continue;
+          }
           for (let n = 0; n < N; n++) s += Gm[gp + n] * P[at + n];
           R[p * count + i] = s;
         }
