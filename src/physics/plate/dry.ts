@@ -12,7 +12,8 @@ import { denseSymmetricEigen } from '../linalg/eigen-dense';
 import { basisQuadrature, integralMatrix, makeBasis, sampleBasis } from './basis';
 import type { Basis1D } from './basis';
 import { edgeSpring, geometricCondition } from './types';
-import type { PlateInput } from './types';
+import type { EdgeCondition, PlateInput } from './types';
+import { BoundedMemo } from './memo';
 
 export interface DryModes {
   bx: Basis1D;
@@ -21,8 +22,10 @@ export interface DryModes {
   n: number;
   /** ω² of every Ritz mode, ascending (rad²/s²). */
   omega2: Float64Array;
-  /** Coefficients of mode k at `[k·n … (k+1)·n)`, normalised to ∫∫ w² dA = 1 (generalised mass ρh). */
+  /** Coefficients of mode k at `[k·n … (k+1)·n)`, normalised to ∫∫ w² dA = 1 (generalised mass ρh). Shared: read-only. */
   vectors: Float64Array;
+  /** Every input that determines `bx`, `by` and `vectors` (terms, sides, Poisson's ratio, edges), for memos built on them. */
+  shapeKey: string;
 }
 
 export type DryOutcome = { ok: true; modes: DryModes } | { ok: false; reason: 'basis-ill-conditioned' | 'not-converged'; message: string };
@@ -41,20 +44,45 @@ function directionMatrices(b: Basis1D) {
   };
 }
 
-/** All Ritz modes with `terms` functions per direction. */
+/** Ritz modes of K̂ = K ρh / D (geometry, Poisson's ratio and edges only), shared between plates that differ in E, h or ρ. */
+type NormalModes = { ok: true; bx: Basis1D; by: Basis1D; n: number; lambda: Float64Array; vectors: Float64Array } | { ok: false; reason: 'basis-ill-conditioned' | 'not-converged'; message: string };
+
+/** Up to 8 shapes of plate kept (a handful of geometries edited back and forth, each at the default and coarse order). */
+const normalMemo = new BoundedMemo<NormalModes>(8);
+
+/** Forgets the memoised shapes (benchmarks of a first solve; tests of the memo). */
+export function clearDryMemo(): void {
+  normalMemo.clear();
+}
+
+/**
+ * All Ritz modes with `terms` functions per direction. K = (D/ρh) K̂ with K̂ built from the shape alone (edge
+ * springs enter as k_r/D), so the eigenvectors are those of K̂ and ω² = (D/ρh) λ̂; K̂'s modes are memoised.
+ */
 export function dryModes(p: PlateInput, terms: number): DryOutcome {
   const e = p.edges;
-  const bx = makeBasis(terms, p.widthM, geometricCondition(e.left), geometricCondition(e.right));
-  const by = makeBasis(terms, p.heightM, geometricCondition(e.bottom), geometricCondition(e.top));
+  const D = flexuralRigidity(p);
+  const springs = [e.left, e.right, e.bottom, e.top].map((x) => edgeSpring(x) / D);
+  const conditions = [e.left, e.right, e.bottom, e.top].map(geometricCondition);
+  const key = [terms, p.widthM, p.heightM, p.poissonRatio, ...conditions, ...springs].join('|');
+  const m = normalMemo.get(key, () => normalModes(p, terms, conditions, springs));
+  if (!m || !m.ok) return m ?? { ok: false, reason: 'not-converged', message: 'the dense eigen-solver did not converge on the plate stiffness' };
+  const scale = D / (p.densityKgPerM3 * p.thicknessM);
+  const omega2 = new Float64Array(m.lambda.length);
+  for (let i = 0; i < omega2.length; i++) omega2[i] = scale * m.lambda[i];
+  return { ok: true, modes: { bx: m.bx, by: m.by, n: m.n, omega2, vectors: m.vectors, shapeKey: key } };
+}
+
+function normalModes(p: PlateInput, terms: number, c: EdgeCondition[], springs: number[]): NormalModes {
+  const bx = makeBasis(terms, p.widthM, c[0], c[1]);
+  const by = makeBasis(terms, p.heightM, c[2], c[3]);
   if (!bx || !by) return { ok: false, reason: 'basis-ill-conditioned', message: `the plate basis of ${terms} terms per direction is numerically singular; use fewer terms` };
   const X = directionMatrices(bx);
   const Y = directionMatrices(by);
   const nx = bx.count;
   const ny = by.count;
   const n = nx * ny;
-  const D = flexuralRigidity(p);
   const nu = p.poissonRatio;
-  const scale = D / (p.densityKgPerM3 * p.thicknessM);
   const k = new Float64Array(n * n);
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
@@ -68,25 +96,64 @@ export function dryModes(p: PlateInput, terms: number): DryOutcome {
           const bj = b * ny + j;
           const yj0 = j === b ? 1 : 0;
           // E(p,q)_ia = ∫ X_i^(p) X_a^(q) dx; the orthonormal basis makes E(0,0) = I.
-          const v =
+          k[r * n + a * ny + b] =
             X.e22[ia] * yj0 +
             xi0 * Y.e22[jb] +
             nu * (X.e20[ia] * Y.e20[bj] + X.e20[ai] * Y.e20[jb]) +
             2 * (1 - nu) * X.e11[ia] * Y.e11[jb];
-          k[r * n + a * ny + b] = scale * v;
         }
       }
     }
   }
-  addEdgeSprings(k, bx, by, [edgeSpring(e.left), edgeSpring(e.right)], [edgeSpring(e.bottom), edgeSpring(e.top)], 1 / (p.densityKgPerM3 * p.thicknessM));
-  const eig = denseSymmetricEigen(k, n);
-  if (!eig.ok) return { ok: false, reason: 'not-converged', message: 'the dense eigen-solver did not converge on the plate stiffness' };
-  return { ok: true, modes: { bx, by, n, omega2: eig.values, vectors: eig.vectors } };
+  addEdgeSprings(k, bx, by, [springs[0], springs[1]], [springs[2], springs[3]], 1);
+  // Equal edges at both ends of a direction make the plate symmetric about its mid-line there: the orthonormal
+  // functions then alternate even, odd (Legendre parity times a symmetric edge factor), K̂ has no terms between
+  // the parities, and the problem splits into independent blocks (a quarter of the work per split direction).
+  const eig = blockEigen(k, nx, ny, c[0] === c[1] && springs[0] === springs[1], c[2] === c[3] && springs[2] === springs[3]);
+  if (!eig) return { ok: false, reason: 'not-converged', message: 'the dense eigen-solver did not converge on the plate stiffness' };
+  return { ok: true, bx, by, n, lambda: eig.values, vectors: eig.vectors };
+}
+
+/**
+ * All eigenpairs of the symmetric K (row-major, index i·ny + j), solved per parity class of (i, j) in each
+ * symmetric direction; ascending values, vector k at [k·n … (k+1)·n), zero outside its class.
+ */
+function blockEigen(k: Float64Array, nx: number, ny: number, symX: boolean, symY: boolean): { values: Float64Array; vectors: Float64Array } | null {
+  const n = nx * ny;
+  const classes: number[][] = [[], [], [], []];
+  for (let i = 0; i < nx; i++) for (let j = 0; j < ny; j++) classes[(symX ? (i & 1) * 2 : 0) + (symY ? j & 1 : 0)].push(i * ny + j);
+  const values: number[] = [];
+  const parts: { idx: number[]; vectors: Float64Array; at: number }[] = [];
+  for (const idx of classes) {
+    const m = idx.length;
+    if (m === 0) continue;
+    const sub = new Float64Array(m * m);
+    for (let r = 0; r < m; r++) {
+      const row = idx[r] * n;
+      for (let s = 0; s < m; s++) sub[r * m + s] = k[row + idx[s]];
+    }
+    const eig = denseSymmetricEigen(sub, m);
+    if (!eig.ok) return null;
+    for (let r = 0; r < m; r++) {
+      values.push(eig.values[r]);
+      parts.push({ idx, vectors: eig.vectors, at: r });
+    }
+  }
+  const order = values.map((_, i) => i).sort((a, b) => values[a] - values[b]);
+  const outValues = new Float64Array(n);
+  const outVectors = new Float64Array(n * n);
+  order.forEach((src, dst) => {
+    outValues[dst] = values[src];
+    const { idx, vectors, at } = parts[src];
+    const m = idx.length;
+    for (let s = 0; s < m; s++) outVectors[dst * n + idx[s]] = vectors[at * m + s];
+  });
+  return { values: outValues, vectors: outVectors };
 }
 
 /**
  * Edge springs: k_r X_i′(edge) X_a′(edge) δ_jb for the left and right edges (k_r Y_j′ Y_b′ δ_ia for bottom and
- * top), the δ from the orthonormal basis along the edge; scaled by 1/(ρh) like the rest of K.
+ * top), the δ from the orthonormal basis along the edge; `kx`, `ky` are k_r / D (K̂ = K ρh / D), times `scale`.
  */
 function addEdgeSprings(k: Float64Array, bx: Basis1D, by: Basis1D, kx: number[], ky: number[], scale: number): void {
   const nx = bx.count;

@@ -85,31 +85,78 @@ export function influenceTable(gx: number, gy: number, dx: number, dy: number, r
 export function rayleighAddedMass(shapes: Float64Array[], gx: number, gy: number, dx: number, dy: number, densityKgPerM3: number, reachM?: number): Float64Array {
   const table = influenceTable(gx, gy, dx, dy, reachM);
   const count = shapes.length;
-  const cells = gx * gy;
-  const u = new Float64Array(cells);
+  // The uniform grid is symmetric about both mid-lines and so is κ, so a shape's four parity parts
+  // w^(sx,sy) (even or odd in x, in y) give potentials of the same parity and no cross terms in the energy:
+  // each part is convolved on one quarter of the grid with the kernel folded over its mirror images, a quarter
+  // of the work of the full convolution, whatever the plate's edges.
+  const hx = (gx + 1) >> 1;
+  const hy = (gy + 1) >> 1;
+  const quarter = hx * hy;
+  const F = new Float64Array(quarter * quarter);
+  const W = new Float64Array(quarter * count);
+  const U = new Float64Array(quarter * count);
+  const weight = new Float64Array(quarter); // how many grid cells each quarter cell stands for
+  for (let py = 0; py < hy; py++) for (let px = 0; px < hx; px++) weight[py * hx + px] = (2 * px + 1 === gx ? 1 : 2) * (2 * py + 1 === gy ? 1 : 2);
   const out = new Float64Array(count * count);
-  for (let j = 0; j < count; j++) {
-    const wj = shapes[j];
-    // u(P) = Σ_Q κ(P, Q) w_j(Q): potential at each cell centre.
-    for (let py = 0; py < gy; py++) {
-      for (let px = 0; px < gx; px++) {
-        let s = 0;
-        for (let qy = 0; qy < gy; qy++) {
-          const dj = Math.abs(py - qy);
-          const row = qy * gx;
-          for (let qx = 0; qx < gx; qx++) s += table[Math.abs(px - qx) * gy + dj] * wj[row + qx];
+  for (let part = 0; part < 4; part++) {
+    const sx = part & 2 ? -1 : 1;
+    const sy = part & 1 ? -1 : 1;
+    // F[P·quarter + Q] = Σ over the distinct mirror images Q' of Q of (sign) κ(P, Q').
+    for (let py = 0; py < hy; py++) for (let px = 0; px < hx; px++) {
+      const row = (py * hx + px) * quarter;
+      for (let qy = 0; qy < hy; qy++) {
+        const my = gy - 1 - qy;
+        const dy0 = Math.abs(py - qy);
+        const dy1 = Math.abs(py - my);
+        for (let qx = 0; qx < hx; qx++) {
+          const mx = gx - 1 - qx;
+          const c0 = Math.abs(px - qx) * gy;
+          const c1 = Math.abs(px - mx) * gy;
+          let v = table[c0 + dy0];
+          if (mx !== qx) v += sx * table[c1 + dy0];
+          if (my !== qy) {
+            v += sy * table[c0 + dy1];
+            if (mx !== qx) v += sx * sy * table[c1 + dy1];
+          }
+          F[row + qy * hx + qx] = v;
         }
-        u[py * gx + px] = s;
       }
     }
-    for (let i = 0; i <= j; i++) {
-      const wi = shapes[i];
-      let s = 0;
-      for (let c = 0; c < cells; c++) s += wi[c] * u[c];
-      const m = densityKgPerM3 * dx * dy * s;
-      out[i * count + j] = m;
-      out[j * count + i] = m;
+    // The parity part of each shape on the quarter, W[Q·count + j] = ¼ Σ (sign) w_j(mirror of Q).
+    for (let j = 0; j < count; j++) {
+      const w = shapes[j];
+      for (let qy = 0; qy < hy; qy++) for (let qx = 0; qx < hx; qx++) {
+        const mx = gx - 1 - qx;
+        const a = qy * gx;
+        const b = (gy - 1 - qy) * gx;
+        W[(qy * hx + qx) * count + j] = 0.25 * (w[a + qx] + sx * w[a + mx] + sy * (w[b + qx] + sx * w[b + mx]));
+      }
     }
+    // U = F W: the potential of each part at the quarter's cell centres.
+    U.fill(0);
+    for (let P = 0; P < quarter; P++) {
+      const row = P * quarter;
+      const at = P * count;
+      for (let Q = 0; Q < quarter; Q++) {
+        const f = F[row + Q];
+        const from = Q * count;
+        for (let j = 0; j < count; j++) U[at + j] += f * W[from + j];
+      }
+    }
+    for (let P = 0; P < quarter; P++) {
+      const at = P * count;
+      const mu = weight[P];
+      for (let i = 0; i < count; i++) {
+        const wi = mu * W[at + i];
+        if (wi === 0) continue;
+        for (let j = 0; j <= i; j++) out[i * count + j] += wi * U[at + j];
+      }
+    }
+  }
+  const scale = densityKgPerM3 * dx * dy;
+  for (let i = 0; i < count; i++) for (let j = 0; j <= i; j++) {
+    out[i * count + j] *= scale;
+    out[j * count + i] = out[i * count + j];
   }
   return out;
 }

@@ -4,12 +4,13 @@
  * panel in a rigid wall (rayleigh.ts) or an eigenfunction series for a plate across a tank (tank.ts). Every
  * answer is computed twice, at the default and at a coarser resolution, for the error estimate.
  */
-import { dryModes, modeValuesOnGrid } from './dry';
+import { clearDryMemo, dryModes, modeValuesOnGrid } from './dry';
 import type { DryModes } from './dry';
 import { IMAGE_NOTE, rayleighAddedMass } from './rayleigh';
 import { sloshingModes } from './sloshing';
 import { tankAddedMass } from './tank';
 import { combineVectors, dominantDryMode, wetModes } from './wet';
+import { BoundedMemo } from './memo';
 import type { PlateInput, PlateOutcome, PlateResolution, PlateResult, SloshingMode } from './types';
 
 const DEFAULTS: Required<PlateResolution> = {
@@ -38,19 +39,37 @@ function split(p: PlateInput, long: number, min: number): [number, number] {
 
 type AddedMass = { ok: true; ma: Float64Array } | { ok: false; message: string };
 
+/**
+ * Added mass per unit liquid density (M_a is linear in ρ), keyed by the dry shapes it is taken on and the liquid's
+ * geometry: a keystroke on a density, the thickness or the material reuses it.
+ */
+const unitAddedMass = new BoundedMemo<Float64Array>(8);
+
+/** Forgets every memoised piece, so the next solve is a first solve (benchmarks; tests of the memo). */
+export function clearPlateMemos(): void {
+  clearDryMemo();
+  unitAddedMass.clear();
+}
+
 function addedMass(p: PlateInput, dry: DryModes, count: number, res: Required<PlateResolution>): AddedMass {
   const liq = p.liquid!;
-  if (liq.setting === 'wall-panel') {
-    const [gx, gy] = split(p, res.cellsLongSide, 4);
-    const shapes = modeValuesOnGrid(dry, dry.vectors, count, grid(gx, p.widthM, true), grid(gy, p.heightM, true));
-    const ma = rayleighAddedMass(shapes, gx, gy, p.widthM / gx, p.heightM / gy, liq.densityKgPerM3, liq.reachM);
-    if (liq.sides === 2) for (let i = 0; i < ma.length; i++) ma[i] *= 2;
-    return { ok: true, ma };
-  }
-  const reach = liq.reachM ?? Infinity;
-  const tank = { widthM: p.widthM, heightM: p.heightM, depthM: liq.depthM!, reachesM: liq.sides === 2 ? [reach, reach] : [reach] };
-  const ma = tankAddedMass(dry.bx, dry.by, dry.vectors, count, tank, { widthTerms: res.tankWidthTerms, depthTerms: res.tankDepthTerms, gapTerms: res.gapTerms }, liq.densityKgPerM3);
-  return ma ? { ok: true, ma } : { ok: false, message: 'the flow over the top edge could not be resolved (gap system singular)' };
+  const key = [dry.shapeKey, count, liq.setting, liq.sides, liq.depthM, liq.reachM, res.cellsLongSide, res.tankWidthTerms, res.tankDepthTerms, res.gapTerms].join('|');
+  const unit = unitAddedMass.get(key, () => {
+    if (liq.setting === 'wall-panel') {
+      const [gx, gy] = split(p, res.cellsLongSide, 4);
+      const shapes = modeValuesOnGrid(dry, dry.vectors, count, grid(gx, p.widthM, true), grid(gy, p.heightM, true));
+      const ma = rayleighAddedMass(shapes, gx, gy, p.widthM / gx, p.heightM / gy, 1, liq.reachM);
+      if (liq.sides === 2) for (let i = 0; i < ma.length; i++) ma[i] *= 2;
+      return ma;
+    }
+    const reach = liq.reachM ?? Infinity;
+    const tank = { widthM: p.widthM, heightM: p.heightM, depthM: liq.depthM!, reachesM: liq.sides === 2 ? [reach, reach] : [reach] };
+    return tankAddedMass(dry.bx, dry.by, dry.vectors, count, tank, { widthTerms: res.tankWidthTerms, depthTerms: res.tankDepthTerms, gapTerms: res.gapTerms }, 1);
+  });
+  if (!unit) return { ok: false, message: 'the flow over the top edge could not be resolved (gap system singular)' };
+  const ma = new Float64Array(unit.length);
+  for (let i = 0; i < ma.length; i++) ma[i] = liq.densityKgPerM3 * unit[i];
+  return { ok: true, ma };
 }
 
 function coarser(res: Required<PlateResolution>): Required<PlateResolution> {

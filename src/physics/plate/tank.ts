@@ -53,6 +53,26 @@ function composite(lo: number, hi: number, panels: number): { x: Float64Array; w
 }
 
 /**
+ * cos((2n + 1)θ) for n = 0 … count − 1 into `out`, by the recurrence c_(n+1) = 2 cos 2θ · c_n − c_(n−1)
+ * (c_(−1) = cos θ; classical, Chebyshev's three-term recurrence). A perturbation grows at most linearly
+ * along it, so after the 144 terms used here the error stays near 144² ε ≈ 1e-12, and it replaces 144 calls
+ * of Math.cos per quadrature point.
+ */
+function oddCosines(theta: number, count: number, out: Float64Array): void {
+  const c1 = Math.cos(theta);
+  const twoC2 = 2 * Math.cos(2 * theta);
+  let prev = c1;
+  let cur = c1;
+  out[0] = c1;
+  for (let n = 1; n < count; n++) {
+    const next = twoC2 * cur - prev;
+    prev = cur;
+    cur = next;
+    out[n] = cur;
+  }
+}
+
+/**
  * Added-mass matrix (kg) on `count` plate shapes given as Ritz coefficients (`vectors`, mode k at
  * [k·bx.count·by.count …)), bases bx along the width and by up the height. null if the gap system is singular.
  */
@@ -68,41 +88,71 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   const cosG = new Float64Array(M * qx.x.length);
   for (let m = 0; m < M; m++) for (let q = 0; q < qx.x.length; q++) cosG[m * qx.x.length + q] = Math.cos((m * Math.PI * qx.x[q]) / a);
   const px = integralMatrix(sampleBasis(bx, qx.x).v, nx, cosG, M, qx.w);
+  // Equal edge factors at both ends make X_k of parity (−1)^k about the mid-width, and cos(mπs/a) has parity (−1)^m:
+  // their integral vanishes when k + m is odd. Written as exact zeros, a mode of one parity (the dry solve gives
+  // those exactly) then has whole blocks m of P equal to zero, skipped below.
+  if (bx.p0 === bx.p1) for (let k = 0; k < nx; k++) for (let m = (k + 1) & 1; m < M; m += 2) px[k * M + m] = 0;
   const gamma = new Float64Array(N);
   for (let n = 0; n < N; n++) gamma[n] = ((2 * n + 1) * Math.PI) / (2 * d);
   const qy = composite(0, wet, Math.max(2, Math.ceil((ny + N) / 6)));
-  const cosZ = new Float64Array(N * qy.x.length);
-  for (let n = 0; n < N; n++) for (let q = 0; q < qy.x.length; q++) cosZ[n * qy.x.length + q] = Math.cos(gamma[n] * qy.x[q]);
-  const py = integralMatrix(sampleBasis(by, qy.x).v, ny, cosZ, N, qy.w);
-  // Modal projections P[i][m·N + n] = Σ_kl c_kl Px[k, m] Py[l, n].
-  const P = new Float64Array(count * M * N);
-  const tmp = new Float64Array(nx * N);
-  for (let i = 0; i < count; i++) {
-    const c = vectors.subarray(i * nx * ny, (i + 1) * nx * ny);
-    tmp.fill(0);
-    for (let k = 0; k < nx; k++) for (let l = 0; l < ny; l++) {
-      const ckl = c[k * ny + l];
-      for (let n = 0; n < N; n++) tmp[k * N + n] += ckl * py[l * N + n];
-    }
-    for (let m = 0; m < M; m++) for (let n = 0; n < N; n++) {
-      let s = 0;
-      for (let k = 0; k < nx; k++) s += px[k * M + m] * tmp[k * N + n];
-      P[i * M * N + m * N + n] = s;
-    }
+  const nqy = qy.x.length;
+  const cosZ = new Float64Array(N * nqy);
+  const cz = new Float64Array(N);
+  for (let q = 0; q < nqy; q++) {
+    oddCosines(gamma[0] * qy.x[q], N, cz);
+    for (let n = 0; n < N; n++) cosZ[n * nqy + q] = cz[n];
   }
-  // Compliance of the wetted compartments z̄_mn = Σ_sides 1/(N_mn k_mn tanh(k_mn L)).
-  const zbar = new Float64Array(M * N);
+  const py = integralMatrix(sampleBasis(by, qy.x).v, ny, cosZ, N, qy.w);
+  // Compliance of the wetted compartments z̄_mn = Σ_sides 1/(N_mn k_mn tanh(k_mn L)), kept as √z̄ (z̄ > 0) so the
+  // quadratic forms below are plain dot products of weighted projections.
+  const root = new Float64Array(M * N);
   for (let m = 0; m < M; m++) for (let n = 0; n < N; n++) {
     const k = Math.hypot((m * Math.PI) / a, gamma[n]);
     const norm = (m === 0 ? 1 : 0.5) * a * (d / 2);
     let s = 0;
     for (const L of tank.reachesM) s += 1 / (norm * k * (Number.isFinite(L) ? Math.tanh(k * L) : 1));
-    zbar[m * N + n] = s;
+    root[m * N + n] = Math.sqrt(s);
+  }
+  // Weighted modal projections P[i][m·N + n] = √z̄_mn Σ_kl c_kl Px[k, m] Py[l, n], contracted over k first
+  // (T[m, l] = Σ_k c_kl Px[k, m]: nx·ny·M products, then M·ny·N).
+  const MN = M * N;
+  const P = new Float64Array(count * MN);
+  const T = new Float64Array(M * ny);
+  for (let i = 0; i < count; i++) {
+    const c = vectors.subarray(i * nx * ny, (i + 1) * nx * ny);
+    T.fill(0);
+    for (let k = 0; k < nx; k++) for (let l = 0; l < ny; l++) {
+      const ckl = c[k * ny + l];
+      if (ckl === 0) continue;
+      for (let m = 0; m < M; m++) T[m * ny + l] += ckl * px[k * M + m];
+    }
+    const row = i * MN;
+    for (let m = 0; m < M; m++) {
+      for (let l = 0; l < ny; l++) {
+        const t = T[m * ny + l];
+        if (t === 0) continue;
+        const pyRow = l * N;
+        const at = row + m * N;
+        for (let n = 0; n < N; n++) P[at + n] += t * py[pyRow + n];
+      }
+    }
+    for (let r = 0; r < MN; r++) P[row + r] *= root[r];
+  }
+  // live[i·M + m]: block m of mode i's projections is not all zero.
+  const live = new Uint8Array(count * M);
+  for (let i = 0; i < count; i++) for (let m = 0; m < M; m++) {
+    const at = i * MN + m * N;
+    for (let n = 0; n < N; n++) if (P[at + n] !== 0) { live[i * M + m] = 1; break; }
   }
   const out = new Float64Array(count * count);
   for (let i = 0; i < count; i++) for (let j = 0; j <= i; j++) {
     let s = 0;
-    for (let r = 0; r < M * N; r++) s += P[i * M * N + r] * P[j * M * N + r] * zbar[r];
+    for (let m = 0; m < M; m++) {
+      if (!live[i * M + m] || !live[j * M + m]) continue;
+      const ri = i * MN + m * N;
+      const rj = j * MN + m * N;
+      for (let n = 0; n < N; n++) s += P[ri + n] * P[rj + n];
+    }
     out[i * count + j] = s;
   }
   if (d > b) {
@@ -117,30 +167,43 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
       const t = qt.x[q];
       legendreInto(2 * t - 1, Q, pl, dpl, d2pl);
       const z = b + (d - b) * t * t;
-      for (let n = 0; n < N; n++) {
-        const sn = 2 * (d - b) * qt.w[q] * Math.cos(gamma[n] * z);
-        for (let p = 0; p < Q; p++) G[p * N + n] += pl[p] * sn;
+      oddCosines(gamma[0] * z, N, cz);
+      const wq = 2 * (d - b) * qt.w[q];
+      for (let p = 0; p < Q; p++) {
+        const f = wq * pl[p];
+        const gRow = p * N;
+        for (let n = 0; n < N; n++) G[gRow + n] += f * cz[n];
       }
     }
     const S = new Float64Array(Q * Q);
     const R = new Float64Array(Q * count);
+    const X = new Float64Array(Q * count);
+    const Gm = new Float64Array(Q * N);
     for (let m = 0; m < M; m++) {
       const am = (m === 0 ? 1 : 0.5) * a; // ∫ cos² (mπs/a) ds
-      S.fill(0);
-      R.fill(0);
+      // Gm[p, n] = am √z̄_mn G[p, n], so S = Gm Gmᵀ and R = Gm Pᵀ over this m's block of P.
+      for (let p = 0; p < Q; p++) for (let n = 0; n < N; n++) Gm[p * N + n] = am * root[m * N + n] * G[p * N + n];
       for (let p = 0; p < Q; p++) {
-        for (let p2 = 0; p2 < Q; p2++) {
+        const gp = p * N;
+        for (let p2 = 0; p2 <= p; p2++) {
           let s = 0;
-          for (let n = 0; n < N; n++) s += G[p * N + n] * G[p2 * N + n] * zbar[m * N + n];
-          S[p * Q + p2] = am * am * s;
+          const gq = p2 * N;
+          for (let n = 0; n < N; n++) s += Gm[gp + n] * Gm[gq + n];
+          S[p * Q + p2] = s;
+          S[p2 * Q + p] = s;
         }
         for (let i = 0; i < count; i++) {
           let s = 0;
-          for (let n = 0; n < N; n++) s += G[p * N + n] * P[i * M * N + m * N + n] * zbar[m * N + n];
-          R[p * count + i] = am * s;
+          const at = i * MN + m * N;
+          if (!live[i * M + m]) {
+            R[p * count + i] = 0;
+            continue;
+          }
+          for (let n = 0; n < N; n++) s += Gm[gp + n] * P[at + n];
+          R[p * count + i] = s;
         }
       }
-      const X = Float64Array.from(R);
+      X.set(R);
       if (!choleskyInPlace(S, Q)) return null;
       choleskySolveInPlace(S, Q, X, count);
       for (let i = 0; i < count; i++) for (let j = 0; j <= i; j++) {
