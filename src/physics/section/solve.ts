@@ -97,6 +97,13 @@ export function solveSectionDetailed(input: SectionInput, options: SolveOptions 
   const cap = options.maxPanelsPerBody ?? DEFAULT_MAX_PANELS_PER_BODY;
   checkPanelsPerBody(start);
   checkPanelsPerBody(cap);
+  const target = options.targetRelativeError;
+  if (target !== undefined && !(typeof target === 'number' && target > 0 && Number.isFinite(target))) {
+    throw new RangeError(`targetRelativeError must be a positive number, got ${String(target)}`);
+  }
+  if (options.targetMotions !== undefined && !(Array.isArray(options.targetMotions) && options.targetMotions.every((d) => DOFS.includes(d)))) {
+    throw new RangeError(`targetMotions must list motions from x, y, rotation, got ${JSON.stringify(options.targetMotions)}`);
+  }
   let doublings = 0;
   while (start * 2 ** (doublings + 1) <= cap) doublings++;
   return solveAt(input, start, doublings, options);
