@@ -4,8 +4,8 @@
  *
  * The observed order p = log2((m_{h} − m_{h/2}) / (m_{h/2} − m_{h/4})) is bounded to [1, 2] (p = 1 when the
  * sequence is not monotone) and the estimate of the finest value's error is |m_fine − m_extrapolated| =
- * |m_fine − m_coarse| / (2^p − 1) (L.F. Richardson, Phil. Trans. R. Soc. A 226 (1927) 299, the deferred
- * approach to the limit). Below the asymptotic order (ASYMPTOTIC_ORDER) or when a body's mean panel is
+ * |m_fine − m_coarse| / (2^p − 1) (L.F. Richardson & J.A. Gaunt, "The deferred approach to the limit",
+ * Phil. Trans. R. Soc. A 226 (1927) 299). Below the asymptotic order (ASYMPTOTIC_ORDER) or when a body's mean panel is
  * longer than its clearance to another outline, the estimate is widened to the whole change from the
  * coarsest level, max(|m_fine − m_coarsest|, |m_fine − m_coarse|), which brackets the true error there
  * (measured against Fritz's closed form for annulus gaps down to 1 %). Bounding p by 2 keeps the estimate
