@@ -6,6 +6,7 @@ import { describe, expect, test } from 'vitest';
 import { RHO, alone, solved } from './helpers';
 import { expectClose } from '../../helpers/expect-close';
 import type { SectionInput, SectionResult } from '../../../src/physics/section/index';
+import { MAX_TOTAL_PANELS } from '../../../src/physics/section/solve';
 
 /** Bracketing is the property claimed: estimate ≥ |reported − exact| (no tolerance: it either covers or not). */
 function expectBracketed(r: SectionResult, dof: number, exact: number, label: string): void {
@@ -131,6 +132,20 @@ describe('error estimate at the default resolution brackets the true error', () 
       const i = e.dof;
       expect(e.absoluteError, `dof ${i}`).toBeGreaterThanOrEqual(Math.abs(r.addedMass[i][i] - ref.addedMass[i][i]) + ref.errorEstimates[i].absoluteError);
     }
+  });
+
+  test('the default doubling never goes past the total panel limit: nine thin plates stay at 64 panels per body', () => {
+    // Nine plates of t/w = 1/500 take 128 panels each at the start (thin outlines get twice the nominal count):
+    // 1,152 in all; a doubling would need 2,304, more than MAX_TOTAL_PANELS (2,048), so it is not made.
+    const plates: SectionInput = {
+      liquidDensityKgPerM3: RHO,
+      bodies: Array.from({ length: 9 }, (_, k) => ({ shape: 'plate' as const, widthM: 0.3, thicknessM: 0.0006, centerM: [0.5 * (k % 3), 0.5 * Math.floor(k / 3)] as [number, number] })),
+    };
+    const r = solved(plates);
+    expect(r.panelsPerBody).toBe(64);
+    expect(r.panelsFine).toBeLessThanOrEqual(MAX_TOTAL_PANELS);
+    // It missed the target, and says so: the estimate is reported, not hidden.
+    expect(Math.max(...r.errorEstimates.filter((e) => e.motion !== 'rotation').map((e) => e.relativeError))).toBeGreaterThan(1e-3);
   });
 
   test('a given panelsPerBody is kept as it is (no doubling)', () => {
