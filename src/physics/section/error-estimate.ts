@@ -33,14 +33,21 @@ export interface LevelEstimate {
   extrapolate: Uint8Array;
 }
 
-export function estimateErrors(model: SectionModel, fine: LevelSolution, coarse: LevelSolution, coarsest: LevelSolution | null, rho: number): LevelEstimate {
+/** `clearance`: per body, from `bodyClearances(model)` (computed once per model by the caller when omitted here). */
+export function estimateErrors(
+  model: SectionModel,
+  fine: LevelSolution,
+  coarse: LevelSolution,
+  coarsest: LevelSolution | null,
+  rho: number,
+  clearance: readonly number[] = bodyClearances(model),
+): LevelEstimate {
   const K = model.refX.length;
   const m3 = 3 * K;
   const errorEstimates: ErrorEstimate[] = [];
   const orders = new Float64Array(m3);
   const extrapolate = new Uint8Array(m3);
   // Mean fine panel length per body against its clearance: panels longer than the gap are pre-asymptotic.
-  const clearance = bodyClearances(model);
   const panelLength = new Float64Array(K);
   const panelCount = new Float64Array(K);
   for (let j = 0; j < fine.panels.count; j++) {

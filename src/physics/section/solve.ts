@@ -30,6 +30,7 @@ import { buildPanels } from './panels';
 import { solveLevel, type LevelSolution } from './solve-level';
 import { symmetricEigenvalues } from '../linalg/jacobi-eigen';
 import { energyCheck } from './energy';
+import { bodyClearances } from './clearance';
 import { ASYMPTOTIC_ORDER, estimateErrors, worstRelativeError, type LevelEstimate } from './error-estimate';
 
 
@@ -150,13 +151,15 @@ function solveAt(input: SectionInput, N: number, doublings: number, options: Sol
   let coarse: LevelSolution | null = null;
   let coarsest: LevelSolution | null = null;
   let estimate: LevelEstimate | null = null;
+  let clearance: number[] | undefined;
   for (;;) {
     fine = level(factor);
     if (!fine) return failure('singular-system', singularColumn);
     if (options.skipErrorEstimate) break;
     coarse = level(factor / 2);
     coarsest = level(factor / 4);
-    estimate = coarse ? estimateErrors(model, fine, coarse, coarsest, rho) : null;
+    clearance ??= bodyClearances(model);
+    estimate = coarse ? estimateErrors(model, fine, coarse, coarsest, rho, clearance) : null;
     const misses = estimate !== null && worstRelativeError(estimate.errorEstimates, motions) > target;
     // Escalate only on a miss, within the cap, and never past the total panel limit.
     if (!misses || doublings === 0 || panelsAt(model, 2 * factor) > MAX_TOTAL_PANELS) break;
