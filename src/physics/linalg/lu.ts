@@ -2,7 +2,7 @@
  * LU factorisation with partial (row) pivoting of a dense square matrix, in place, row-major.
  *
  * Algorithm: right-looking Gaussian elimination with row pivoting (Golub & Van Loan, Matrix
- * Computations, Alg. 3.4.1), blocked from order BLOCKED_FROM on (§3.2.11); inner loops run along rows,
+ * Computations, Alg. 3.4.1), blocked from order BLOCKED_FROM on (same chapter, block LU); inner loops run along rows,
  * contiguous in row-major storage, or over packed blocks.
  *
  * After factoring, `a` holds U on and above the diagonal and the multipliers of L (unit diagonal) below;
@@ -43,7 +43,7 @@ const BLOCKED_FROM = 96;
 
 /**
  * Factors the matrix already stored in `f.lu`: blocked right-looking LU with partial pivoting (Golub & Van
- * Loan, Matrix Computations, §3.2.11, the block outer-product form). Per block of BLOCK columns: factor the
+ * Loan, Matrix Computations, ch. 3, block LU in outer-product form). Per block of BLOCK columns: factor the
  * panel (all rows below, the block's columns only, swapping whole rows), solve the block's rows of U with
  * the unit lower triangle, then update the trailing matrix A22 −= L21·U12 with U12 packed four columns at
  * a time and a 2-row × 4-column tile of sums kept in registers, so each element of A22 is read and written
