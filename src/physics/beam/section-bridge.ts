@@ -3,7 +3,7 @@
  * function type so tests and benchmarks can pass their own solver, and so the engine's unbounded
  * closed forms never depend on it.
  */
-import { solveSection } from '../section/index';
+import { solveSectionMemo } from '../section/memo';
 import type { BodySpec, BoundarySpec, SectionInput } from '../section/types';
 import type { MemberSection } from './model';
 import { shapeOf } from '../shapes/registry';
@@ -41,28 +41,34 @@ export const SECTION_PANELS_MAX = 256;
 export const SECTION_TOLERANCE = 5e-3;
 
 /**
- * Default solver: the section solver at 64 panels per body with its 32- and 16-panel companions, and
- * the sway added mass taken as their Richardson extrapolation. The panels double (up to 256 per body)
- * until the solver's error estimate, which brackets the true error (also for gaps narrower than the
- * panels), is below SECTION_TOLERANCE; whatever remains is returned so the member result can carry it into its
- * frequencies. A plate 2 mm from a wall, 0.3 m wide: Ca 15.4 at a fixed 64 panels, 17.77 here against a
- * converged 17.73. Input errors in the boundaries are re-thrown with the member's field path.
+ * Default solver: the section solver from 64 panels per body (with its 32- and 16-panel companions), the
+ * panels doubling (up to 256 per body, each doubling reusing the levels already solved) until the solver's
+ * error estimate of the sway term, which brackets the true error (also for gaps narrower than the panels),
+ * is below SECTION_TOLERANCE; the sway added mass is taken as the Richardson extrapolation and whatever
+ * error remains is returned so the member result can carry it into its frequencies. A plate 2 mm from a
+ * wall, 0.3 m wide: Ca 15.4 at a fixed 64 panels, 17.77 here against a converged 17.73.
+ *
+ * Solves go through the section memo (section/memo.ts): a keystroke that changes a field which does not
+ * change the section (length, E, a top mass) answers its section from memory. Input errors in the
+ * boundaries are re-thrown with the member's field path.
  */
 export const defaultSectionSolver: SectionSolver = (input) => {
-  for (let n = SECTION_PANELS; ; n *= 2) {
-    let out: ReturnType<typeof solveSection>;
-    try {
-      out = solveSection(input, { panelsPerBody: n });
-    } catch (e) {
-      const msg = e instanceof Error ? e.message : String(e);
-      throw new RangeError(`liquid.boundaries (section surroundings): ${msg}`);
-    }
-    if (!out.ok) return out;
-    const sway = out.result.errorEstimates.find((e) => e.body === 0 && e.motion === 'x');
-    const error = sway ? sway.relativeError : undefined;
-    if (error !== undefined && error > SECTION_TOLERANCE && 2 * n <= SECTION_PANELS_MAX) continue;
-    const addedMass = out.result.addedMass.map((row) => row.slice());
-    if (sway && Number.isFinite(sway.extrapolated) && sway.extrapolated > 0) addedMass[0][0] = sway.extrapolated;
-    return { ok: true, result: { addedMass, swayRelativeError: error, panelsPerBody: n } };
+  let out: ReturnType<typeof solveSectionMemo>;
+  try {
+    out = solveSectionMemo(input, {
+      startPanelsPerBody: SECTION_PANELS,
+      maxPanelsPerBody: SECTION_PANELS_MAX,
+      targetRelativeError: SECTION_TOLERANCE,
+      targetMotions: ['x'],
+    });
+  } catch (e) {
+    const msg = e instanceof Error ? e.message : String(e);
+    throw new RangeError(`liquid.boundaries (section surroundings): ${msg}`);
   }
+  if (!out.ok) return { ok: false, reason: out.reason, message: out.message };
+  const sway = out.result.errorEstimates.find((e) => e.body === 0 && e.motion === 'x');
+  const error = sway ? sway.relativeError : undefined;
+  const addedMass = out.result.addedMass.map((row) => row.slice());
+  if (sway && Number.isFinite(sway.extrapolated) && sway.extrapolated > 0) addedMass[0][0] = sway.extrapolated;
+  return { ok: true, result: { addedMass, swayRelativeError: error, panelsPerBody: out.result.panelsPerBody } };
 };

@@ -2,7 +2,8 @@
  * LU factorisation with partial (row) pivoting of a dense square matrix, in place, row-major.
  *
  * Algorithm: right-looking Gaussian elimination with row pivoting (Golub & Van Loan, Matrix
- * Computations, Alg. 3.4.1); inner loops run along rows, contiguous in row-major storage.
+ * Computations, Alg. 3.4.1), blocked from order BLOCKED_FROM on (same chapter, block LU); inner loops run along rows,
+ * contiguous in row-major storage, or over packed blocks.
  *
  * After factoring, `a` holds U on and above the diagonal and the multipliers of L (unit diagonal) below;
  * `perm[i]` is the original row now at position i.
@@ -35,14 +36,157 @@ export function luFactorInto(a: Float64Array | DenseMatrix, f: LuFactor, relTol 
   return luFactorInPlace(f, relTol);
 }
 
+/** Columns per block of the blocked factor (the packed block of U stays in the first-level cache). */
+const BLOCK = 32;
+/** Order from which the blocked factor is used (below it the unblocked one is as fast). */
+const BLOCKED_FROM = 96;
+
 /**
- * Factors the matrix already stored in `f.lu`. For each pivot column k the rows below are updated by
+ * Factors the matrix already stored in `f.lu`: blocked right-looking LU with partial pivoting (Golub & Van
+ * Loan, Matrix Computations, ch. 3, block LU in outer-product form). Per block of BLOCK columns: factor the
+ * panel (all rows below, the block's columns only, swapping whole rows), solve the block's rows of U with
+ * the unit lower triangle, then update the trailing matrix A22 −= L21·U12 with U12 packed four columns at
+ * a time and a 2-row × 4-column tile of sums kept in registers, so each element of A22 is read and written
+ * once per block instead of once per pivot. The pivots chosen are those of the unblocked form.
+ */
+export function luFactorInPlace(f: LuFactor, relTol = 1e-13): LuOutcome {
+  const { n, lu: a, perm } = f;
+  if (n < BLOCKED_FROM) return luFactorInPlaceUnblocked(f, relTol);
+  let scale = 0;
+  for (let i = 0; i < n * n; i++) {
+    const v = Math.abs(a[i]);
+    if (v > scale) scale = v;
+  }
+  const tiny = relTol * scale;
+  for (let i = 0; i < n; i++) perm[i] = i;
+  const packed = new Float64Array(BLOCK * (n + 4));
+  for (let k0 = 0; k0 < n; k0 += BLOCK) {
+    const k1 = Math.min(n, k0 + BLOCK);
+    // 1. Panel: unblocked elimination restricted to columns k0 … k1−1.
+    for (let k = k0; k < k1; k++) {
+      let p = k;
+      let big = Math.abs(a[k * n + k]);
+      for (let i = k + 1; i < n; i++) {
+        const v = Math.abs(a[i * n + k]);
+        if (v > big) {
+          big = v;
+          p = i;
+        }
+      }
+      if (!(big > tiny)) return { ok: false, reason: 'singular', column: k, pivot: big };
+      if (p !== k) {
+        const rk = k * n;
+        const rp = p * n;
+        for (let j = 0; j < n; j++) {
+          const t = a[rk + j];
+          a[rk + j] = a[rp + j];
+          a[rp + j] = t;
+        }
+        const t = perm[k];
+        perm[k] = perm[p];
+        perm[p] = t;
+      }
+      const rk = k * n;
+      const inv = 1 / a[rk + k];
+      for (let i = k + 1; i < n; i++) {
+        const r = i * n;
+        const l = (a[r + k] *= inv);
+        if (l === 0) continue;
+        for (let j = k + 1; j < k1; j++) a[r + j] -= l * a[rk + j];
+      }
+    }
+    if (k1 === n) break;
+    // 2. U12 = L11⁻¹ A12 (rows k0 … k1−1, columns k1 … n−1), row by row.
+    for (let r = k0 + 1; r < k1; r++) {
+      const rr = r * n;
+      for (let k = k0; k < r; k++) {
+        const l = a[rr + k];
+        if (l === 0) continue;
+        const rk = k * n;
+        for (let j = k1; j < n; j++) a[rr + j] -= l * a[rk + j];
+      }
+    }
+    // 3. Pack U12 by groups of four columns: packed[(g·nb + kk)·4 + c] = U[k0 + kk, k1 + 4g + c].
+    const nb = k1 - k0;
+    const cols = n - k1;
+    const groups = cols >> 2;
+    for (let g = 0; g < groups; g++) {
+      const base = g * nb * 4;
+      const j = k1 + 4 * g;
+      for (let kk = 0; kk < nb; kk++) {
+        const src = (k0 + kk) * n + j;
+        const dst = base + kk * 4;
+        packed[dst] = a[src];
+        packed[dst + 1] = a[src + 1];
+        packed[dst + 2] = a[src + 2];
+        packed[dst + 3] = a[src + 3];
+      }
+    }
+    const jTail = k1 + 4 * groups;
+    // 4. A22 −= L21 · U12.
+    let i = k1;
+    for (; i + 1 < n; i += 2) {
+      const r0 = i * n;
+      const r1 = r0 + n;
+      for (let g = 0; g < groups; g++) {
+        let s00 = 0, s01 = 0, s02 = 0, s03 = 0, s10 = 0, s11 = 0, s12 = 0, s13 = 0;
+        let q = g * nb * 4;
+        for (let k = k0; k < k1; k++, q += 4) {
+          const l0 = a[r0 + k];
+          const l1 = a[r1 + k];
+          const u0 = packed[q], u1 = packed[q + 1], u2 = packed[q + 2], u3 = packed[q + 3];
+          s00 += l0 * u0;
+          s01 += l0 * u1;
+          s02 += l0 * u2;
+          s03 += l0 * u3;
+          s10 += l1 * u0;
+          s11 += l1 * u1;
+          s12 += l1 * u2;
+          s13 += l1 * u3;
+        }
+        const j = k1 + 4 * g;
+        a[r0 + j] -= s00;
+        a[r0 + j + 1] -= s01;
+        a[r0 + j + 2] -= s02;
+        a[r0 + j + 3] -= s03;
+        a[r1 + j] -= s10;
+        a[r1 + j + 1] -= s11;
+        a[r1 + j + 2] -= s12;
+        a[r1 + j + 3] -= s13;
+      }
+      for (let j = jTail; j < n; j++) {
+        let s0 = 0, s1 = 0;
+        for (let k = k0; k < k1; k++) {
+          const u = a[k * n + j];
+          s0 += a[r0 + k] * u;
+          s1 += a[r1 + k] * u;
+        }
+        a[r0 + j] -= s0;
+        a[r1 + j] -= s1;
+      }
+    }
+    for (; i < n; i++) {
+      const r = i * n;
+      for (let j = k1; j < n; j++) {
+        let s0 = 0;
+        for (let k = k0; k < k1; k++) s0 += a[r + k] * a[k * n + j];
+        a[r + j] -= s0;
+      }
+    }
+  }
+  return { ok: true };
+}
+
+/**
+ * Unblocked factor of the matrix already stored in `f.lu` (the reference for the blocked one, and used
+ * below BLOCKED_FROM). For each pivot column k the rows below are updated by
  * `a[i, k+1:] −= l_ik · a[k, k+1:]`, a contiguous axpy in row-major storage; four rows are updated per
  * pass so that each pivot-row element is loaded once per four multiply-adds. (A blocked variant with a
  * 4-column trailing update measured no faster in V8 for n ≤ 800, where the matrix stays in cache:
- * ~3 GFlop/s either way, so the simple form is kept.)
+ * ~3 GFlop/s either way; the blocked form below gains by packing its block of U and accumulating a 2×4
+ * tile in registers instead.)
  */
-export function luFactorInPlace(f: LuFactor, relTol = 1e-13): LuOutcome {
+export function luFactorInPlaceUnblocked(f: LuFactor, relTol = 1e-13): LuOutcome {
   const { n, lu: a, perm } = f;
   let scale = 0;
   for (let i = 0; i < n * n; i++) {

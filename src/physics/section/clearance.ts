@@ -5,7 +5,7 @@
  */
 import { lineDistance } from './lines';
 import type { SectionModel } from './model';
-import { pointSegmentDistance, type Polygon } from './polygon';
+import type { Polygon } from './polygon';
 
 /** Edges per chunk of an outline; a chunk is skipped whole when its bounding box is farther than the best gap. */
 const CHUNK = 16;
@@ -26,21 +26,30 @@ function polygonGap(p: Polygon, q: Polygon, best: number): number {
     }
     box.set([x0, y0, x1, y1], 4 * c);
   }
-  let out = best;
+  // Squared distances throughout (Math.hypot is slow in V8 and the comparisons need no square root).
+  let out2 = best * best;
   for (let i = 0; i < p.length; i += 2) {
     const x = p[i];
     const y = p[i + 1];
     for (let c = 0; c < chunks; c++) {
       const dx = Math.max(box[4 * c] - x, 0, x - box[4 * c + 2]);
       const dy = Math.max(box[4 * c + 1] - y, 0, y - box[4 * c + 3]);
-      if (Math.hypot(dx, dy) >= out) continue;
+      if (dx * dx + dy * dy >= out2) continue;
       const end = Math.min(m, (c + 1) * CHUNK);
       for (let e = c * CHUNK; e < end; e++) {
         const k1 = (e + 1) % m;
-        out = Math.min(out, pointSegmentDistance(x, y, q[2 * e], q[2 * e + 1], q[2 * k1], q[2 * k1 + 1]));
+        const ax = q[2 * e], ay = q[2 * e + 1];
+        const ex = q[2 * k1] - ax, ey = q[2 * k1 + 1] - ay;
+        const l2 = ex * ex + ey * ey;
+        let t = l2 > 0 ? ((x - ax) * ex + (y - ay) * ey) / l2 : 0;
+        t = t < 0 ? 0 : t > 1 ? 1 : t;
+        const rx = x - ax - t * ex, ry = y - ay - t * ey;
+        const d2 = rx * rx + ry * ry;
+        if (d2 < out2) out2 = d2;
       }
     }
   }
+  const out = Math.sqrt(out2);
   return out;
 }
 

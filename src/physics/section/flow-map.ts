@@ -4,7 +4,7 @@
  */
 import type { SectionDof, SectionInput, SolveOptions } from './types';
 import { evaluatePointInto, fieldContext, inLiquid, zeroLines } from './field-eval';
-import { solveSectionDetailed } from './solve';
+import { DEFAULT_MAX_PANELS_PER_BODY, solveSectionDetailed } from './solve';
 
 /** A rectangular grid of points: nx × ny points from (x0, y0) to (x1, y1) inclusive, row by row (y outer). */
 export interface FlowFieldGrid {
@@ -49,7 +49,11 @@ export function flowFieldInto(
   }
   if (speed.length < nx * ny) throw new RangeError(`speed must hold nx·ny = ${nx * ny} values, got ${speed.length}`);
   if (potential && potential.length < nx * ny) throw new RangeError(`potential must hold nx·ny = ${nx * ny} values, got ${potential.length}`);
-  const solved = solveSectionDetailed(input, { ...options, skipErrorEstimate: true });
+  // The field is drawn from the finest level itself (no extrapolation of a field), so without a given
+  // resolution it uses the default's cap (128 per body) rather than its 64-panel start: ~1e-5 of U at a
+  // radius from a circle's outline instead of ~2e-3.
+  const panelsPerBody = options.panelsPerBody ?? input.panelsPerBody ?? DEFAULT_MAX_PANELS_PER_BODY;
+  const solved = solveSectionDetailed(input, { ...options, panelsPerBody, skipErrorEstimate: true });
   if (!solved.outcome.ok || !solved.model || !solved.fine) {
     return solved.outcome.ok ? { ok: false, reason: 'non-finite-result', message: 'no solution' } : solved.outcome;
   }

@@ -8,6 +8,7 @@
  */
 export type * from './types';
 export { solveSection, solveSectionDetailed, DEFAULT_PANELS_PER_BODY, type SolvedSection } from './solve';
+export { solveSectionMemo, clearSectionMemo, MEMO_ENTRIES } from './memo';
 export { parseSectionInput } from './parse';
 export { validateSectionInput } from './validate';
 export { flowFieldInto, flowField, type FlowFieldGrid, type FlowFieldResult } from './flow-map';

@@ -41,9 +41,18 @@ export interface SectionInput {
 export interface SolveOptions {
   /**
    * Nominal panels per body at the finest resolution (overrides `SectionInput.panelsPerBody`), 16–1024; thin
-   * bodies get up to twice as many. Default 128.
+   * bodies get up to twice as many. Fixed when given; absent, the solver starts at `startPanelsPerBody` and
+   * doubles up to `maxPanelsPerBody` while the estimate misses `targetRelativeError` (solve.ts).
    */
   panelsPerBody?: number;
+  /** Starting panels per body of the default (adaptive) resolution. Default 64 (DEFAULT_PANELS_PER_BODY). */
+  startPanelsPerBody?: number;
+  /** Most panels per body the default resolution doubles up to. Default 128 (DEFAULT_MAX_PANELS_PER_BODY). */
+  maxPanelsPerBody?: number;
+  /** Largest estimated relative error of the target motions' diagonal terms that stops the doubling. Default 1e-3. */
+  targetRelativeError?: number;
+  /** Motions whose diagonal terms the target applies to (every body). Default ['x', 'y']. */
+  targetMotions?: SectionDof[];
   /**
    * Report Richardson-extrapolated values where the three levels are in the asymptotic range (default true);
    * false reports the finest level's values (studies of the discretisation itself).
@@ -139,6 +148,8 @@ export interface SectionResult {
   /** Panel counts at the finest (N) and the N/2 resolution (all boundaries). */
   panelsFine: number;
   panelsCoarse: number;
+  /** Nominal panels per body at the finest level actually solved (after any default doubling). */
+  panelsPerBody?: number;
   /** How the straight boundaries were treated and other method notes. */
   notes: string[];
 }
