@@ -6,8 +6,9 @@ import { parseHash } from './ui/shell/router';
 
 /**
  * The worker, the device store and the first case start before the UI mounts (see early-boot.ts). The UI mounts
- * once the first case is open, so its first paint is the screen that case opens on (already solving) rather than
- * a moment of the Cases list; a store slow to open delays that first paint by at most MOUNT_WAIT_MS.
+ * once the first case is open (its solve already under way), so the first paint is the screen that case opens on,
+ * drawn once with the store in hand, rather than a moment of the Cases list drawn and then redrawn; a store slow
+ * to open holds the first paint back by at most MOUNT_WAIT_MS.
  */
 const MOUNT_WAIT_MS = 400;
 

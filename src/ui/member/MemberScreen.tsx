@@ -96,8 +96,8 @@ export function MemberScreen() {
         </div>
         <aside class="member-side">
           <QuickResults state={state} stale={stale} />
-          {build && build.engine === 'plate' && <PlateSchematic plate={build.plate} lengthUnit={lengthUnit} />}
-          {build && build.engine !== 'plate' && (
+          {formShown && build && build.engine === 'plate' && <PlateSchematic plate={build.plate} lengthUnit={lengthUnit} />}
+          {formShown && build && build.engine !== 'plate' && (
             <figure class={`panel schematic${stale ? ' stale' : ''}`}>
               <MemberPlot model={build.model} landmarks={build.landmarks} title={`${form.title} schematic, to scale`} widthPx={280} heightPx={380} />
               <figcaption>

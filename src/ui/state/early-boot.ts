@@ -27,6 +27,8 @@ export interface Boot {
   services: BootServices;
   /** Settles (never rejects) once the store is open (or known unavailable) and the first case, if any, is open. */
   outcome: Promise<BootOutcome>;
+  /** The outcome once settled (null before): a UI mounted after it starts with the store and renders once. */
+  settled: BootOutcome | null;
 }
 
 let boot: Boot | null = null;
@@ -36,35 +38,37 @@ export function bootOnce(openingLink: boolean): Boot {
   if (boot) return boot;
   const sectionSolver = createSectionSolver();
   const services: BootServices = { model: createModel(), section: createSectionModel(sectionSolver), sectionSolver };
-  const { model } = services;
-  const outcome = (async (): Promise<BootOutcome> => {
-    const { tab, opened } = await openDeviceStoreOnce();
-    const store = opened.store;
-    try {
-      if (store) {
-        await mergeFallbacks(store, readFallbacks(), clearFallback);
-        model.setDraftSink({
-          saveDraft: async (c, baseRevision, received) => {
-            const r = await store.saveDraft(c, baseRevision, received);
-            return r.ok ? { ok: true } : { ok: false, message: r.message };
-          },
-        });
-        followStoreChanges(store, model); // for the page's life, as the model is
-      }
-      if (!openingLink && !model.get().doc) {
-        const first = await firstCase(store, tab.fresh, await openTabs(), lastOpenCase(tab.fresh));
-        if (first) {
-          model.open(first.doc, first.mode, first.saved, first.baseRevision);
-          // A first start (or a return to unsaved work) lands on the form, not an empty list.
-          if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = first.mode === 'received' ? '#/results' : '#/member';
-        }
-      }
-    } catch (e) {
-      // Never let a case stop the app from starting: the store and the Cases screen open regardless.
-      console.error('Wetmode could not reopen the last case:', e);
+  const made: Boot = { services, settled: null, outcome: openFirstCase(services.model, openingLink).then((o) => (made.settled = o)) };
+  boot = made;
+  return made;
+}
+
+/** Opens the store, merges the localStorage draft copies, and opens the first case in the model. Never rejects. */
+async function openFirstCase(model: BootServices['model'], openingLink: boolean): Promise<BootOutcome> {
+  const { tab, opened } = await openDeviceStoreOnce();
+  const store = opened.store;
+  try {
+    if (store) {
+      await mergeFallbacks(store, readFallbacks(), clearFallback);
+      model.setDraftSink({
+        saveDraft: async (c, baseRevision, received) => {
+          const r = await store.saveDraft(c, baseRevision, received);
+          return r.ok ? { ok: true } : { ok: false, message: r.message };
+        },
+      });
+      followStoreChanges(store, model); // for the page's life, as the model is
     }
-    return { tab, store, storeMessage: opened.message, storeRetryable: opened.retryable };
-  })();
-  boot = { services, outcome };
-  return boot;
+    if (!openingLink && !model.get().doc) {
+      const first = await firstCase(store, tab.fresh, await openTabs(), lastOpenCase(tab.fresh));
+      if (first) {
+        model.open(first.doc, first.mode, first.saved, first.baseRevision);
+        // A first start (or a return to unsaved work) lands on the form, not an empty list.
+        if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = first.mode === 'received' ? '#/results' : '#/member';
+      }
+    }
+  } catch (e) {
+    // Never let a case stop the app from starting: the store and the Cases screen open regardless.
+    console.error('Wetmode could not reopen the last case:', e);
+  }
+  return { tab, store, storeMessage: opened.message, storeRetryable: opened.retryable };
 }

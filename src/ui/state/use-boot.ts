@@ -13,14 +13,20 @@ import { rememberOpenCase } from './last-case';
  * draft-fallback.ts).
  */
 export function useBoot(openingLink: boolean): AppServices {
-  const [services, setServices] = useState<AppServices>(() => ({ ...bootOnce(openingLink).services, store: null, storeMessage: null }));
+  const [services, setServices] = useState<AppServices>(() => {
+    const { services: made, settled } = bootOnce(openingLink);
+    return settled ? { ...made, store: settled.store, storeMessage: settled.storeMessage, storeRetryable: settled.storeRetryable } : { ...made, store: null, storeMessage: null };
+  });
   useEffect(() => {
     let cancelled = false;
     const { model, section, sectionSolver } = services;
     let tab = tabIdentity();
-    void bootOnce(openingLink).outcome.then((o) => {
+    const started = bootOnce(openingLink);
+    const mountedAfterBoot = started.settled !== null;
+    void started.outcome.then((o) => {
       tab = o.tab;
-      if (!cancelled) setServices({ model, section, sectionSolver, store: o.store, storeMessage: o.storeMessage, storeRetryable: o.storeRetryable });
+      // Mounted after the boot: the first render already had the store; another would redraw every screen for nothing.
+      if (!cancelled && !mountedAfterBoot) setServices({ model, section, sectionSolver, store: o.store, storeMessage: o.storeMessage, storeRetryable: o.storeRetryable });
     });
     // Remember the open case (saved or not) so the next start reopens it; a received case is not the user's own.
     let lastId: string | null | undefined;
