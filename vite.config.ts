@@ -2,7 +2,7 @@ import { defineConfig, type Plugin } from 'vite';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import pkg from './package.json' with { type: 'json' };
-import { unitReaderOnDemand } from './build/unit-reader-on-demand';
+import { unitReaderOnDemand } from './build/unit-reader-on-demand.ts';
 
 // Colours of the daylight theme: a deep harbour blue on near-white, chosen for contrast in sun.
 const themeColour = '#0b3d5c';

@@ -1,8 +1,17 @@
 import { render } from 'preact';
 import { App } from './ui/App';
 import './ui/styles.css';
-import { openDeviceStoreOnce } from './ui/state/early-store';
+import { bootOnce } from './ui/state/early-boot';
+import { parseHash } from './ui/shell/router';
 
-void openDeviceStoreOnce(); // under way while the first paint is made
+/**
+ * The worker, the device store and the first case start before the UI mounts (see early-boot.ts). The UI mounts
+ * once the first case is open (its solve already under way), so the first paint is the screen that case opens on,
+ * drawn once with the store in hand, rather than a moment of the Cases list drawn and then redrawn; a store slow
+ * to open holds the first paint back by at most MOUNT_WAIT_MS.
+ */
+const MOUNT_WAIT_MS = 400;
 
-render(<App />, document.getElementById('app')!);
+const boot = bootOnce(parseHash(location.hash).screen === 'open');
+const mount = () => render(<App />, document.getElementById('app')!);
+void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);

@@ -9,10 +9,10 @@
 import type { MemberBuild } from '../kinds/common/types';
 import type { Case } from '../case';
 import { readExcitation } from '../forms/excitation';
-import { type FormRange, readRanges, valuesAt } from '../forms/ranges';
+import { type FormRange, valuesAt } from '../forms/ranges';
+import { readCaseRanges } from './case-ranges';
 import type { FieldErrors } from '../forms/types';
 import { kindOf } from '../kinds/registry';
-import { rangesOf } from '../kinds/ranges-registry';
 import type { MemberModel } from '../physics/beam/model';
 import type { CaseExcitation } from '../physics/excitation/from-member';
 import { type BandResult, type BandVerdict, parametricBand, screenBand } from '../physics/uncertain';
@@ -50,12 +50,6 @@ export type BandAnswer =
 
 function message(e: unknown): string {
   return e instanceof Error ? e.message : String(e);
-}
-
-/** The ranges of a case as read (SI), or messages by field key naming the field in the user's units. */
-export function readCaseRanges(c: BandCase): { ok: true; ranges: FormRange[] } | { ok: false; errors: FieldErrors } {
-  const form = kindOf(c.kind).form;
-  return readRanges(form.fields, rangesOf(c.kind), c.inputs, c.ranges, c.unitSystem);
 }
 
 export function bandCase(c: BandCase, now: () => number = () => performance.now()): BandAnswer {

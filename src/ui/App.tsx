@@ -1,7 +1,7 @@
 import { useEffect, useState } from 'preact/hooks';
 import { NavBar } from './shell/NavBar';
 import { CautionLine } from './shell/CautionLine';
-import { UpdatePrompt } from './shell/UpdatePrompt';
+import { UpdatePromptLater } from './shell/UpdatePromptLater';
 import { useRoute } from './shell/use-route';
 import { applyTheme, loadTheme, type Theme } from './shell/theme';
 import { CautionsScreen } from './screens/CautionsScreen';
@@ -48,7 +48,7 @@ export function App() {
       <button type="button" class="skip" onClick={() => document.getElementById('main')?.focus()}>Skip to content</button>
       <NavBar current={route.screen} theme={theme} onTheme={setTheme} />
       <CautionLine />
-      <UpdatePrompt />
+      <UpdatePromptLater model={services.model} />
       <main id="main" tabIndex={-1}>
         <AppServicesProvider value={services}>
           <ConflictPrompt />

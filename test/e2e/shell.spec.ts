@@ -29,6 +29,7 @@ for (const size of TABLET_SIZES) {
 test('every touch target in the navigation is at least 44 px high and wide', async ({ page }) => {
   await page.goto('/');
   const targets = page.locator('.topbar a, .topbar button, .caution-line a');
+  await expect(page.locator('.caution-line a').first()).toBeVisible(); // the app mounts once its first case is open
   const n = await targets.count();
   expect(n).toBeGreaterThanOrEqual(6);
   for (let i = 0; i < n; i++) {

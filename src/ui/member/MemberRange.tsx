@@ -1,6 +1,6 @@
 import type { Case } from '../../case';
 import type { FieldDef } from '../../forms';
-import { readCaseRanges } from '../../app/band-case';
+import { readCaseRanges } from '../../app/case-ranges';
 import type { AppModel } from '../state/app-model';
 import { useState } from 'preact/hooks';
 import { RangeRow } from './RangeRow';

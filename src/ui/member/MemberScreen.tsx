@@ -15,10 +15,12 @@ import { MemberRange } from './MemberRange';
 import { RangesBar } from './RangesBar';
 import { DefaultMark } from './RestsOnDefaults';
 import { SiteEvidence } from './SiteEvidence';
+import { useAnswerFirst } from './use-answer-first';
 
 /** The guided form of the open case's member kind, its resonance inputs, a live schematic and the answer. */
 export function MemberScreen() {
   const [state, model] = useModel();
+  const formShown = useAnswerFirst(state);
   const doc = state.doc;
   if (!doc) {
     return (
@@ -43,54 +45,59 @@ export function MemberScreen() {
       <MemberToolbar state={state} model={model} />
       <div class="member-layout">
         <div class="member-form">
-          <fieldset disabled={received}>
-            <legend>Member</legend>
-            <FieldList
-              fields={form.fields}
-              values={doc.inputs}
-              system={doc.unitSystem}
-              errors={state.errors}
-              warnings={state.warnings}
-              placeholderOf={(k) => placeholderOf(form, k, doc.inputs, doc.unitSystem)}
-              onInput={(k, t) => model.setField(k, t)}
-              idPrefix="m"
-              moreLabel="More member details"
-              after={(f) => (
-                <>
-                  <DefaultMark doc={doc} fieldKey={f.key} />
-                  <MemberRange field={f} doc={doc} model={model} disabled={received} />
-                </>
-              )}
-            />
-            <RangesBar doc={doc} model={model} disabled={received} />
-          </fieldset>
-          <fieldset disabled={received}>
-            <legend>What can drive it</legend>
-            <FieldList
-              fields={kindOf(doc.kind).resonance.fields}
-              values={doc.excitation}
-              system={doc.unitSystem}
-              errors={state.excitationErrors}
-              warnings={state.warnings}
-              placeholderOf={(k) => kindOf(doc.kind).resonance.fields.find((f) => f.key === k)?.emptyMeans ?? ''}
-              onInput={(k, t) => model.setExcitation(k, t)}
-              idPrefix="x"
-              moreLabel="More resonance settings"
-            />
-          </fieldset>
-          <fieldset disabled={received}>
-            <legend>Case</legend>
-            <CaseDetails doc={doc} model={model} readOnly={received} />
-          </fieldset>
-          <fieldset>
-            <legend>Site evidence</legend>
-            <SiteEvidence caseId={doc.id} readOnly={received} />
-          </fieldset>
+          {!formShown && <p class="loading-screen" role="status">Opening the form…</p>}
+          {formShown && (
+            <>
+              <fieldset disabled={received}>
+                <legend>Member</legend>
+                <FieldList
+                  fields={form.fields}
+                  values={doc.inputs}
+                  system={doc.unitSystem}
+                  errors={state.errors}
+                  warnings={state.warnings}
+                  placeholderOf={(k) => placeholderOf(form, k, doc.inputs, doc.unitSystem)}
+                  onInput={(k, t) => model.setField(k, t)}
+                  idPrefix="m"
+                  moreLabel="More member details"
+                  after={(f) => (
+                    <>
+                      <DefaultMark doc={doc} fieldKey={f.key} />
+                      <MemberRange field={f} doc={doc} model={model} disabled={received} />
+                    </>
+                  )}
+                />
+                <RangesBar doc={doc} model={model} disabled={received} />
+              </fieldset>
+              <fieldset disabled={received}>
+                <legend>What can drive it</legend>
+                <FieldList
+                  fields={kindOf(doc.kind).resonance.fields}
+                  values={doc.excitation}
+                  system={doc.unitSystem}
+                  errors={state.excitationErrors}
+                  warnings={state.warnings}
+                  placeholderOf={(k) => kindOf(doc.kind).resonance.fields.find((f) => f.key === k)?.emptyMeans ?? ''}
+                  onInput={(k, t) => model.setExcitation(k, t)}
+                  idPrefix="x"
+                  moreLabel="More resonance settings"
+                />
+              </fieldset>
+              <fieldset disabled={received}>
+                <legend>Case</legend>
+                <CaseDetails doc={doc} model={model} readOnly={received} />
+              </fieldset>
+              <fieldset>
+                <legend>Site evidence</legend>
+                <SiteEvidence caseId={doc.id} readOnly={received} />
+              </fieldset>
+            </>
+          )}
         </div>
         <aside class="member-side">
           <QuickResults state={state} stale={stale} />
-          {build && build.engine === 'plate' && <PlateSchematic plate={build.plate} lengthUnit={lengthUnit} />}
-          {build && build.engine !== 'plate' && (
+          {formShown && build && build.engine === 'plate' && <PlateSchematic plate={build.plate} lengthUnit={lengthUnit} />}
+          {formShown && build && build.engine !== 'plate' && (
             <figure class={`panel schematic${stale ? ' stale' : ''}`}>
               <MemberPlot model={build.model} landmarks={build.landmarks} title={`${form.title} schematic, to scale`} widthPx={280} heightPx={380} />
               <figcaption>

@@ -3,6 +3,7 @@
  * reader (mathjs); the Member screen (the first paint) reads plain entries without it, and the Cases list,
  * shown for a moment while a fresh start opens the demo, needs none.
  */
+import { useEffect, useState } from 'preact/hooks';
 import { loadUnitReader } from '../../units/math-on-demand';
 import { lazyScreen } from '../shell/lazy-screen';
 import { parseHash } from '../shell/router';
@@ -27,9 +28,25 @@ export function CasesScreen() {
 export const ResultsWithActions = lazyScreen('Results', () => withUnits(import('./ResultsWithActions')).then((m) => m.ResultsWithActions));
 export const ReportScreen = lazyScreen('Report', () => withUnits(import('./ReportScreen')).then((m) => m.ReportScreen));
 const LazySection = lazyScreen<{ model: SectionModel }>('Section', () => withUnits(import('../section/SectionScreen')).then((m) => m.SectionScreen));
-/** The Section view on the page's one section model (created at boot, so a member can hand its section over). */
+/** The Section view on the page's one section model (made on first use; a member may have been handed to it first). */
 export function SectionScreen() {
-  return <LazySection model={useServices().section} />;
+  const { section } = useServices();
+  const [model, setModel] = useState(section.current());
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    if (model) return;
+    let live = true;
+    section.get().then(
+      (m) => live && setModel(m),
+      (e: unknown) => live && setError(e instanceof Error ? e.message : String(e)),
+    );
+    return () => {
+      live = false;
+    };
+  }, [section, model]);
+  if (error) return <p class="notice" role="alert">The Section screen could not be loaded ({error}). Reload the page to try again.</p>;
+  if (!model) return <p class="loading-screen" role="status">Loading the Section screen…</p>;
+  return <LazySection model={model} />;
 }
 export const OpenLinkScreen = lazyScreen<{ payload: string }>('shared case', () => withUnits(import('./OpenLinkScreen')).then((m) => m.OpenLinkScreen));
 /** The Field check: a measured frequency against the predictions, and back-calculation of one unknown. */

@@ -2,14 +2,14 @@ import { createContext, type ComponentChildren } from 'preact';
 import { useContext, useEffect, useState } from 'preact/hooks';
 import type { CaseStore } from '../../store';
 import type { AppModel, ModelState } from './app-model';
-import type { SectionModel } from '../section/section-model';
+import type { SectionModelOnDemand } from '../section/section-model-on-demand';
 import type { SectionSolver } from '../section/section-solves';
 
 /** What the whole app shares: the open-case model and the device store (null until opened, or if unavailable). */
 export interface AppServices {
   model: AppModel;
   /** The Section screen's model (kept for the page's life, so a visit to another screen loses nothing). */
-  section: SectionModel;
+  section: SectionModelOnDemand;
   /** The page's section worker, for views that solve a section of their own (the Results screen's panel). */
   sectionSolver: SectionSolver;
   /** The device store once open; null while opening or when storage is unavailable (see storeMessage). */

@@ -8,6 +8,7 @@ import { readCase, type CaseReading } from '../../app/read-case';
 import { loadUnitReader, unitReaderLoaded } from '../../units/math-on-demand';
 import { isUnitReaderPending } from '../../units/reader-pending';
 import type { AppModel } from './app-model';
+import { afterFirstAnswer } from './after-first-answer';
 
 /**
  * The reading of `doc`, or null while mathjs loads; `again` runs once it has (`failed` if it cannot be
@@ -27,15 +28,9 @@ export function readCaseOnDemand(
   }
 }
 
-/** Fetches mathjs when the page is idle after the model's first answer (or solver message), ready for the first edit. */
+/** Fetches mathjs once the first answer is on screen (see after-first-answer.ts), ready for the first edit. */
 export function loadUnitReaderAfterFirstAnswer(model: Pick<AppModel, 'get' | 'subscribe'>): void {
-  const off = model.subscribe(() => {
-    const { results, solverMessage } = model.get();
-    if (!results && !solverMessage) return;
-    off();
-    if (unitReaderLoaded()) return;
-    const load = () => void loadUnitReader().catch(() => undefined); // a failure here is retried on first need
-    if (typeof requestIdleCallback === 'function') requestIdleCallback(load, { timeout: 2000 });
-    else setTimeout(load, 200);
+  afterFirstAnswer(model, () => {
+    if (!unitReaderLoaded()) void loadUnitReader().catch(() => undefined); // a failure here is retried on first need
   });
 }

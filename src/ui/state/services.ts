@@ -10,7 +10,7 @@ import { caseFromDemo } from '../../app/create-case';
 import { sameCaseContent, type Case } from '../../case';
 import { AppModel } from './app-model';
 import type { SectionAnswer, SectionRequest } from '../../app/solve-section';
-import { SectionModel } from '../section/section-model';
+import { sectionModelOnDemand, type SectionModelOnDemand } from '../section/section-model-on-demand';
 import type { SectionSolver } from '../section/section-solves';
 import { DEMO_CASES } from '../../kinds/registry';
 import { loadUnitReaderAfterFirstAnswer } from './read-on-demand';
@@ -36,9 +36,9 @@ export function createSectionSolver(): SectionSolver {
   );
 }
 
-/** The Section screen's model on the page's section worker. */
-export function createSectionModel(solver: SectionSolver): SectionModel {
-  return new SectionModel(solver);
+/** The Section screen's model on the page's section worker, made on first use (see section-model-on-demand.ts). */
+export function createSectionModel(solver: SectionSolver): SectionModelOnDemand {
+  return sectionModelOnDemand(solver);
 }
 
 

@@ -1,64 +1,36 @@
 import { useEffect, useState } from 'preact/hooks';
 import { onBeforeUpdate } from '../shell/before-update';
 import type { AppServices } from './context';
-import { clearFallback, readFallbacks, writeFallback } from './draft-fallback';
-import { followStoreChanges } from './remote-changes';
-import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks } from './services';
-import { openTabs, tabIdentity } from './tab';
-import { openDeviceStoreOnce } from './early-store';
-import { lastOpenCase, rememberOpenCase } from './last-case';
+import { writeFallback } from './draft-fallback';
+import { bootOnce } from './early-boot';
+import { tabIdentity } from './tab';
+import { rememberOpenCase } from './last-case';
 
 /**
- * Creates the services once, opens the device store, and opens the first case (this tab's draft, a closed tab's
- * draft in a new tab, or the demo on a fresh device) unless the page was opened from a shared link. Whatever
- * fails on the way, the store and the Cases screen still open. Drafts are flushed before an app update and when
- * the page is hidden; a synchronous copy goes to localStorage as the page goes away (see draft-fallback.ts).
+ * Takes over the page's boot (early-boot.ts: worker, device store, first case, started before the UI mounted)
+ * and publishes the store once it is open. Remembers the open case for the next start. Drafts are flushed before
+ * an app update and when the page is hidden; a synchronous copy goes to localStorage as the page goes away (see
+ * draft-fallback.ts).
  */
 export function useBoot(openingLink: boolean): AppServices {
   const [services, setServices] = useState<AppServices>(() => {
-    const sectionSolver = createSectionSolver();
-    return { model: createModel(), section: createSectionModel(sectionSolver), sectionSolver, store: null, storeMessage: null };
+    const { services: made, settled } = bootOnce(openingLink);
+    return settled ? { ...made, store: settled.store, storeMessage: settled.storeMessage, storeRetryable: settled.storeRetryable } : { ...made, store: null, storeMessage: null };
   });
   useEffect(() => {
     let cancelled = false;
-    let unfollow = () => {};
     const { model, section, sectionSolver } = services;
     let tab = tabIdentity();
-    void (async () => {
-      const early = await openDeviceStoreOnce();
-      tab = early.tab;
-      const opened = early.opened;
-      if (cancelled) return;
-      const store = opened.store;
-      try {
-        if (store) {
-          await mergeFallbacks(store, readFallbacks(), clearFallback);
-          model.setDraftSink({
-            saveDraft: async (c, baseRevision, received) => {
-              const r = await store.saveDraft(c, baseRevision, received);
-              return r.ok ? { ok: true } : { ok: false, message: r.message };
-            },
-          });
-          unfollow = followStoreChanges(store, model);
-        }
-        if (!openingLink && !model.get().doc) {
-          const first = await firstCase(store, tab.fresh, await openTabs(), lastOpenCase(tab.fresh));
-          if (first && !cancelled) {
-            model.open(first.doc, first.mode, first.saved, first.baseRevision);
-            // A first start (or a return to unsaved work) lands on the form, not an empty list.
-            if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = first.mode === 'received' ? '#/results' : '#/member';
-          }
-        }
-      } catch (e) {
-        // Never let a case stop the app from starting: the store and the Cases screen open regardless.
-        console.error('Wetmode could not reopen the last case:', e);
-      } finally {
-        if (!cancelled) setServices({ model, section, sectionSolver, store, storeMessage: opened.message, storeRetryable: opened.retryable });
-      }
-    })();
+    const started = bootOnce(openingLink);
+    const mountedAfterBoot = started.settled !== null;
+    void started.outcome.then((o) => {
+      tab = o.tab;
+      // Mounted after the boot: the first render already had the store; another would redraw every screen for nothing.
+      if (!cancelled && !mountedAfterBoot) setServices({ model, section, sectionSolver, store: o.store, storeMessage: o.storeMessage, storeRetryable: o.storeRetryable });
+    });
     // Remember the open case (saved or not) so the next start reopens it; a received case is not the user's own.
     let lastId: string | null | undefined;
-    const unremember = model.subscribe(() => {
+    const remember = () => {
       const { doc, mode } = model.get();
       if (!doc && lastId === undefined) return; // nothing opened yet this start: keep what the last start left
       const id = doc && mode === 'editing' ? doc.id : doc ? lastId ?? null : null;
@@ -66,7 +38,9 @@ export function useBoot(openingLink: boolean): AppServices {
         lastId = id;
         rememberOpenCase(id);
       }
-    });
+    };
+    const unremember = model.subscribe(remember);
+    remember(); // the boot may have opened the first case already
     const offUpdate = onBeforeUpdate(() => model.flushDraft({ everyCase: true }));
     // Synchronous: an IndexedDB write started here may never commit before the page is gone.
     const keepCopy = () => {
@@ -87,7 +61,6 @@ export function useBoot(openingLink: boolean): AppServices {
     addEventListener('pagehide', onPageHide);
     return () => {
       cancelled = true;
-      unfollow();
       unremember();
       offUpdate();
       document.removeEventListener('visibilitychange', onHide);
