@@ -8,7 +8,7 @@
  * library needed) and read by jsQR.
  */
 import { test, expect, type Page } from '@playwright/test';
-import jsQR from 'jsqr';
+import { createRequire } from 'node:module';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { cautionsFor } from '../../src/text/cautions';
 
@@ -32,25 +32,28 @@ const squash = (s: string): string => s.toLowerCase().replace(/[\s\u00ad]+/g, ''
 
 /**
  * Decodes the QR symbol as printed: the report's SVG drawn by the browser at a whole number of pixels per module
- * (a screenshot at screen resolution blurs the modules of a long link), read by jsQR.
+ * (a screenshot at screen resolution blurs the modules of a long link), read by jsQR loaded into that blank page,
+ * so only the decoded text comes back.
  */
 async function decodeQr(page: Page, svg: string): Promise<string | null> {
   const blank = await page.context().newPage();
-  const pixels = await blank.evaluate(async (markup) => {
+  await blank.addScriptTag({ path: createRequire(import.meta.url).resolve('jsqr') });
+  const text = await blank.evaluate(async (markup) => {
     const img = new Image();
     img.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(markup)}`;
     await img.decode();
-    const side = Number(/viewBox="0 0 (\d+)/.exec(markup)?.[1] ?? 100) * 8;
+    const side = Number(/viewBox="0 0 (\d+)/.exec(markup)?.[1] ?? 100) * 6;
     const c = document.createElement('canvas');
     c.width = side;
     c.height = side;
     const ctx = c.getContext('2d')!;
     ctx.imageSmoothingEnabled = false;
     ctx.drawImage(img, 0, 0, side, side);
-    return { w: side, h: side, data: Array.from(ctx.getImageData(0, 0, side, side).data) };
+    const decode = (window as unknown as { jsQR: (d: Uint8ClampedArray, w: number, h: number) => { data: string } | null }).jsQR;
+    return decode(ctx.getImageData(0, 0, side, side).data, side, side)?.data ?? null;
   }, svg);
   await blank.close();
-  return jsQR(Uint8ClampedArray.from(pixels.data), pixels.w, pixels.h)?.data ?? null;
+  return text;
 }
 
 test.describe('printed record of each demo case', () => {
