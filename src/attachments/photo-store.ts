@@ -1,7 +1,8 @@
 /**
  * Site evidence kept on the device beside a case: photos (downscaled JPEG data URLs) and an optional location.
  * A small database of its own ('wetmode-attachments'), keyed by case id, so the case store's schema and version
- * ladder are untouched. Not in the case link (far too large) nor in the case file (see the Member screen note).
+ * ladder are untouched. Not in the case link (far too large); an exported case file carries them beside the case
+ * (src/share/site-evidence.ts, src/attachments/evidence-io.ts).
  * Every call resolves; a browser without IndexedDB keeps nothing and says so through `ok: false`.
  */
 import { openDB, type IDBPDatabase } from 'idb';

@@ -9,6 +9,7 @@
  */
 export { decodeCaseLink, decodeCasePayload, encodeCaseLink, encodeCasePayload, LINK_MESSAGES, MAX_PAYLOAD_CHARS, type DecodeResult } from './link';
 export { caseToWire, linkView } from './wire';
-export { CASE_FILE_EXTENSION, CASE_FILE_MIME, caseFileName, caseFromFileText, caseToFileText } from './file';
+export { CASE_FILE_EXTENSION, CASE_FILE_MIME, caseFileName, caseFromFileText, caseToFileText, type CaseFileResult } from './file';
+export { MAX_FILE_PHOTOS, readSiteEvidence, type SiteEvidence } from './site-evidence';
 export { resultsToCsv, type CsvCell, type CsvOptions } from './csv';
 export { copyText, shareLink, type CopyAnswer, type ShareAnswer } from './share-sheet';

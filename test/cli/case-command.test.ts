@@ -23,6 +23,15 @@ describe('wetmode case', () => {
     expect(out.model).toEqual(JSON.parse(JSON.stringify(built.build.model, (_k, v) => (typeof v === 'number' && !Number.isInteger(v) ? Number(v.toPrecision(6)) : v))));
   });
 
+  it('reads a case file that carries site photos and a location, with the same output as without them', () => {
+    const text = readFileSync(EXAMPLE, 'utf8');
+    const withEvidence = JSON.stringify({
+      ...JSON.parse(text),
+      siteEvidence: { photos: [{ dataUrl: 'data:image/jpeg;base64,/9j/4AAQ', takenAt: '2026-12-03T09:00:00Z', widthPx: 4, heightPx: 3 }], location: null },
+    });
+    expect(runCaseCommand(withEvidence)).toBe(runCaseCommand(text));
+  });
+
   it('the demo pile in a 1.2 m/s current is inside the in-line lock-in band (DNV-RP-C205 §9: 1.0 ≤ V_R ≤ 4.5)', () => {
     const out = JSON.parse(runCaseCommand(readFileSync(EXAMPLE, 'utf8')));
     const inLine = out.resonance.checks.find((k: { mode: number; excitation: string }) => k.mode === 1 && k.excitation === 'in-line VIV');

@@ -177,7 +177,7 @@ for (const size of SIZES) {
     test('a photo picked on the tablet is kept with the case on the device and shown as a thumbnail in the report', async ({ page }) => {
       await page.goto('/');
       await expect(page.getByTestId('quick-wet')).toContainText('Hz');
-      await expect(page.getByTestId('site-evidence')).toContainText('not in the case link or the case file');
+      await expect(page.getByTestId('site-evidence')).toContainText('They go into the exported case file too, never into the case link');
       // A 1 × 1 PNG, as the file picker would hand over.
       const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAQAAAC1HAwCAAAAC0lEQVR42mNkYAAAAAYAAjCB0C8AAAAASUVORK5CYII=', 'base64');
       await expect(page.getByTestId('photo-input')).toHaveAttribute('capture', 'environment');

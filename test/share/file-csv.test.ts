@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { NEWER_VERSION_MESSAGE, type Case } from '../../src/case';
 import { CASE_FILE_EXTENSION, caseFileName, caseFromFileText, caseToFileText, resultsToCsv } from '../../src/share';
+import { MAX_CASE_FILE_CHARS } from '../../src/share/file';
 import { baffleCase, demoCase, v0Case } from '../case/fixtures';
 
 describe('case files', () => {
@@ -24,9 +25,11 @@ describe('case files', () => {
     expect(caseFromFileText('  \n')).toEqual({ ok: false, message: 'this file is empty' });
     const notJson = caseFromFileText('name: pile');
     expect(notJson.ok === false && notJson.message.startsWith('this file is not a Wetmode case: it is not valid JSON (')).toBe(true);
-    expect(caseFromFileText('x'.repeat(1_000_001))).toEqual({
+    // The limit is 1 000 000 characters for the case plus 12 photos of at most 700 000 characters and 200 for their fields.
+    expect(MAX_CASE_FILE_CHARS).toBe(1_000_000 + 12 * 700_200);
+    expect(caseFromFileText('x'.repeat(MAX_CASE_FILE_CHARS + 1))).toEqual({
       ok: false,
-      message: 'this file is too large to be a Wetmode case (1000001 characters; a case file has at most 1000000)',
+      message: 'this file is too large to be a Wetmode case (9402401 characters; a case file has at most 9402400)',
     });
     expect(caseFromFileText('{"format":"spreadsheet"}')).toEqual({
       ok: false,

@@ -2,6 +2,7 @@ import { useId } from 'preact/hooks';
 import type { Case } from '../../case';
 import { caseFromFileText } from '../../share/file';
 import { importOutcome, importReadProblem, importSizeProblem } from './import-file';
+import { restoreEvidence, restoredText } from '../../attachments/evidence-io';
 import type { Status } from './StatusLine';
 
 interface Props {
@@ -27,9 +28,17 @@ export function FilePanel({ onImported, setStatus }: Props) {
     } catch (e) {
       return setStatus({ text: importReadProblem(file.name, e), tone: 'error' });
     }
-    const r = importOutcome(file.name, caseFromFileText(text));
+    const parsed = caseFromFileText(text);
+    const r = importOutcome(file.name, parsed);
     if (!r.ok) return setStatus({ text: r.message, tone: 'error' });
-    onImported(r.value, r.message);
+    // The site evidence goes to this device's attachment store under the case's id, added beside what is kept.
+    const dropped = parsed.ok ? (parsed.evidenceDropped ?? []) : [];
+    let said = '';
+    if (parsed.ok && parsed.evidence) {
+      const kept = await restoreEvidence(r.value.id, parsed.evidence);
+      said = kept.ok ? restoredText(kept.value, dropped) : `The site photos and location in the file were not kept: ${kept.message}`;
+    } else if (dropped.length > 0) said = restoredText({ photosAdded: 0, photosAlreadyKept: 0, locationSet: false, locationKept: false }, dropped);
+    onImported(r.value, said ? `${r.message} ${said}` : r.message);
   }
 
   return (

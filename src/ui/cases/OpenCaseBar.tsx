@@ -40,10 +40,10 @@ export function OpenCaseBar({ state, model, store, setStatus, onSaved }: Props) 
     if (r.ok) onSaved();
   }
 
-  function exportNow() {
+  async function exportNow() {
     const d = docForSaving(model);
     if (!d) return;
-    const r = exportCaseFile(d);
+    const r = await exportCaseFile(d);
     setStatus({ text: r.text, tone: r.ok ? 'ok' : 'error' });
   }
 

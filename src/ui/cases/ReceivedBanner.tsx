@@ -54,8 +54,8 @@ export function ReceivedBanner({ doc }: { doc: Case }) {
     setSaid({ text: 'Opened your saved copy.', error: false });
   }
 
-  function exportNow() {
-    const r = exportCaseFile(docForSaving(model) ?? doc);
+  async function exportNow() {
+    const r = await exportCaseFile(docForSaving(model) ?? doc);
     setSaid({ text: r.text, error: !r.ok });
   }
 

@@ -50,8 +50,8 @@ export function useReplaceGuard(store: CaseStore | null, model: AppModel) {
           {store ? (
             <button ref={first} type="button" class="btn primary" onClick={() => void saveThenProceed()}>Save it, then continue</button>
           ) : (
-            <button ref={first} type="button" class="btn primary" onClick={() => {
-              const r = exportCaseFile(docForSaving(model) ?? doc);
+            <button ref={first} type="button" class="btn primary" onClick={async () => {
+              const r = await exportCaseFile(docForSaving(model) ?? doc);
               setNote({ text: r.text, error: !r.ok });
             }}>Export it as a file</button>
           )}

@@ -69,8 +69,8 @@ export function ShareActions({ doc, csvRows }: Props) {
     setSaid(words ? { text: words, error: answer !== 'shared' } : null);
   }
 
-  function exportFile() {
-    const r = exportCaseFile(model.get().doc?.id === doc.id ? (docForSaving(model) ?? doc) : doc);
+  async function exportFile() {
+    const r = await exportCaseFile(model.get().doc?.id === doc.id ? (docForSaving(model) ?? doc) : doc);
     setSaid({ text: r.text, error: !r.ok });
   }
 

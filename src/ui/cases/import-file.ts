@@ -3,15 +3,16 @@
  * are here so they can be tested. The parse itself is `caseFromFileText` (src/share/file.ts).
  */
 import type { Case, ParseCaseResult } from '../../case';
-import { MAX_CASE_FILE_CHARS } from '../../share/file';
+import { MAX_CASE_CHARS, MAX_EVIDENCE_CHARS } from '../../share/file';
 import { formatBytes } from './format';
 import { quoted, withStop } from './words';
 
 /**
- * Largest file read at all. A case file has at most MAX_CASE_FILE_CHARS characters, and UTF-8 takes at most
- * 4 bytes for one: anything bigger is refused before it is read into memory.
+ * Largest file read at all. The case part has at most MAX_CASE_CHARS characters, and UTF-8 takes at most
+ * 4 bytes for one; the site evidence is base64 and ASCII, one byte a character. Anything bigger is refused
+ * before it is read into memory.
  */
-export const MAX_IMPORT_BYTES = MAX_CASE_FILE_CHARS * 4;
+export const MAX_IMPORT_BYTES = MAX_CASE_CHARS * 4 + MAX_EVIDENCE_CHARS;
 
 /** The file's name for a message, shortened and in quotes. */
 function fileLabel(fileName: string): string {
@@ -23,7 +24,7 @@ function fileLabel(fileName: string): string {
 export function importSizeProblem(fileName: string, sizeBytes: number): string | null {
   if (sizeBytes === 0) return `Could not open ${fileLabel(fileName)}: expected a Wetmode case file (.wetmode.json); got an empty file.`;
   if (sizeBytes > MAX_IMPORT_BYTES) {
-    return `Could not open ${fileLabel(fileName)}: expected a Wetmode case file of a few kB (.wetmode.json); got a file of ${formatBytes(sizeBytes)}.`;
+    return `Could not open ${fileLabel(fileName)}: expected a Wetmode case file (.wetmode.json) of a few kB, up to about ${formatBytes(MAX_IMPORT_BYTES)} with site photos; got a file of ${formatBytes(sizeBytes)}.`;
   }
   return null;
 }

@@ -7,6 +7,8 @@ import { newCaseId, revisionOf, type CaseStore, type StoreErrorKind } from '../.
 import { clearFallback } from '../state/draft-fallback';
 import { tabIdentity } from '../state/tab';
 import { CASE_FILE_MIME, caseFileName, caseToFileText } from '../../share/file';
+import { MAX_FILE_PHOTOS } from '../../share/site-evidence';
+import { evidenceOf } from '../../attachments/evidence-io';
 import { keyResultOf, type AppModel } from '../state/app-model';
 import { downloadText } from './download';
 import { existingBandModel } from '../state/band-context';
@@ -106,17 +108,26 @@ export async function resolveConflict(store: CaseStore, model: AppModel, choice:
   };
 }
 
-/** Downloads a case as a `.wetmode.json` file; the message says what happened. */
-export function exportCaseFile(doc: Case): { ok: boolean; text: string } {
+/**
+ * Downloads a case as a `.wetmode.json` file with the site photos and location kept for it on this device; the
+ * message says what happened, and when the evidence could not be read or not all photos fit.
+ */
+export async function exportCaseFile(doc: Case): Promise<{ ok: boolean; text: string }> {
+  const evidence = await evidenceOf(doc.id);
+  const count = evidence.ok ? evidence.value.photos.length : 0;
   let text: string;
   try {
-    text = caseToFileText(doc);
+    text = caseToFileText(doc, evidence.ok ? evidence.value : undefined);
   } catch (e) {
     return { ok: false, text: `Could not export ${quoted(doc)}: ${e instanceof Error ? e.message : String(e)}` };
   }
   const name = caseFileName(doc);
   const problem = downloadText(text, name, CASE_FILE_MIME);
-  return problem ? { ok: false, text: problem } : { ok: true, text: `Exported ${quoted(doc)} as the file ${name}.` };
+  if (problem) return { ok: false, text: problem };
+  const photos = count === 0 ? '' : count > MAX_FILE_PHOTOS ? ` It carries the first ${MAX_FILE_PHOTOS} of the ${count} site photos (a file holds at most ${MAX_FILE_PHOTOS}).` : ` It carries the ${count === 1 ? 'site photo' : `${count} site photos`}.`;
+  // No storage (a browser without IndexedDB) means there is no evidence to carry: say so only for a real failure.
+  const unread = !evidence.ok && !/offers no storage/.test(evidence.message) ? ` The site photos and location are not in it: ${evidence.message}` : '';
+  return { ok: true, text: `Exported ${quoted(doc)} as the file ${name}.${photos}${unread}` };
 }
 
 /*

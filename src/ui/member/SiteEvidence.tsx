@@ -5,7 +5,7 @@ import { newCaseId } from '../../store';
 
 /**
  * Photos taken or picked on the tablet, and the site location (asked only when tapped), kept on this device
- * beside the case. They travel in neither the link nor the case file, and the panel says so.
+ * beside the case and in its exported case file, never in the link, and the panel says so.
  */
 export function SiteEvidence({ caseId, readOnly }: { caseId: string; readOnly: boolean }) {
   const [photos, setPhotos] = useState<Photo[]>([]);
@@ -55,7 +55,7 @@ export function SiteEvidence({ caseId, readOnly }: { caseId: string; readOnly: b
   };
   return (
     <div class="site-evidence" data-testid="site-evidence">
-      <p class="field-help">Photos and the location stay on this device with the case. They are not in the case link or the case file.</p>
+      <p class="field-help">Photos and the location stay on this device with the case. They go into the exported case file too, never into the case link.</p>
       {!readOnly && (
         <div class="cases-buttons">
           <label class="btn file-button">

@@ -22,15 +22,15 @@ export function PlateReportKey({ answer }: { answer: PlateSolved }) {
   );
 }
 
-/** The rest of a plate's record, kept compact: the first four shapes dry and wet, resonance, method. */
+/** The rest of a plate's record, kept compact: every shape dry and wet, small; the governing checks; method. */
 export function PlateReportDetails({ answer, build, children }: { answer: PlateSolved; build: PlateBuild; children?: ComponentChildren }) {
   return (
     <>
       <div class="report-section">
-        <PlateModeShapes result={answer.plate} plate={build.plate} max={4} sizePx={110} />
+        <PlateModeShapes result={answer.plate} plate={build.plate} sizePx={64} />
       </div>
       <div class="report-section">
-        <PlateResonance screening={answer.screening} result={answer.plate} />
+        <PlateResonance screening={answer.screening} result={answer.plate} governing />
       </div>
       <div class="report-section report-columns">
         <div>{children}</div>

@@ -1,5 +1,6 @@
 import type { PlateResult } from '../../physics/plate';
-import type { PlateScreening } from '../../kinds/plate-panel/screen';
+import type { PlateCheck, PlateScreening } from '../../kinds/plate-panel/screen';
+import type { Verdict } from '../../physics/excitation/verdict';
 import { SLOSHING_SOURCE } from '../../kinds/plate-panel/screen';
 import { formatHz } from '../format/numbers';
 import { marginText } from '../results/display-units';
@@ -27,14 +28,33 @@ export function SloshingList({ result }: { result: PlateResult }) {
   );
 }
 
-/** Every mode against every machinery order and sloshing frequency, with its verdict, margin and source. */
-export function PlateResonance({ screening, result }: { screening: PlateScreening | null; result: PlateResult }) {
-  const rows = screening ? screening.modes.flatMap((m) => m.checks.map((c, i) => ({ mode: m.modeIndex + 1, c, key: `${m.modeIndex}-${i}` }))) : [];
+type Row = { mode: number; c: PlateCheck; key: string };
+const SEVERITY: Readonly<Record<Verdict, number>> = { 'inside-band': 2, close: 1, clear: 0 };
+
+/** For each excitation, the mode that governs it: the worst verdict, the smallest margin among equals. */
+export function governingPlateRows(rows: readonly Row[]): Row[] {
+  const best = new Map<string, Row>();
+  for (const r of rows) {
+    const b = best.get(r.c.label);
+    const worse = b && (SEVERITY[r.c.verdict] > SEVERITY[b.c.verdict] || (SEVERITY[r.c.verdict] === SEVERITY[b.c.verdict] && Math.abs(r.c.marginPercent) < Math.abs(b.c.marginPercent)));
+    if (!b || worse) best.set(r.c.label, r);
+  }
+  return [...best.values()];
+}
+
+/**
+ * Every mode against every machinery order and sloshing frequency, with its verdict, margin and source;
+ * `governing` (the printed record) keeps only the governing mode of each excitation.
+ */
+export function PlateResonance({ screening, result, governing = false }: { screening: PlateScreening | null; result: PlateResult; governing?: boolean }) {
+  const all: Row[] = screening ? screening.modes.flatMap((m) => m.checks.map((c, i) => ({ mode: m.modeIndex + 1, c, key: `${m.modeIndex}-${i}` }))) : [];
+  const rows = governing ? governingPlateRows(all) : all;
+  const what = governing ? 'Governing mode of each excitation (every mode on the Results screen)' : 'Each mode against machinery and sloshing';
   return (
     <section class="results-block" aria-labelledby="plate-resonance-title">
       <h2 id="plate-resonance-title">Resonance</h2>
       {screening ? (
-        <ScrollTable caption={`Each mode against machinery and sloshing (±${Math.round(screening.separationMargin.value * 100)} % separation: ${screening.separationMargin.source})`} class="checks-table">
+        <ScrollTable caption={`${what} (±${Math.round(screening.separationMargin.value * 100)} % separation: ${screening.separationMargin.source})`} class="checks-table">
           <thead>
             <tr>
               <th scope="col">Mode</th>

@@ -72,12 +72,14 @@ export function ReportDetails({ doc, results, children }: Props) {
   const { member, screening } = answer;
   return (
     <>
-      <section class="report-section" aria-labelledby="report-shape-title">
-        <h2 id="report-shape-title">Mode shapes</h2>
-        <ModeShapesStrip member={member} lengthM={build.model.lengthM} />
-      </section>
-      <div class="report-section">
-        <MassTable member={member} units={units} withMethod={false} />
+      <div class="report-section report-columns report-shapes-mass">
+        <section aria-labelledby="report-shape-title">
+          <h2 id="report-shape-title">Mode shapes</h2>
+          <ModeShapesStrip member={member} lengthM={build.model.lengthM} />
+        </section>
+        <div>
+          <MassTable member={member} units={units} withMethod={false} />
+        </div>
       </div>
       {screening && <ReportResonance screening={screening} member={member} units={units} reasonsInSI={doc.unitSystem !== 'si'} />}
       <div class="report-section report-columns">

@@ -13,11 +13,24 @@ export interface QrModules {
   dark: Uint8Array;
 }
 
-/** Encodes text (byte mode) into the smallest symbol that holds it at level L. */
-export function qrModules(text: string): QrModules {
-  const q = qrcode(0, 'L');
+/**
+ * Version 23 (109 × 109 modules) is skipped: its alignment patterns sit at 6, 30, 54, 78, 102 (ISO/IEC 18004,
+ * Annex E, Table E.1), but some widely copied decoders place the fourth at 74 and cannot read any version-23
+ * symbol. Version 24 at level L holds everything version 23 does, four modules wider.
+ */
+const SKIPPED_VERSION = 23;
+
+function encode(text: string, version: number): ReturnType<typeof qrcode> {
+  const q = qrcode(version as Parameters<typeof qrcode>[0], 'L');
   q.addData(text, 'Byte');
   q.make();
+  return q;
+}
+
+/** Encodes text (byte mode) into the smallest symbol that holds it at level L (never version 23, see above). */
+export function qrModules(text: string): QrModules {
+  let q = encode(text, 0);
+  if (q.getModuleCount() === 17 + 4 * SKIPPED_VERSION) q = encode(text, SKIPPED_VERSION + 1);
   const size = q.getModuleCount();
   const dark = new Uint8Array(size * size);
   for (let r = 0; r < size; r++) for (let c = 0; c < size; c++) dark[r * size + c] = q.isDark(r, c) ? 1 : 0;

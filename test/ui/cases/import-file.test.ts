@@ -35,7 +35,7 @@ describe('importing a case file', () => {
   it('refuses an empty or a huge file before reading it, with the size got', () => {
     expect(importSizeProblem('empty.json', 0)).toBe('Could not open “empty.json”: expected a Wetmode case file (.wetmode.json); got an empty file.');
     expect(importSizeProblem('site-photos.zip', 35_000_000)).toBe(
-      'Could not open “site-photos.zip”: expected a Wetmode case file of a few kB (.wetmode.json); got a file of 35.0 MB.',
+      'Could not open “site-photos.zip”: expected a Wetmode case file (.wetmode.json) of a few kB, up to about 12.4 MB with site photos; got a file of 35.0 MB.',
     );
     expect(importSizeProblem('case.json', MAX_IMPORT_BYTES)).toBeNull();
     expect(importSizeProblem('case.json', MAX_IMPORT_BYTES + 1)).not.toBeNull();

@@ -27,6 +27,17 @@ describe('the case link as a QR code', () => {
     expect(decoded?.data).toBe(link);
   });
 
+  it('a link long enough for a version-23 symbol is drawn as version 24 and decodes with jsQR, which misplaces version 23 alignment patterns', () => {
+    // 1006 bytes: more than version 22-L holds and less than 23-L. ISO/IEC 18004 Table 9 gives 22-L 1006 data
+    // codewords (2 × 111 + 7 × 112) and 23-L 1094 (4 × 121 + 5 × 122); byte mode spends 4 + 16 bits on its
+    // header, so 22-L holds 1003 bytes and 23-L 1091 (arithmetic on the table, a cross-check of the library).
+    const link = `https://wetmode.example/#/open/${'zA0-_x9Q'.repeat(122)}ab`.slice(0, 1006);
+    expect(link.length).toBe(1006);
+    const { data, side } = raster(link);
+    expect(qrModules(link).size).toBe(17 + 4 * 24);
+    expect(jsQR(data, side, side)?.data).toBe(link);
+  });
+
   it('the symbol is square, of a size ISO/IEC 18004 allows (17 + 4 × version), and the path covers every dark module', () => {
     const m = qrModules('https://wetmode.example/#c=short');
     expect((m.size - 17) % 4).toBe(0);
