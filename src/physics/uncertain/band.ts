@@ -19,7 +19,7 @@ import type { AxisResult, BandMethod, BandOutcome, ModeBand, StateBand } from '.
 import { type EvalFailure, gridShapes, MemberEvaluator, type ModelAt, rememberingSectionSolver } from './evaluate';
 import { type Axis, axisValues, cornerDirections, crossedModes, type Direction, directionOf, disagree, FLAT_RTOL } from './monotone';
 import { checkParametricInputs, type ResolvedRange, resolveRanges } from './ranges';
-import { refineExtreme, sampleBox, type SearchTarget } from './search';
+import { refineExtreme, sampleBox, type SearchTarget, searchWindow } from './search';
 import { sensitivityFromAxes } from './sensitivity';
 
 export interface BandOptions {
@@ -244,9 +244,10 @@ function bandOver(model: MemberModel, ranges: readonly ResolvedRange[], modelAt:
     });
     const targets: SearchTarget[] = [];
     for (let j = 0; j < modes; j++) for (const st of states) if (judged[st][j].method === 'sampled') targets.push({ state: st, mode: j });
+    const spacing = searchWindow(ev.store.count, k);
     for (const t of targets) {
       for (const sense of [1, -1] as const) {
-        const failed2 = refineExtreme(ev, ranges, t, sense);
+        const failed2 = refineExtreme(ev, ranges, t, sense, spacing);
         if (failed2) return failed2;
       }
     }

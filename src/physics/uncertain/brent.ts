@@ -111,6 +111,13 @@ export interface MinimumOptions {
   xTolerance?: number;
   /** Safety cap on evaluations. Default 60. */
   maxEvaluations?: number;
+  /** A point strictly inside (a, b) whose value is already known, to start from instead of the golden-section point. */
+  start?: { x: number; fx: number };
+  /**
+   * Stop once the three best points so far (Brent's x, w, v, all evaluated) differ in value by at most this:
+   * the minimum value is then known to about this much even where x is not. Default 0 (x tolerance only).
+   */
+  fTolerance?: number;
 }
 
 /** (3 − √5)/2: the golden-section fraction. */
@@ -130,12 +137,14 @@ export function brentMinimum(f: (x: number) => number, a: number, b: number, opt
     return Number.isFinite(y) ? y : Infinity;
   };
   const sqrtEps = Math.sqrt(EPS);
-  let v = a + GOLDEN * (b - a);
+  const ft = options.fTolerance ?? 0;
+  const given = options.start && options.start.x > a && options.start.x < b ? options.start : null;
+  let v = given ? given.x : a + GOLDEN * (b - a);
   let w = v;
   let x = v;
   let e = 0;
   let d = 0;
-  let fx = call(x);
+  let fx = given ? (Number.isFinite(given.fx) ? given.fx : Infinity) : call(x);
   let fv = fx;
   let fw = fx;
   for (;;) {
@@ -143,6 +152,7 @@ export function brentMinimum(f: (x: number) => number, a: number, b: number, opt
     const tol = sqrtEps * Math.abs(x) + t;
     const t2 = 2 * tol;
     if (Math.abs(x - m) <= t2 - 0.5 * (b - a) || evals >= maxEval) return { x, fx, evaluations: evals };
+    if (ft > 0 && v !== w && w !== x && v !== x && Math.max(fw, fv) - fx <= ft) return { x, fx, evaluations: evals };
     let golden = true;
     if (Math.abs(e) > tol) {
       // Parabola through (v, fv), (w, fw), (x, fx).

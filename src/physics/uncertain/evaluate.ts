@@ -132,6 +132,8 @@ export function withFixedMesh(model: MemberModel, elements: number): MemberModel
 export class MemberEvaluator {
   readonly store: EvaluationStore;
   solves = 0;
+  /** Settings solved so far, by their values joined with commas. */
+  private readonly seen = new Map<string, Evaluation>();
   private readonly solver: SectionSolver;
   private readonly modelAt: ModelAt;
 
@@ -158,8 +160,14 @@ export class MemberEvaluator {
     return this.maxSolves - this.solves;
   }
 
-  /** Solves at x (values of the ranged inputs, in range order) and stores the frequencies. */
+  /**
+   * Solves at x (values of the ranged inputs, in range order) and stores the frequencies. A setting solved
+   * before (a corner or axis point met again by a line search) is answered from the store: no solve, no budget.
+   */
   solve(x: ArrayLike<number>): Evaluation | EvalFailure {
+    const key = Array.prototype.join.call(x, ',');
+    const seen = this.seen.get(key);
+    if (seen) return seen;
     this.solves++;
     let out;
     try {
@@ -168,7 +176,9 @@ export class MemberEvaluator {
       return { ok: false, reason: 'invalid-input', message: this.where(x, e instanceof Error ? e.message : String(e)) };
     }
     if (!out.ok) return { ok: false, reason: out.reason, message: this.where(x, out.message) };
-    return { ok: true, index: this.store.add(x, out.result), result: out.result };
+    const done: Evaluation = { ok: true, index: this.store.add(x, out.result), result: out.result };
+    this.seen.set(key, done);
+    return done;
   }
 
   /** "at liquid.toM = 7.5, masses.0.massKg = 900: <message>" */
