@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { bandCase, readCaseRanges } from '../../src/app/band-case';
+import { bandCase } from '../../src/app/band-case';
+import { readCaseRanges } from '../../src/app/case-ranges';
 import { excitationDefaults } from '../../src/forms/excitation';
 import { applicableRanges, defaultRangeText, type RangeTexts, valuesAt } from '../../src/forms/ranges';
 import { rangesOf } from '../../src/kinds/ranges-registry';
