@@ -3,6 +3,7 @@ import { App } from './ui/App';
 import './ui/styles.css';
 import { bootOnce } from './ui/state/early-boot';
 import { parseHash } from './ui/shell/router';
+import { markOnce } from './ui/state/boot-marks';
 
 /**
  * The worker, the device store and the first case start before the UI mounts (see early-boot.ts). The UI mounts
@@ -12,6 +13,10 @@ import { parseHash } from './ui/shell/router';
  */
 const MOUNT_WAIT_MS = 400;
 
+markOnce('wetmode:script-start');
 const boot = bootOnce(parseHash(location.hash).screen === 'open');
-const mount = () => render(<App />, document.getElementById('app')!);
+const mount = () => {
+  markOnce('wetmode:mount');
+  render(<App />, document.getElementById('app')!);
+};
 void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);

@@ -35,14 +35,35 @@ export class SolverClient<Req, Res> {
   private waiting: Pending<Req, Res> | null = null;
   private timer: ReturnType<typeof setTimeout> | null = null;
   private nextId = 1;
+  /** A solve started ahead of its request (`prefetch`), by the request's JSON text. */
+  private early: { key: string; answer: Promise<Answer<Res>> } | null = null;
 
   constructor(
     private readonly makeWorker: () => WorkerLike,
     private readonly timeoutMs = 10_000,
   ) {}
 
+  /**
+   * Starts a solve the page expects to ask for soon (the case it is about to open), so the worker works while the
+   * page is still opening its store and drawing. The next `request` with the same JSON text gets that answer
+   * instead of solving again; any other request drops it (superseded if it had not started).
+   */
+  prefetch(request: Req): void {
+    const answer = this.post(request);
+    this.early = { key: JSON.stringify(request), answer };
+  }
+
   /** Asks for a solve. Resolves `done`, or `superseded` if a newer request replaced it before it started. */
   request(request: Req): Promise<Answer<Res>> {
+    const early = this.early;
+    if (early) {
+      this.early = null;
+      if (early.key === JSON.stringify(request)) return early.answer;
+    }
+    return this.post(request);
+  }
+
+  private post(request: Req): Promise<Answer<Res>> {
     return new Promise((resolve) => {
       const job = { id: this.nextId++, request, resolve };
       if (this.waiting) this.waiting.resolve({ status: 'superseded' });

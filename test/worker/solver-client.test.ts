@@ -30,6 +30,27 @@ describe('solver client', () => {
     expect(await p).toEqual({ status: 'done', value: 49 });
   });
 
+  it('a solve started ahead (prefetch) answers the same request later without a second solve', async () => {
+    const { client, workers } = setup();
+    client.prefetch(7);
+    workers[0].answer(0, 49); // answered before the page asks
+    expect(await client.request(7)).toEqual({ status: 'done', value: 49 });
+    expect(workers[0].sent.map((m) => m.request)).toEqual([7]);
+  });
+
+  it('a different request after a prefetch is solved for itself, and the guess is used once only', async () => {
+    const { client, workers } = setup();
+    client.prefetch(7);
+    const other = client.request(8);
+    workers[0].answer(0, 49);
+    workers[0].answer(1, 64);
+    expect(await other).toEqual({ status: 'done', value: 64 });
+    const again = client.request(7);
+    expect(workers[0].sent.map((m) => m.request)).toEqual([7, 8, 7]);
+    workers[0].answer(2, 49);
+    expect(await again).toEqual({ status: 'done', value: 49 });
+  });
+
   it('keeps only the newest waiting request while one runs: older waiting ones are superseded', async () => {
     const { client, workers } = setup();
     const a = client.request(1);

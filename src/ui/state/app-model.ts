@@ -18,6 +18,8 @@ import { answerFigures } from '../../app/answer-figures';
 import type { CaseAnswer, CaseRequest } from '../../app/solve-case';
 import type { Answer } from '../../worker/solver-client';
 import { caseSolverWords } from './case-solver-words';
+import { markOnce } from './boot-marks';
+import { rememberRequest } from './first-request';
 
 export type CaseMode = 'editing' | 'received';
 
@@ -61,6 +63,8 @@ export interface Conflict {
 
 export interface Solver {
   request(req: CaseRequest): Promise<Answer<CaseAnswer>>;
+  /** Starts a solve expected to be asked for soon (SolverClient.prefetch); absent in tests' fakes. */
+  prefetch?(req: CaseRequest): void;
 }
 
 export interface DraftSink {
@@ -108,6 +112,11 @@ export class AppModel {
 
   get(): ModelState {
     return this.state;
+  }
+
+  /** Starts the solve of a case about to be opened (its request), ahead of opening it. */
+  prefetch(request: CaseRequest): void {
+    this.solver.prefetch?.(request);
   }
 
   subscribe(fn: () => void): () => void {
@@ -215,13 +224,17 @@ export class AppModel {
     const build = reading.build;
     const inputWarnings = warningLines(reading.warnings);
     this.set({ computing: true });
+    markOnce('wetmode:solve-asked');
+    const request = requestOf(reading);
     void this.solver
-      .request(requestOf(reading))
+      .request(request)
       .catch((e: unknown): Answer<CaseAnswer> => ({ status: 'crashed', message: e instanceof Error ? e.message : String(e) }))
       .then((ans) => {
       if (ans.status === 'superseded') return;
       if (ans.status === 'done') {
+        markOnce('wetmode:answer-received');
         const current = this.state.doc && contentKey(this.state.doc) === key;
+        if (current) rememberRequest(request);
         this.set({ results: { answer: ans.value, build, forKey: key, inputWarnings }, computing: !current, solverMessage: null });
       } else {
         this.set({ computing: false, solverMessage: caseSolverWords(ans, doc) });

@@ -13,6 +13,8 @@ import { lastOpenCase } from './last-case';
 import { followStoreChanges } from './remote-changes';
 import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks } from './services';
 import { openTabs, type TabIdentity } from './tab';
+import { markOnce } from './boot-marks';
+import { likelyFirstRequest } from './first-request';
 
 export type BootServices = Pick<AppServices, 'model' | 'section' | 'sectionSolver'>;
 
@@ -38,6 +40,11 @@ export function bootOnce(openingLink: boolean): Boot {
   if (boot) return boot;
   const sectionSolver = createSectionSolver();
   const services: BootServices = { model: createModel(), section: createSectionModel(sectionSolver), sectionSolver };
+  // The worker starts on the likeliest first case now, while the store opens (a few hundred ms on a slow tablet).
+  if (!openingLink) {
+    const guess = likelyFirstRequest();
+    if (guess) services.model.prefetch(guess);
+  }
   const made: Boot = { services, settled: null, outcome: openFirstCase(services.model, openingLink).then((o) => (made.settled = o)) };
   boot = made;
   return made;
@@ -46,6 +53,7 @@ export function bootOnce(openingLink: boolean): Boot {
 /** Opens the store, merges the localStorage draft copies, and opens the first case in the model. Never rejects. */
 async function openFirstCase(model: BootServices['model'], openingLink: boolean): Promise<BootOutcome> {
   const { tab, opened } = await openDeviceStoreOnce();
+  markOnce('wetmode:store-open');
   const store = opened.store;
   try {
     if (store) {

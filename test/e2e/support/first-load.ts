@@ -28,6 +28,8 @@ export interface FirstLoad {
   scripts: ScriptFetch[];
   gzipBytes: number;
   rawBytes: number;
+  /** The page's start steps (src/ui/state/boot-marks.ts and navigation timing), ms from navigation, in order. */
+  steps: { name: string; atMs: number }[];
 }
 
 /**
@@ -78,10 +80,16 @@ export async function measureFirstLoad(
   });
   await page.goto(url);
   await page.waitForFunction(() => (window as unknown as { __firstAnswerMs?: number }).__firstAnswerMs !== undefined, null, { timeout: 30_000, polling: 50 });
-  const { firstAnswerMs, origin } = await page.evaluate(() => ({
-    firstAnswerMs: (window as unknown as { __firstAnswerMs: number }).__firstAnswerMs,
-    origin: performance.timeOrigin,
-  }));
+  const { firstAnswerMs, origin, steps } = await page.evaluate(() => {
+    const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming | undefined;
+    const marks = performance.getEntriesByType('mark').map((m) => ({ name: m.name.replace('wetmode:', ''), atMs: m.startTime }));
+    const navSteps = nav ? [{ name: 'html-received', atMs: nav.responseEnd }, { name: 'dom-content-loaded', atMs: nav.domContentLoadedEventEnd }] : [];
+    return {
+      firstAnswerMs: (window as unknown as { __firstAnswerMs: number }).__firstAnswerMs,
+      origin: performance.timeOrigin,
+      steps: [...navSteps, ...marks].sort((a, b) => a.atMs - b.atMs),
+    };
+  });
   await cdp.send('Emulation.setCPUThrottlingRate', { rate: 1 });
   // For a following warm visit: wait until the service worker has precached everything and taken over.
   if (thenInstallServiceWorker) await serviceWorkerActivated(page);
@@ -101,6 +109,7 @@ export async function measureFirstLoad(
     scripts,
     gzipBytes: scripts.reduce((s, x) => s + x.gzipBytes, 0),
     rawBytes: scripts.reduce((s, x) => s + x.rawBytes, 0),
+    steps,
   };
 }
 
@@ -114,7 +123,8 @@ export function median(xs: readonly number[]): number {
 export function describeLoad(label: string, load: FirstLoad): string {
   const kb = (b: number) => (b / 1000).toFixed(1);
   const lines = load.scripts.map((s) => `    ${s.path}: ${kb(s.rawBytes)} kB raw, ${kb(s.gzipBytes)} kB gzip`);
-  return [`  ${label}: first answer ${load.firstAnswerMs.toFixed(0)} ms; JS before it ${kb(load.gzipBytes)} kB gzip (${kb(load.rawBytes)} kB raw)`, ...lines].join('\n');
+  const steps = load.steps.map((s) => `${s.name} ${s.atMs.toFixed(0)}`).join(', ');
+  return [`  ${label}: first answer ${load.firstAnswerMs.toFixed(0)} ms; JS before it ${kb(load.gzipBytes)} kB gzip (${kb(load.rawBytes)} kB raw)`, `    steps (ms): ${steps}`, ...lines].join('\n');
 }
 
 export interface FirstLoadSeries {
