@@ -59,7 +59,7 @@ export function solveLevel(
   const lu = luWorkspace(n);
   const rhs = new Float64Array(m3 * n);
   const pin = closed && !hasDirichlet;
-  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount));
+  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount, group.length));
   const f = luFactorInPlace(lu);
   if (!f.ok) return { ok: false, column: f.column };
   const x = new Float64Array(m3 * n);
