@@ -283,10 +283,18 @@ export function luSolveInto(f: LuFactor, b: Float64Array, out: Float64Array): Fl
  * scratch `w[i·m + c]` (contiguous per row), four columns at a time with the running sums in registers:
  * each element of the factor is loaded once per four right-hand sides, and the four sums are independent
  * chains instead of one serial chain. Every column sees the same operations in the same order as
- * `luSolveInto`, so the answers are bit-for-bit the same.
+ * `luSolveInto`, so the answers are bit-for-bit the same. Below four columns it solves one at a time.
  */
 export function luSolveManyInto(f: LuFactor, b: Float64Array, m: number, out: Float64Array): Float64Array {
   const { n, lu: a, perm } = f;
+  if (m < 4) {
+    // Too few columns to share the loads: one column at a time (no scratch, no transposes).
+    for (let c = 0; c < m; c++) {
+      const col = b.subarray(c * n, (c + 1) * n);
+      luSolveInto(f, col, out === b ? col : out.subarray(c * n, (c + 1) * n));
+    }
+    return out;
+  }
   const w = new Float64Array(n * m);
   for (let c = 0; c < m; c++) {
     const cb = c * n;

@@ -128,6 +128,9 @@ export function assembleInto(
       const njx = nx[j];
       const njy = ny[j];
       const neumann = bc[j] === 0;
+      const k = owner[j];
+      // S_ij is needed on Dirichlet panels (matrix) and on body panels (right-hand sides), not on Neumann walls.
+      const needS = !neumann || k >= 0;
       let v = 0;
       let sSum = 0;
       for (let g = 0, off = 0; g < images; g++, off += nodeCount) {
@@ -139,7 +142,7 @@ export function assembleInto(
         const u2 = u1 + L;
         // Principal value on the panel itself: θ = 0 (the flat panel does not see itself).
         const theta = g === 0 && j === i ? 0 : panelAngle(h * L, u1 * u2 + h * h);
-        const s = -sg * (u2 * lnr[off + ib] - u1 * lnr[off + ia] - L + h * theta); // S_ij
+        const s = needS ? -sg * (u2 * lnr[off + ib] - u1 * lnr[off + ia] - L + h * theta) : 0; // S_ij
         if (neumann) {
           v += sg * theta; // −D_ij = +θ/2π
           sSum += s;
@@ -148,7 +151,6 @@ export function assembleInto(
         }
       }
       a[row + j] = v;
-      const k = owner[j];
       if (neumann && k >= 0) {
         const c = 3 * k;
         const qj = 3 * j;
