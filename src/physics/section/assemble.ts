@@ -54,20 +54,31 @@ export function rigidNormalVelocities(P: PanelSet, refX: readonly number[], refY
   return q;
 }
 
-/** Scratch arrays for one row of the assembly; allocate once per panel set size. */
+/**
+ * Scratch arrays for one row of the assembly, image by image: for image g and node k, at g·nodeCount + k,
+ * the offset from the image of the collocation point to the node and ln of its length. Allocate once per
+ * panel set size and image count.
+ */
 export interface AssemblyWork {
   rx: Float64Array;
   ry: Float64Array;
   lnr: Float64Array;
 }
 
-export function createAssemblyWork(nodeCount: number): AssemblyWork {
-  return { rx: new Float64Array(nodeCount), ry: new Float64Array(nodeCount), lnr: new Float64Array(nodeCount) };
+export function createAssemblyWork(nodeCount: number, imageCount = 1): AssemblyWork {
+  const size = nodeCount * imageCount;
+  return { rx: new Float64Array(size), ry: new Float64Array(size), lnr: new Float64Array(size) };
 }
 
 /**
  * Fills `a` (n×n) and `rhs` (bodies·3 columns of length n). `pin` adds wᵀφ (w = panel length over the
  * total) to every equation, which fixes the free constant of a closed, all-Neumann region.
+ *
+ * Speed: a panel's data (ends, tangent, normal, length, kind, owner, rigid normal velocities) is loaded
+ * once per row for all images together (a wall image of panel j is panel j seen from the reflected
+ * point), the row of `a` is written once per entry, and a row's right-hand sides are summed in a small
+ * per-row array and stored once. The matrix entries are the same sums in the same order as image by
+ * image; the right-hand sides add the images' S_ij before multiplying by q_j, a round-off-level change.
  */
 export function assembleInto(
   P: PanelSet,
@@ -80,51 +91,75 @@ export function assembleInto(
   work: AssemblyWork,
 ): void {
   const n = P.count;
-  const { nodeX, nodeY, pa, pb, tx, ty, nx, ny, len, bc, owner } = P;
-  const { rx, ry, lnr } = work;
+  const { nodeX, nodeY, pa, pb, tx, ty, nx, ny, len, bc, owner, mx, my } = P;
   const nodeCount = P.nodeCount;
-  a.fill(0);
-  rhs.fill(0, 0, 3 * bodyCount * n);
+  const images = group.length;
+  if (work.rx.length < images * nodeCount) Object.assign(work, createAssemblyWork(nodeCount, images));
+  const { rx, ry, lnr } = work;
+  const m3 = 3 * bodyCount;
+  const acc = new Float64Array(m3);
+  const sgs = new Float64Array(images);
+  for (let g = 0; g < images; g++) sgs[g] = group[g].sign * INV_2PI;
   let totalLen = 0;
   for (let j = 0; j < n; j++) totalLen += len[j];
   for (let i = 0; i < n; i++) {
     const row = i * n;
-    for (let g = 0; g < group.length; g++) {
+    acc.fill(0);
+    for (let g = 0; g < images; g++) {
       const G = group[g];
-      const x = G.m00 * P.mx[i] + G.m01 * P.my[i] + G.c0;
-      const y = G.m10 * P.mx[i] + G.m11 * P.my[i] + G.c1;
-      const sg = G.sign * INV_2PI;
+      const x = G.m00 * mx[i] + G.m01 * my[i] + G.c0;
+      const y = G.m10 * mx[i] + G.m11 * my[i] + G.c1;
+      const off = g * nodeCount;
       for (let k = 0; k < nodeCount; k++) {
         const dx = nodeX[k] - x;
         const dy = nodeY[k] - y;
         const r2 = dx * dx + dy * dy;
-        rx[k] = dx;
-        ry[k] = dy;
-        lnr[k] = r2 > 0 ? 0.5 * Math.log(r2) : 0;
+        rx[off + k] = dx;
+        ry[off + k] = dy;
+        lnr[off + k] = r2 > 0 ? 0.5 * Math.log(r2) : 0;
       }
-      for (let j = 0; j < n; j++) {
-        const ia = pa[j];
-        const L = len[j];
-        const u1 = rx[ia] * tx[j] + ry[ia] * ty[j];
-        const h = rx[ia] * nx[j] + ry[ia] * ny[j];
+    }
+    for (let j = 0; j < n; j++) {
+      const ia = pa[j];
+      const ib = pb[j];
+      const L = len[j];
+      const tjx = tx[j];
+      const tjy = ty[j];
+      const njx = nx[j];
+      const njy = ny[j];
+      const neumann = bc[j] === 0;
+      const k = owner[j];
+      // S_ij is needed on Dirichlet panels (matrix) and on body panels (right-hand sides), not on Neumann walls.
+      const needS = !neumann || k >= 0;
+      let v = 0;
+      let sSum = 0;
+      for (let g = 0, off = 0; g < images; g++, off += nodeCount) {
+        const sg = sgs[g];
+        const ax = rx[off + ia];
+        const ay = ry[off + ia];
+        const u1 = ax * tjx + ay * tjy;
+        const h = ax * njx + ay * njy;
         const u2 = u1 + L;
         // Principal value on the panel itself: θ = 0 (the flat panel does not see itself).
         const theta = g === 0 && j === i ? 0 : panelAngle(h * L, u1 * u2 + h * h);
-        if (bc[j] === 0) {
-          a[row + j] += sg * theta; // −D_ij = +θ/2π
-          const k = owner[j];
-          if (k >= 0) {
-            const s = -sg * (u2 * lnr[pb[j]] - u1 * lnr[ia] - L + h * theta); // S_ij
-            const c0 = 3 * k * n + i;
-            rhs[c0] -= s * q[3 * j];
-            rhs[c0 + n] -= s * q[3 * j + 1];
-            rhs[c0 + 2 * n] -= s * q[3 * j + 2];
-          }
+        const s = needS ? -sg * (u2 * lnr[off + ib] - u1 * lnr[off + ia] - L + h * theta) : 0; // S_ij
+        if (neumann) {
+          v += sg * theta; // −D_ij = +θ/2π
+          sSum += s;
         } else {
-          a[row + j] += -sg * (u2 * lnr[pb[j]] - u1 * lnr[ia] - L + h * theta); // +S_ij
+          v += s; // +S_ij
         }
       }
+      a[row + j] = v;
+      if (neumann && k >= 0) {
+        const c = 3 * k;
+        const qj = 3 * j;
+        acc[c] -= sSum * q[qj];
+        acc[c + 1] -= sSum * q[qj + 1];
+        acc[c + 2] -= sSum * q[qj + 2];
+      }
     }
+    for (let c = 0; c < m3; c++) rhs[c * n + i] = acc[c];
     if (bc[i] === 0) a[row + i] += 0.5;
     if (pin) for (let j = 0; j < n; j++) a[row + j] += len[j] / totalLen;
   }

@@ -4,7 +4,7 @@
  * generalised normal of motion i). Collocation makes m slightly unsymmetric; the caller reports and
  * removes the asymmetry.
  */
-import { createLuFactor, luFactorInPlace, luSolveInto, type LuFactor } from '../linalg/lu';
+import { createLuFactor, luFactorInPlace, luSolveManyInto, type LuFactor } from '../linalg/lu';
 import { assembleInto, createAssemblyWork, rigidNormalVelocities } from './assemble';
 import type { ImageMap } from './lines';
 import type { PanelSet } from './panels';
@@ -59,11 +59,11 @@ export function solveLevel(
   const lu = luWorkspace(n);
   const rhs = new Float64Array(m3 * n);
   const pin = closed && !hasDirichlet;
-  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount));
+  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount, group.length));
   const f = luFactorInPlace(lu);
   if (!f.ok) return { ok: false, column: f.column };
   const x = new Float64Array(m3 * n);
-  for (let c = 0; c < m3; c++) luSolveInto(lu, rhs.subarray(c * n, (c + 1) * n), x.subarray(c * n, (c + 1) * n));
+  luSolveManyInto(lu, rhs, m3, x);
 
   // Without any φ = 0 boundary the rigid motion must carry no net flux through the wetted outline
   // (∮ q ds = 0): otherwise the 2D potential grows like ln r (unbounded added mass) or, in a closed
