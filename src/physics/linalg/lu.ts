@@ -45,6 +45,46 @@ const BLOCK = 16;
 /** Order from which the blocked factor is used (below it the unblocked one is as fast). */
 const BLOCKED_FROM = 96;
 
+/** Pivots below `relTol` × the largest entry count as zero; sets the identity permutation. Returns that threshold. */
+function startFactor(a: Float64Array, n: number, perm: Int32Array, relTol: number): number {
+  let scale = 0;
+  for (let i = 0; i < n * n; i++) {
+    const v = Math.abs(a[i]);
+    if (v > scale) scale = v;
+  }
+  for (let i = 0; i < n; i++) perm[i] = i;
+  return relTol * scale;
+}
+
+/**
+ * Partial pivoting at column k: the row at or below the diagonal with the largest magnitude in column k is
+ * swapped (whole row) into row k, and the swap recorded in `perm`. Returns that magnitude.
+ */
+function pivotInPlace(a: Float64Array, n: number, perm: Int32Array, k: number): number {
+  let p = k;
+  let big = Math.abs(a[k * n + k]);
+  for (let i = k + 1; i < n; i++) {
+    const v = Math.abs(a[i * n + k]);
+    if (v > big) {
+      big = v;
+      p = i;
+    }
+  }
+  if (p !== k) {
+    const rk = k * n;
+    const rp = p * n;
+    for (let j = 0; j < n; j++) {
+      const t = a[rk + j];
+      a[rk + j] = a[rp + j];
+      a[rp + j] = t;
+    }
+    const t = perm[k];
+    perm[k] = perm[p];
+    perm[p] = t;
+  }
+  return big;
+}
+
 /**
  * Factors the matrix already stored in `f.lu`: blocked right-looking LU with partial pivoting (Golub & Van
  * Loan, Matrix Computations, ch. 3, block LU in outer-product form). Per block of BLOCK columns: factor the
@@ -56,40 +96,14 @@ const BLOCKED_FROM = 96;
 export function luFactorInPlace(f: LuFactor, relTol = 1e-13): LuOutcome {
   const { n, lu: a, perm } = f;
   if (n < BLOCKED_FROM) return luFactorInPlaceUnblocked(f, relTol);
-  let scale = 0;
-  for (let i = 0; i < n * n; i++) {
-    const v = Math.abs(a[i]);
-    if (v > scale) scale = v;
-  }
-  const tiny = relTol * scale;
-  for (let i = 0; i < n; i++) perm[i] = i;
+  const tiny = startFactor(a, n, perm, relTol);
   const packed = new Float64Array(BLOCK * (n + 4));
   for (let k0 = 0; k0 < n; k0 += BLOCK) {
     const k1 = Math.min(n, k0 + BLOCK);
     // 1. Panel: unblocked elimination restricted to columns k0 … k1−1.
     for (let k = k0; k < k1; k++) {
-      let p = k;
-      let big = Math.abs(a[k * n + k]);
-      for (let i = k + 1; i < n; i++) {
-        const v = Math.abs(a[i * n + k]);
-        if (v > big) {
-          big = v;
-          p = i;
-        }
-      }
+      const big = pivotInPlace(a, n, perm, k);
       if (!(big > tiny)) return { ok: false, reason: 'singular', column: k, pivot: big };
-      if (p !== k) {
-        const rk = k * n;
-        const rp = p * n;
-        for (let j = 0; j < n; j++) {
-          const t = a[rk + j];
-          a[rk + j] = a[rp + j];
-          a[rp + j] = t;
-        }
-        const t = perm[k];
-        perm[k] = perm[p];
-        perm[p] = t;
-      }
       const rk = k * n;
       const inv = 1 / a[rk + k];
       for (let i = k + 1; i < n; i++) {
@@ -192,37 +206,10 @@ export function luFactorInPlace(f: LuFactor, relTol = 1e-13): LuOutcome {
  */
 export function luFactorInPlaceUnblocked(f: LuFactor, relTol = 1e-13): LuOutcome {
   const { n, lu: a, perm } = f;
-  let scale = 0;
-  for (let i = 0; i < n * n; i++) {
-    const v = Math.abs(a[i]);
-    if (v > scale) scale = v;
-  }
-  const tiny = relTol * scale;
-  for (let i = 0; i < n; i++) perm[i] = i;
+  const tiny = startFactor(a, n, perm, relTol);
   for (let k = 0; k < n; k++) {
-    // Partial pivoting: largest magnitude in column k at or below the diagonal.
-    let p = k;
-    let big = Math.abs(a[k * n + k]);
-    for (let i = k + 1; i < n; i++) {
-      const v = Math.abs(a[i * n + k]);
-      if (v > big) {
-        big = v;
-        p = i;
-      }
-    }
+    const big = pivotInPlace(a, n, perm, k);
     if (!(big > tiny)) return { ok: false, reason: 'singular', column: k, pivot: big };
-    if (p !== k) {
-      const rk = k * n;
-      const rp = p * n;
-      for (let j = 0; j < n; j++) {
-        const t = a[rk + j];
-        a[rk + j] = a[rp + j];
-        a[rp + j] = t;
-      }
-      const t = perm[k];
-      perm[k] = perm[p];
-      perm[p] = t;
-    }
     const rk = k * n;
     const inv = 1 / a[rk + k];
     const j0 = k + 1;
