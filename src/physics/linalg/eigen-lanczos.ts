@@ -414,7 +414,7 @@ class RitzWork {
     const z = this.z.subarray(0, j);
     z.fill(0);
     z[j - 1] = 1;
-    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1, true).ok) return null;
+    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
     this.sortDescending(j);
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
@@ -430,7 +430,7 @@ class RitzWork {
     this.load(ws, j);
     const s = new Float64Array(j * j);
     for (let i = 0; i < j; i++) s[i * j + i] = 1;
-    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j, true);
+    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
     this.sortDescending(j);
     const out: { theta: number; x: Float64Array; mx: Float64Array }[] = [];
     const q = ws.q;
