@@ -4,38 +4,13 @@
  * Matrix Computations, §8.3). Used by the Lanczos solver on its small projected matrix and by the dense
  * reference solver after Householder reduction.
  */
+import { hypot2 } from './hypot';
 
 export type TridiagonalOutcome = { ok: true } | { ok: false; reason: 'not-converged'; index: number };
 
 const EPS = 2.220446049250313e-16;
 const MAX_SWEEPS = 60;
 
-/**
- * Math.hypot(a, b), bit for bit as V8 computes it (scale by the larger magnitude, then a Kahan-compensated
- * sum of the squares), but inline: the builtin is a generic variadic call, several times slower, and QL calls
- * it twice per rotation. Checked equal to Math.hypot on millions of random pairs over the whole exponent
- * range and on ±0, ±∞, NaN and subnormals, so the eigen-solvers' results do not move by a single bit.
- */
-export function hypot2(a: number, b: number): number {
-  const x = Math.abs(a);
-  const y = Math.abs(b);
-  if (x === Infinity || y === Infinity) return Infinity;
-  if (x !== x || y !== y) return NaN;
-  const max = x > y ? x : y;
-  if (max === 0) return 0;
-  let sum = 0;
-  let compensation = 0;
-  let r = x / max;
-  let summand = r * r - compensation;
-  let preliminary = sum + summand;
-  compensation = preliminary - sum - summand;
-  sum = preliminary;
-  r = y / max;
-  summand = r * r - compensation;
-  preliminary = sum + summand;
-  sum = preliminary;
-  return Math.sqrt(sum) * max;
-}
 
 /**
  * In place: on entry `d[0..n)` is the diagonal and `e[i]` = T(i+1, i) for i < n − 1 (e needs length ≥ n;

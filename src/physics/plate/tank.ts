@@ -21,6 +21,7 @@ import { integralMatrix, sampleBasis } from './basis';
 import { choleskyInPlace, choleskySolveInPlace } from '../linalg/dense-cholesky';
 import type { Basis1D } from './basis';
 import { gaussLegendre, legendreInto } from './gauss';
+import { hypot2 } from '../linalg/hypot';
 
 export interface TankGeometry {
   /** Plate width = tank width a, plate height b, liquid depth d (m). */
@@ -107,7 +108,7 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   // quadratic forms below are plain dot products of weighted projections.
   const root = new Float64Array(M * N);
   for (let m = 0; m < M; m++) for (let n = 0; n < N; n++) {
-    const k = Math.hypot((m * Math.PI) / a, gamma[n]);
+    const k = hypot2((m * Math.PI) / a, gamma[n]);
     const norm = (m === 0 ? 1 : 0.5) * a * (d / 2);
     let s = 0;
     for (const L of tank.reachesM) s += 1 / (norm * k * (Number.isFinite(L) ? Math.tanh(k * L) : 1));

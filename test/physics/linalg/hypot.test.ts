@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { seededUniform01 } from '../../../src/physics/linalg/seeded';
-import { hypot2 } from '../../../src/physics/linalg/tridiagonal';
+import { hypot2 } from '../../../src/physics/linalg/hypot';
 
 describe('the QL rotations’ inline hypot', () => {
   it('equals Math.hypot bit for bit on random pairs over the whole exponent range (cross-check)', () => {
