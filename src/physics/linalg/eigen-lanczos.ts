@@ -133,7 +133,10 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     const run = lanczosRun(factor, m, locked, Math.min(need + 2, n - locked.length), tol, rand);
     steps += run.steps;
     if (!run.ok) return { ok: false, reason: 'not-converged', message: `Lanczos did not converge in ${run.steps} steps` };
-    for (const theta of run.pairs) locked.push({ lambda: sigma + 1 / theta.theta, x: theta.x, mx: theta.mx });
+    for (const pair of run.pairs) {
+      pair.lambda = sigma + 1 / pair.theta;
+      locked.push(pair);
+    }
     locked.sort((p, q) => p.lambda - q.lambda);
     if (locked.length < want && locked.length < n) continue;
     // Sturm check: every eigenvalue below μ must be among the pairs found.
@@ -192,7 +195,7 @@ interface RunOutcome {
   ok: boolean;
   steps: number;
   /** Converged Ritz pairs of OP, largest θ first. */
-  pairs: { theta: number; x: Float64Array; mx: Float64Array }[];
+  pairs: RitzVector[];
 }
 
 /**
@@ -424,31 +427,59 @@ class RitzWork {
     return { converged: true };
   }
 
-  /** The `want` largest Ritz pairs of the converged run: full eigenvectors of T once, then x = Q s. */
-  pairs(ws: Workspace, j: number, want: number): { theta: number; x: Float64Array; mx: Float64Array }[] {
-    const n = ws.n;
+  /**
+   * The `want` largest Ritz pairs of the converged run: full eigenvectors of T once; x = Q s and M x = (MQ) s
+   * are formed only when read (see RitzVector).
+   */
+  pairs(ws: Workspace, j: number, want: number): RitzVector[] {
     this.load(ws, j);
     const s = new Float64Array(j * j);
     for (let i = 0; i < j; i++) s[i * j + i] = 1;
     tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
     this.sortDescending(j);
-    const out: { theta: number; x: Float64Array; mx: Float64Array }[] = [];
-    const q = ws.q;
-    const mq = ws.mq;
+    const out: RitzVector[] = [];
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
-      const x = new Float64Array(n);
-      const mx = new Float64Array(n);
-      for (let r = 0; r < j; r++) {
-        const c = s[r * j + col];
-        if (c === 0) continue;
-        const off = r * n;
-        for (let i = 0; i < n; i++) {
-          x[i] += c * q[off + i];
-          mx[i] += c * mq[off + i];
-        }
-      }
-      out.push({ theta: this.d[col], x, mx });
+      out.push(new RitzVector(this.d[col], ws, s, j, col));
+    }
+    return out;
+  }
+}
+
+/**
+ * A converged Ritz pair whose vectors are combined from the run's basis on first read: a run converges
+ * two pairs beyond those wanted (their values serve the Sturm check) and M x is needed only after a
+ * restart, so most combinations are never formed. The basis is not touched after its run ends, and each
+ * vector is summed in the same order as when formed at once, so the values are the same to the bit.
+ */
+class RitzVector implements RitzPair {
+  /** λ = σ + 1/θ, set by the caller that knows σ. */
+  lambda = 0;
+  private xv: Float64Array | null = null;
+  private mxv: Float64Array | null = null;
+  constructor(
+    readonly theta: number,
+    private readonly ws: Workspace,
+    private readonly s: Float64Array,
+    private readonly j: number,
+    private readonly col: number,
+  ) {}
+  get x(): Float64Array {
+    return (this.xv ??= this.combine(this.ws.q));
+  }
+  get mx(): Float64Array {
+    return (this.mxv ??= this.combine(this.ws.mq));
+  }
+  /** Σ_r s[r, col] · basis vector r. */
+  private combine(basis: Float64Array): Float64Array {
+    const { n } = this.ws;
+    const { s, j, col } = this;
+    const out = new Float64Array(n);
+    for (let r = 0; r < j; r++) {
+      const c = s[r * j + col];
+      if (c === 0) continue;
+      const off = r * n;
+      for (let i = 0; i < n; i++) out[i] += c * basis[off + i];
     }
     return out;
   }
