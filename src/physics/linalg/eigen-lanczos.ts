@@ -128,10 +128,12 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
   let steps = 0;
   let restarts = 0;
   const sturm = createLdltFactor(n, k.halfBandwidth);
+  let lastRun: Workspace | null = null;
   for (;;) {
     const need = want - Math.min(locked.length, want) || 1;
     const run = lanczosRun(factor, m, locked, Math.min(need + 2, n - locked.length), tol, rand);
     steps += run.steps;
+    lastRun = run.ws;
     if (!run.ok) return { ok: false, reason: 'not-converged', message: `Lanczos did not converge in ${run.steps} steps` };
     for (const pair of run.pairs) {
       pair.lambda = sigma + 1 / pair.theta;
@@ -161,6 +163,8 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     }
     mOrthonormalise(m, vectors, want, n);
   }
+  // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
+  if (lastRun) recycleBasis(lastRun);
   return { ok: true, values, vectors, shift: sigma, steps, restarts };
 }
 
@@ -194,8 +198,20 @@ function mOrthonormalise(m: SymBanded, vectors: Float64Array, count: number, n: 
 interface RunOutcome {
   ok: boolean;
   steps: number;
+  /** The run's workspace (its basis backs the pairs' vectors until they are read). */
+  ws: Workspace;
   /** Converged Ritz pairs of OP, largest θ first. */
   pairs: RitzVector[];
+}
+
+/** Basis arrays kept from the last finished solve (the solver runs on one thread and never re-enters). */
+let spareBasis: { q: Float64Array; mq: Float64Array } | null = null;
+/** Largest basis kept between solves (floats per array): 32 MB for the pair. */
+const SPARE_LIMIT = 1 << 21;
+
+function recycleBasis(ws: Workspace): void {
+  if (ws.q.length > SPARE_LIMIT) return;
+  if (!spareBasis || spareBasis.q.length < ws.q.length) spareBasis = { q: ws.q, mq: ws.mq };
 }
 
 /**
@@ -217,8 +233,17 @@ class Workspace {
     cap: number,
   ) {
     this.cap = cap;
-    this.q = new Float64Array(cap * n);
-    this.mq = new Float64Array(cap * n);
+    // The basis arrays are the large ones: taken from the last solve's when they fit (a refinement's
+    // dry and wet solves, and the next mesh, which has about twice the DOFs), else made with room for that.
+    // Stale entries are harmless: vector j is written before anything reads it.
+    if (spareBasis && spareBasis.q.length >= cap * n) {
+      this.q = spareBasis.q;
+      this.mq = spareBasis.mq;
+      spareBasis = null;
+    } else {
+      this.q = new Float64Array(2 * cap * n);
+      this.mq = new Float64Array(2 * cap * n);
+    }
     this.alpha = new Float64Array(cap);
     this.beta = new Float64Array(cap + 1);
     this.omPrev = new Float64Array(cap + 1);
@@ -310,13 +335,19 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     }
     // r = OP q_j = (K − σM)⁻¹ M q_j, then the three-term recurrence.
     solveLdltInto(f, mq.subarray(off, off + n), r);
+    // α_j = (M q_j)ᵀ r, summed in the same pass that subtracts β_j q_{j−1} (same operations, same order).
+    let aj = 0;
     if (j > 0) {
       const bj = beta[j];
       const po = off - n;
-      for (let i = 0; i < n; i++) r[i] -= bj * q[po + i];
+      for (let i = 0; i < n; i++) {
+        const ri = r[i] - bj * q[po + i];
+        r[i] = ri;
+        aj += mq[off + i] * ri;
+      }
+    } else {
+      for (let i = 0; i < n; i++) aj += mq[off + i] * r[i];
     }
-    let aj = 0;
-    for (let i = 0; i < n; i++) aj += mq[off + i] * r[i];
     alpha[j] = aj;
     for (let i = 0; i < n; i++) r[i] -= aj * q[off + i];
     if (locked.length > 0) orthLocked(r);
@@ -364,8 +395,8 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     const exhausted = j >= maxSteps;
     if (j >= want) {
       const check = ritz.check(ws, j, breakdown ? 0 : b, want, tol, exhausted);
-      if (!check) return { ok: false, steps: j, pairs: [] };
-      if (check.converged) return { ok: true, steps: j, pairs: ritz.pairs(ws, j, want) };
+      if (!check) return { ok: false, steps: j, ws, pairs: [] };
+      if (check.converged) return { ok: true, steps: j, ws, pairs: ritz.pairs(ws, j, want) };
     }
     // Rotate the ω rows: the new vector becomes the current one.
     ws.omPrev = omCur;
@@ -381,7 +412,7 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
       mask.fill(0);
     }
   }
-  return { ok: false, steps: j, pairs: [] };
+  return { ok: false, steps: j, ws, pairs: [] };
 }
 
 /** The tridiagonal's eigen-decomposition, with buffers reused from check to check. */
