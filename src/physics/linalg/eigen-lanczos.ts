@@ -434,9 +434,24 @@ class RitzWork {
     }
   }
 
-  private sortDescending(j: number): void {
+  /**
+   * `order[0 … count)`: indices of the `count` largest of d[0 … j), largest first, ties by index — the head
+   * of a stable descending sort, by insertion, without sorting (and allocating) all j every step.
+   */
+  private largestFirst(j: number, count: number): void {
     const d = this.d;
-    this.order = Array.from({ length: j }, (_, i) => i).sort((p, r) => d[r] - d[p]);
+    const order = this.order;
+    let len = 0;
+    for (let i = 0; i < j; i++) {
+      const v = d[i];
+      let pos = len;
+      while (pos > 0 && d[order[pos - 1]] < v) pos--;
+      if (pos >= count) continue;
+      for (let k = Math.min(len, count - 1); k > pos; k--) order[k] = order[k - 1];
+      order[pos] = i;
+      if (len < count) len++;
+    }
+    order.length = len;
   }
 
   /**
@@ -449,7 +464,7 @@ class RitzWork {
     z.fill(0);
     z[j - 1] = 1;
     if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
-    this.sortDescending(j);
+    this.largestFirst(j, Math.min(want, j));
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
       const theta = this.d[col];
@@ -467,7 +482,7 @@ class RitzWork {
     const s = new Float64Array(j * j);
     for (let i = 0; i < j; i++) s[i * j + i] = 1;
     tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
-    this.sortDescending(j);
+    this.largestFirst(j, Math.min(want, j));
     const out: RitzVector[] = [];
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
