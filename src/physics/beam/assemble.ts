@@ -81,11 +81,14 @@ export function assembleMember(model: MemberModel, mesh: Mesh, plan: AddedMassPl
     const h = mesh.z[e + 1] - mesh.z[e];
     const wet = plan !== null && mesh.submerged[e] === 1;
     const o = e * GAUSS_N;
-    ei.set(props.ei.subarray(o, o + GAUSS_N));
-    mass.set(props.mass.subarray(o, o + GAUSS_N));
-    added.set(props.added.subarray(o, o + GAUSS_N));
-    kga.set(props.kga.subarray(o, o + GAUSS_N));
-    rotary.set(props.rotary.subarray(o, o + GAUSS_N));
+    // Copied value by value: a subarray view per property and element would be garbage by the thousand.
+    for (let g = 0; g < GAUSS_N; g++) {
+      ei[g] = props.ei[o + g];
+      mass[g] = props.mass[o + g];
+      added[g] = props.added[o + g];
+      kga[g] = props.kga[o + g];
+      rotary[g] = props.rotary[o + g];
+    }
     soil.fill(mesh.soilModulus[e]);
     ke.fill(0);
     kg.fill(0);

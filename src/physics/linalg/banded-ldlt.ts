@@ -84,13 +84,11 @@ export function solveLdltInto(f: LdltFactor, rhs: Float64Array, out: Float64Arra
     const rk = k * w;
     for (let p = 1; p <= last; p++) out[k + p] -= data[rk + p] * yk;
   }
-  // D z = y.
-  for (let k = 0; k < n; k++) out[k] /= data[k * w];
-  // Lᵀ x = z.
+  // D z = y and Lᵀ x = z in one backward pass (z_k = y_k / d_k is formed just before it is used).
   for (let k = n - 1; k >= 0; k--) {
     const last = Math.min(b, n - 1 - k);
     const rk = k * w;
-    let s = out[k];
+    let s = out[k] / data[rk];
     for (let p = 1; p <= last; p++) s -= data[rk + p] * out[k + p];
     out[k] = s;
   }

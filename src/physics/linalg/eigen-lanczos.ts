@@ -128,12 +128,17 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
   let steps = 0;
   let restarts = 0;
   const sturm = createLdltFactor(n, k.halfBandwidth);
+  let lastRun: Workspace | null = null;
   for (;;) {
     const need = want - Math.min(locked.length, want) || 1;
     const run = lanczosRun(factor, m, locked, Math.min(need + 2, n - locked.length), tol, rand);
     steps += run.steps;
+    lastRun = run.ws;
     if (!run.ok) return { ok: false, reason: 'not-converged', message: `Lanczos did not converge in ${run.steps} steps` };
-    for (const theta of run.pairs) locked.push({ lambda: sigma + 1 / theta.theta, x: theta.x, mx: theta.mx });
+    for (const pair of run.pairs) {
+      pair.lambda = sigma + 1 / pair.theta;
+      locked.push(pair);
+    }
     locked.sort((p, q) => p.lambda - q.lambda);
     if (locked.length < want && locked.length < n) continue;
     // Sturm check: every eigenvalue below μ must be among the pairs found.
@@ -158,6 +163,8 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     }
     mOrthonormalise(m, vectors, want, n);
   }
+  // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
+  if (lastRun) recycleBasis(lastRun);
   return { ok: true, values, vectors, shift: sigma, steps, restarts };
 }
 
@@ -191,8 +198,20 @@ function mOrthonormalise(m: SymBanded, vectors: Float64Array, count: number, n: 
 interface RunOutcome {
   ok: boolean;
   steps: number;
+  /** The run's workspace (its basis backs the pairs' vectors until they are read). */
+  ws: Workspace;
   /** Converged Ritz pairs of OP, largest θ first. */
-  pairs: { theta: number; x: Float64Array; mx: Float64Array }[];
+  pairs: RitzVector[];
+}
+
+/** Basis arrays kept from the last finished solve (the solver runs on one thread and never re-enters). */
+let spareBasis: { q: Float64Array; mq: Float64Array } | null = null;
+/** Largest basis kept between solves (floats per array): 32 MB for the pair. */
+const SPARE_LIMIT = 1 << 21;
+
+function recycleBasis(ws: Workspace): void {
+  if (ws.q.length > SPARE_LIMIT) return;
+  if (!spareBasis || spareBasis.q.length < ws.q.length) spareBasis = { q: ws.q, mq: ws.mq };
 }
 
 /**
@@ -214,8 +233,17 @@ class Workspace {
     cap: number,
   ) {
     this.cap = cap;
-    this.q = new Float64Array(cap * n);
-    this.mq = new Float64Array(cap * n);
+    // The basis arrays are the large ones: taken from the last solve's when they fit (a refinement's
+    // dry and wet solves, and the next mesh, which has about twice the DOFs), else made with room for that.
+    // Stale entries are harmless: vector j is written before anything reads it.
+    if (spareBasis && spareBasis.q.length >= cap * n) {
+      this.q = spareBasis.q;
+      this.mq = spareBasis.mq;
+      spareBasis = null;
+    } else {
+      this.q = new Float64Array(2 * cap * n);
+      this.mq = new Float64Array(2 * cap * n);
+    }
     this.alpha = new Float64Array(cap);
     this.beta = new Float64Array(cap + 1);
     this.omPrev = new Float64Array(cap + 1);
@@ -307,13 +335,19 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     }
     // r = OP q_j = (K − σM)⁻¹ M q_j, then the three-term recurrence.
     solveLdltInto(f, mq.subarray(off, off + n), r);
+    // α_j = (M q_j)ᵀ r, summed in the same pass that subtracts β_j q_{j−1} (same operations, same order).
+    let aj = 0;
     if (j > 0) {
       const bj = beta[j];
       const po = off - n;
-      for (let i = 0; i < n; i++) r[i] -= bj * q[po + i];
+      for (let i = 0; i < n; i++) {
+        const ri = r[i] - bj * q[po + i];
+        r[i] = ri;
+        aj += mq[off + i] * ri;
+      }
+    } else {
+      for (let i = 0; i < n; i++) aj += mq[off + i] * r[i];
     }
-    let aj = 0;
-    for (let i = 0; i < n; i++) aj += mq[off + i] * r[i];
     alpha[j] = aj;
     for (let i = 0; i < n; i++) r[i] -= aj * q[off + i];
     if (locked.length > 0) orthLocked(r);
@@ -361,8 +395,8 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     const exhausted = j >= maxSteps;
     if (j >= want) {
       const check = ritz.check(ws, j, breakdown ? 0 : b, want, tol, exhausted);
-      if (!check) return { ok: false, steps: j, pairs: [] };
-      if (check.converged) return { ok: true, steps: j, pairs: ritz.pairs(ws, j, want) };
+      if (!check) return { ok: false, steps: j, ws, pairs: [] };
+      if (check.converged) return { ok: true, steps: j, ws, pairs: ritz.pairs(ws, j, want) };
     }
     // Rotate the ω rows: the new vector becomes the current one.
     ws.omPrev = omCur;
@@ -378,7 +412,7 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
       mask.fill(0);
     }
   }
-  return { ok: false, steps: j, pairs: [] };
+  return { ok: false, steps: j, ws, pairs: [] };
 }
 
 /** The tridiagonal's eigen-decomposition, with buffers reused from check to check. */
@@ -400,9 +434,24 @@ class RitzWork {
     }
   }
 
-  private sortDescending(j: number): void {
+  /**
+   * `order[0 … count)`: indices of the `count` largest of d[0 … j), largest first, ties by index — the head
+   * of a stable descending sort, by insertion, without sorting (and allocating) all j every step.
+   */
+  private largestFirst(j: number, count: number): void {
     const d = this.d;
-    this.order = Array.from({ length: j }, (_, i) => i).sort((p, r) => d[r] - d[p]);
+    const order = this.order;
+    let len = 0;
+    for (let i = 0; i < j; i++) {
+      const v = d[i];
+      let pos = len;
+      while (pos > 0 && d[order[pos - 1]] < v) pos--;
+      if (pos >= count) continue;
+      for (let k = Math.min(len, count - 1); k > pos; k--) order[k] = order[k - 1];
+      order[pos] = i;
+      if (len < count) len++;
+    }
+    order.length = len;
   }
 
   /**
@@ -415,7 +464,7 @@ class RitzWork {
     z.fill(0);
     z[j - 1] = 1;
     if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
-    this.sortDescending(j);
+    this.largestFirst(j, Math.min(want, j));
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
       const theta = this.d[col];
@@ -424,29 +473,59 @@ class RitzWork {
     return { converged: true };
   }
 
-  /** The `want` largest Ritz pairs of the converged run: full eigenvectors of T once, then x = Q s. */
-  pairs(ws: Workspace, j: number, want: number): { theta: number; x: Float64Array; mx: Float64Array }[] {
-    const n = ws.n;
+  /**
+   * The `want` largest Ritz pairs of the converged run: full eigenvectors of T once; x = Q s and M x = (MQ) s
+   * are formed only when read (see RitzVector).
+   */
+  pairs(ws: Workspace, j: number, want: number): RitzVector[] {
     this.load(ws, j);
     const s = new Float64Array(j * j);
     for (let i = 0; i < j; i++) s[i * j + i] = 1;
     tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
-    this.sortDescending(j);
-    const out: { theta: number; x: Float64Array; mx: Float64Array }[] = [];
+    this.largestFirst(j, Math.min(want, j));
+    const out: RitzVector[] = [];
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
-      const x = new Float64Array(n);
-      const mx = new Float64Array(n);
-      for (let r = 0; r < j; r++) {
-        const c = s[r * j + col];
-        if (c === 0) continue;
-        const off = r * n;
-        for (let i = 0; i < n; i++) {
-          x[i] += c * ws.q[off + i];
-          mx[i] += c * ws.mq[off + i];
-        }
-      }
-      out.push({ theta: this.d[col], x, mx });
+      out.push(new RitzVector(this.d[col], ws, s, j, col));
+    }
+    return out;
+  }
+}
+
+/**
+ * A converged Ritz pair whose vectors are combined from the run's basis on first read: a run converges
+ * two pairs beyond those wanted (their values serve the Sturm check) and M x is needed only after a
+ * restart, so most combinations are never formed. The basis is not touched after its run ends, and each
+ * vector is summed in the same order as when formed at once, so the values are the same to the bit.
+ */
+class RitzVector implements RitzPair {
+  /** λ = σ + 1/θ, set by the caller that knows σ. */
+  lambda = 0;
+  private xv: Float64Array | null = null;
+  private mxv: Float64Array | null = null;
+  constructor(
+    readonly theta: number,
+    private readonly ws: Workspace,
+    private readonly s: Float64Array,
+    private readonly j: number,
+    private readonly col: number,
+  ) {}
+  get x(): Float64Array {
+    return (this.xv ??= this.combine(this.ws.q));
+  }
+  get mx(): Float64Array {
+    return (this.mxv ??= this.combine(this.ws.mq));
+  }
+  /** Σ_r s[r, col] · basis vector r. */
+  private combine(basis: Float64Array): Float64Array {
+    const { n } = this.ws;
+    const { s, j, col } = this;
+    const out = new Float64Array(n);
+    for (let r = 0; r < j; r++) {
+      const c = s[r * j + col];
+      if (c === 0) continue;
+      const off = r * n;
+      for (let i = 0; i < n; i++) out[i] += c * basis[off + i];
     }
     return out;
   }

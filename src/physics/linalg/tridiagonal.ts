@@ -4,11 +4,13 @@
  * Matrix Computations, §8.3). Used by the Lanczos solver on its small projected matrix and by the dense
  * reference solver after Householder reduction.
  */
+import { hypot2 } from './hypot';
 
 export type TridiagonalOutcome = { ok: true } | { ok: false; reason: 'not-converged'; index: number };
 
 const EPS = 2.220446049250313e-16;
 const MAX_SWEEPS = 60;
+
 
 /**
  * In place: on entry `d[0..n)` is the diagonal and `e[i]` = T(i+1, i) for i < n − 1 (e needs length ≥ n;
@@ -38,7 +40,7 @@ export function tridiagonalEigenInPlace(
       if (++sweeps > MAX_SWEEPS) return { ok: false, reason: 'not-converged', index: l };
       // Shift from the leading 2×2 block (the eigenvalue of it closer to d[l]).
       let g = (d[l + 1] - d[l]) / (2 * e[l]);
-      let r = Math.hypot(g, 1);
+      let r = hypot2(g, 1);
       g = d[m] - d[l] + e[l] / (g + (g >= 0 ? r : -r));
       let s = 1;
       let c = 1;
@@ -48,7 +50,7 @@ export function tridiagonalEigenInPlace(
       for (let i = m - 1; i >= l; i--) {
         const f = s * e[i];
         const b = c * e[i];
-        r = Math.hypot(f, g);
+        r = hypot2(f, g);
         e[i + 1] = r;
         if (r === 0) {
           d[i + 1] -= p;

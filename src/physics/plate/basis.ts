@@ -134,10 +134,14 @@ export function sampleBasis(b: Basis1D, x: Float64Array): BasisSamples {
 export function integralMatrix(f: Float64Array, rows: number, g: Float64Array, cols: number, w: Float64Array): Float64Array {
   const n = w.length;
   const out = new Float64Array(rows * cols);
+  // w·f once per row: (w_q f_kq) g_mq is the product as written left to right, so the sums are unchanged to the bit.
+  const wf = new Float64Array(n);
   for (let k = 0; k < rows; k++) {
+    for (let q = 0; q < n; q++) wf[q] = w[q] * f[k * n + q];
     for (let m = 0; m < cols; m++) {
       let s = 0;
-      for (let q = 0; q < n; q++) s += w[q] * f[k * n + q] * g[m * n + q];
+      const gm = m * n;
+      for (let q = 0; q < n; q++) s += wf[q] * g[gm + q];
       out[k * cols + m] = s;
     }
   }

@@ -21,6 +21,7 @@ import { integralMatrix, sampleBasis } from './basis';
 import { choleskyInPlace, choleskySolveInPlace } from '../linalg/dense-cholesky';
 import type { Basis1D } from './basis';
 import { gaussLegendre, legendreInto } from './gauss';
+import { hypot2 } from '../linalg/hypot';
 
 export interface TankGeometry {
   /** Plate width = tank width a, plate height b, liquid depth d (m). */
@@ -73,6 +74,21 @@ function oddCosines(theta: number, count: number, out: Float64Array): void {
 }
 
 /**
+ * Scratch for the largest per-solve arrays (the projections P, the depth cosines, the gap projections), kept
+ * between calls so a first solve does not hand the garbage collector about a megabyte each time. The core
+ * runs on one thread and this function does not re-enter; nothing returned aliases these arrays.
+ */
+const scratch = { p: new Float64Array(0), cosZ: new Float64Array(0), g: new Float64Array(0) };
+
+/** The first `length` entries of scratch array `key`, zeroed (grown when too short). */
+function zeroedScratch(key: keyof typeof scratch, length: number): Float64Array {
+  if (scratch[key].length < length) scratch[key] = new Float64Array(length);
+  const a = scratch[key].subarray(0, length);
+  a.fill(0);
+  return a;
+}
+
+/**
  * Added-mass matrix (kg) on `count` plate shapes given as Ritz coefficients (`vectors`, mode k at
  * [k·bx.count·by.count …)), bases bx along the width and by up the height. null if the gap system is singular.
  */
@@ -96,7 +112,7 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   for (let n = 0; n < N; n++) gamma[n] = ((2 * n + 1) * Math.PI) / (2 * d);
   const qy = composite(0, wet, Math.max(2, Math.ceil((ny + N) / 6)));
   const nqy = qy.x.length;
-  const cosZ = new Float64Array(N * nqy);
+  const cosZ = zeroedScratch('cosZ', N * nqy);
   const cz = new Float64Array(N);
   for (let q = 0; q < nqy; q++) {
     oddCosines(gamma[0] * qy.x[q], N, cz);
@@ -107,7 +123,7 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   // quadratic forms below are plain dot products of weighted projections.
   const root = new Float64Array(M * N);
   for (let m = 0; m < M; m++) for (let n = 0; n < N; n++) {
-    const k = Math.hypot((m * Math.PI) / a, gamma[n]);
+    const k = hypot2((m * Math.PI) / a, gamma[n]);
     const norm = (m === 0 ? 1 : 0.5) * a * (d / 2);
     let s = 0;
     for (const L of tank.reachesM) s += 1 / (norm * k * (Number.isFinite(L) ? Math.tanh(k * L) : 1));
@@ -116,7 +132,7 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
   // Weighted modal projections P[i][m·N + n] = √z̄_mn Σ_kl c_kl Px[k, m] Py[l, n], contracted over k first
   // (T[m, l] = Σ_k c_kl Px[k, m]: nx·ny·M products, then M·ny·N).
   const MN = M * N;
-  const P = new Float64Array(count * MN);
+  const P = zeroedScratch('p', count * MN);
   const T = new Float64Array(M * ny);
   for (let i = 0; i < count; i++) {
     const c = vectors.subarray(i * nx * ny, (i + 1) * nx * ny);
@@ -162,7 +178,7 @@ export function tankAddedMass(bx: Basis1D, by: Basis1D, vectors: Float64Array, c
     const pl = new Float64Array(Q);
     const dpl = new Float64Array(Q);
     const d2pl = new Float64Array(Q);
-    const G = new Float64Array(Q * N);
+    const G = zeroedScratch('g', Q * N);
     for (let q = 0; q < qt.x.length; q++) {
       const t = qt.x[q];
       legendreInto(2 * t - 1, Q, pl, dpl, d2pl);
