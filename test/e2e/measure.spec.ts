@@ -108,6 +108,8 @@ test('a recording from synthetic motion events gives the spectrum, the picked pe
   await page.reload();
   await page.goto('/#/cases');
   await page.locator('li', { hasText: 'P7 field check' }).first().getByRole('button', { name: /^Open/ }).click();
+  // Opening a case moves to its Member screen once it is read: wait for that before going on to the field check.
+  await expect(page.getByRole('heading', { level: 1, name: 'Pile' })).toBeVisible();
   await page.goto('/#/measure');
   await expect(page.getByTestId('measurement-trend')).toContainText(picked.toFixed(3));
   await expect(page.getByTestId('measurement-trend')).toContainText('Tablet on the pile head');

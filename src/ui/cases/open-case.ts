@@ -58,16 +58,18 @@ export async function saveOpenCase(store: CaseStore, model: AppModel): Promise<S
     if (r.kind === 'conflict' && model.get().doc === opened) model.setConflict({ theirs: r.theirs?.case ?? null, revision: r.theirs?.revision ?? 0 });
     return { ok: false, text: sentence(r.message), kind: r.kind };
   }
-  afterOwnSave(store, model, opened, r.value);
+  await afterOwnSave(store, model, opened, r.value);
   return { ok: true, saved: r.value, text: `Saved ${quoted(r.value)}.` };
 }
 
-function afterOwnSave(store: CaseStore, model: AppModel, opened: Case | null, saved: Case): void {
+async function afterOwnSave(store: CaseStore, model: AppModel, opened: Case | null, saved: Case): Promise<void> {
   if (model.get().doc === opened) {
-    model.markSaved(saved);
-    // The draft held these same edits; a failure to clear it only means it is offered again later.
-    void store.clearDraft();
+    // The draft held these same edits. It is cleared before the screen says "Saved": a reload straight after
+    // would otherwise find the older draft (its clearing cut short by the unload) and reopen it as unsaved work.
+    // A failure to clear it only means it is offered again later.
     clearFallback(tabIdentity().id);
+    await store.clearDraft();
+    if (model.get().doc === opened) model.markSaved(saved);
   }
   void askPersistenceOnce(store);
 }
@@ -100,7 +102,7 @@ export async function resolveConflict(store: CaseStore, model: AppModel, choice:
   const toSave = choice === 'mine' ? doc : { ...doc, id: newCaseId(), name: conflictCopyName(doc.name, new Date()) };
   const r = choice === 'mine' ? await store.saveCase(toSave) : await store.saveCase(toSave, { baseRevision: null });
   if (!r.ok) return { ok: false, text: sentence(r.message), kind: r.kind };
-  afterOwnSave(store, model, opened, r.value);
+  await afterOwnSave(store, model, opened, r.value);
   return {
     ok: true,
     saved: r.value,

@@ -68,7 +68,8 @@ async function openFirstCase(model: BootServices['model'], openingLink: boolean)
     }
     if (!openingLink && !model.get().doc) {
       const first = await firstCase(store, tab.fresh, await openTabs(), lastOpenCase(tab.fresh));
-      if (first) {
+      // The user may have opened a case (from the Cases list) while the store was read: theirs stands.
+      if (first && !model.get().doc) {
         model.open(first.doc, first.mode, first.saved, first.baseRevision);
         // A first start (or a return to unsaved work) lands on the form, not an empty list.
         if (location.hash === '' || location.hash === '#' || location.hash === '#/') location.hash = first.mode === 'received' ? '#/results' : '#/member';
