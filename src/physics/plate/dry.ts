@@ -13,7 +13,7 @@ import { basisQuadrature, integralMatrix, makeBasis, sampleBasis } from './basis
 import type { Basis1D } from './basis';
 import { edgeSpring, geometricCondition } from './types';
 import type { EdgeCondition, PlateInput } from './types';
-import { BoundedMemo } from './memo';
+import { BoundedMemo } from '../memo/bounded-memo';
 
 export interface DryModes {
   bx: Basis1D;

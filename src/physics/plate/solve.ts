@@ -10,7 +10,7 @@ import { IMAGE_NOTE, rayleighAddedMass } from './rayleigh';
 import { sloshingModes } from './sloshing';
 import { tankAddedMass } from './tank';
 import { combineVectors, dominantDryMode, wetModes } from './wet';
-import { BoundedMemo } from './memo';
+import { BoundedMemo } from '../memo/bounded-memo';
 import type { PlateInput, PlateOutcome, PlateResolution, PlateResult, SloshingMode } from './types';
 
 const DEFAULTS: Required<PlateResolution> = {

@@ -8,13 +8,14 @@
  * what the next caller receives. Bound: MEMO_ENTRIES outcomes; a one-body result is about 2 kB of numbers
  * and text, a 24-body one about 0.3 MB, so the memo stays well under 10 MB in the worst case.
  */
+import { BoundedMemo } from '../memo/bounded-memo';
 import { solveSection } from './solve';
 import type { SectionInput, SectionOutcome, SolveOptions } from './types';
 
 /** Most remembered outcomes: a form's section, its previous edits and a few surroundings. */
 export const MEMO_ENTRIES = 32;
 
-const memo = new Map<string, SectionOutcome>();
+const memo = new BoundedMemo<SectionOutcome>(MEMO_ENTRIES);
 
 /** JSON with object keys sorted at every level (arrays keep their order); undefined members are dropped. */
 export function canonicalKey(v: unknown): string {
@@ -39,18 +40,8 @@ function deepFreeze<T>(v: T): T {
  * throws as `solveSection` does and is not remembered.
  */
 export function solveSectionMemo(input: SectionInput, options: SolveOptions = {}): Readonly<SectionOutcome> {
-  const key = canonicalKey({ input, options });
-  const hit = memo.get(key);
-  if (hit) {
-    // Most recently used last: Map keeps insertion order, so re-insert.
-    memo.delete(key);
-    memo.set(key, hit);
-    return hit;
-  }
-  const out = deepFreeze(solveSection(input, options));
-  memo.set(key, out);
-  if (memo.size > MEMO_ENTRIES) memo.delete(memo.keys().next().value as string);
-  return out;
+  // A throw (invalid input) leaves nothing behind; failures of the solve itself are outcomes and are kept.
+  return memo.get(canonicalKey({ input, options }), () => deepFreeze(solveSection(input, options))) as SectionOutcome;
 }
 
 /** Number of remembered outcomes (for tests). */

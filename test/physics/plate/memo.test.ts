@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { clearPlateMemos, solvePlate } from '../../../src/physics/plate';
 import type { PlateInput, PlateResult } from '../../../src/physics/plate';
-import { BoundedMemo } from '../../../src/physics/plate/memo';
+import { BoundedMemo } from '../../../src/physics/memo/bounded-memo';
 import { influenceTable, rayleighAddedMass } from '../../../src/physics/plate/rayleigh';
 import { expectClose } from '../../helpers/expect-close';
 

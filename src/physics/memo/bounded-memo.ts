@@ -1,8 +1,8 @@
 /**
- * A small bounded memo for the plate engine: pure results keyed by a string of every input that determines
- * them, least recently used dropped first. Between keystrokes most inputs stay the same (only a thickness, a
- * density or the excitation changes), so the dry modes and the added mass on them are reused rather than
- * recomputed. Cached arrays are shared: callers must treat them as read-only.
+ * A small bounded memo of pure results keyed by a string of every input that determines them, least recently
+ * used dropped first. Between keystrokes most inputs stay the same, so the plate engine's dry modes and added
+ * mass (src/physics/plate) and the section solver's outcomes (src/physics/section/memo.ts) are reused rather
+ * than recomputed. Cached values are shared: callers must treat them as read-only.
  */
 
 export class BoundedMemo<V> {
@@ -24,6 +24,11 @@ export class BoundedMemo<V> {
     this.entries.set(key, value);
     if (this.entries.size > this.capacity) this.entries.delete(this.entries.keys().next().value as string);
     return value;
+  }
+
+  /** Number of remembered values. */
+  get size(): number {
+    return this.entries.size;
   }
 
   clear(): void {
