@@ -6,6 +6,7 @@
  * On import every part is checked on its own: a bad photo or location is dropped with a note saying what was
  * expected and what was found, and never stops the case itself from opening.
  */
+import { got } from '../case/describe';
 
 export interface EvidencePhoto {
   /** "data:image/jpeg;base64,…" */
@@ -45,37 +46,30 @@ export interface ReadEvidence {
   dropped: string[];
 }
 
-function what(v: unknown): string {
-  if (v === null) return 'null';
-  if (Array.isArray(v)) return `a list of ${v.length}`;
-  if (typeof v === 'string') return v.length > 40 ? `text starting “${v.slice(0, 30)}…”` : `“${v}”`;
-  return typeof v === 'object' ? 'an object' : `${typeof v} ${String(v)}`;
-}
-
 const isTime = (v: unknown): v is string => typeof v === 'string' && v.length <= 40 && !Number.isNaN(Date.parse(v));
 const isSize = (v: unknown): v is number => typeof v === 'number' && Number.isInteger(v) && v >= 1 && v <= MAX_PHOTO_SIDE_PX;
 
 /** Null when the photo is usable; otherwise why not. */
 function photoProblem(p: unknown): string | null {
-  if (typeof p !== 'object' || p === null || Array.isArray(p)) return `expected an object with dataUrl, takenAt, widthPx and heightPx; got ${what(p)}`;
+  if (typeof p !== 'object' || p === null || Array.isArray(p)) return `expected an object with dataUrl, takenAt, widthPx and heightPx; ${got(p)}`;
   const r = p as Record<string, unknown>;
   const url = r.dataUrl;
-  if (typeof url !== 'string') return `expected dataUrl to be a JPEG data URL; got ${what(url)}`;
+  if (typeof url !== 'string') return `expected dataUrl to be a JPEG data URL; ${got(url)}`;
   if (url.length > MAX_PHOTO_DATA_URL_CHARS) return `expected a photo data URL of at most ${MAX_PHOTO_DATA_URL_CHARS} characters; got ${url.length}`;
-  if (!JPEG_DATA_URL.test(url)) return `expected a JPEG data URL (data:image/jpeg;base64,…); got ${what(url.slice(0, 40))}`;
-  if (!isTime(r.takenAt)) return `expected takenAt to be a date and time; got ${what(r.takenAt)}`;
-  if (!isSize(r.widthPx) || !isSize(r.heightPx)) return `expected widthPx and heightPx to be whole numbers from 1 to ${MAX_PHOTO_SIDE_PX}; got ${what(r.widthPx)} and ${what(r.heightPx)}`;
+  if (!JPEG_DATA_URL.test(url)) return `expected a JPEG data URL (data:image/jpeg;base64,…); ${got(url)}`;
+  if (!isTime(r.takenAt)) return `expected takenAt to be a date and time; ${got(r.takenAt)}`;
+  if (!isSize(r.widthPx) || !isSize(r.heightPx)) return `expected widthPx and heightPx to be whole numbers from 1 to ${MAX_PHOTO_SIDE_PX}; widthPx ${got(r.widthPx)}, heightPx ${got(r.heightPx)}`;
   return null;
 }
 
 function readLocation(l: unknown): EvidenceLocation | string {
-  if (typeof l !== 'object' || l === null || Array.isArray(l)) return `expected an object with latitudeDeg, longitudeDeg, accuracyM and at; got ${what(l)}`;
+  if (typeof l !== 'object' || l === null || Array.isArray(l)) return `expected an object with latitudeDeg, longitudeDeg, accuracyM and at; ${got(l)}`;
   const r = l as Record<string, unknown>;
   const num = (v: unknown, lo: number, hi: number): v is number => typeof v === 'number' && Number.isFinite(v) && v >= lo && v <= hi;
-  if (!num(r.latitudeDeg, -90, 90)) return `expected latitudeDeg from −90 to 90; got ${what(r.latitudeDeg)}`;
-  if (!num(r.longitudeDeg, -180, 180)) return `expected longitudeDeg from −180 to 180; got ${what(r.longitudeDeg)}`;
-  if (!num(r.accuracyM, 0, 1e7)) return `expected accuracyM, metres, from 0 to 10 000 000; got ${what(r.accuracyM)}`;
-  if (!isTime(r.at)) return `expected at to be a date and time; got ${what(r.at)}`;
+  if (!num(r.latitudeDeg, -90, 90)) return `expected latitudeDeg from −90 to 90; ${got(r.latitudeDeg)}`;
+  if (!num(r.longitudeDeg, -180, 180)) return `expected longitudeDeg from −180 to 180; ${got(r.longitudeDeg)}`;
+  if (!num(r.accuracyM, 0, 1e7)) return `expected accuracyM, metres, from 0 to 10 000 000; ${got(r.accuracyM)}`;
+  if (!isTime(r.at)) return `expected at to be a date and time; ${got(r.at)}`;
   return { latitudeDeg: r.latitudeDeg, longitudeDeg: r.longitudeDeg, accuracyM: r.accuracyM, at: r.at };
 }
 
@@ -84,13 +78,13 @@ export function readSiteEvidence(raw: unknown): ReadEvidence {
   const dropped: string[] = [];
   const evidence: SiteEvidence = { photos: [], location: null };
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
-    dropped.push(`the site evidence was left out: expected an object with photos and location; got ${what(raw)}`);
+    dropped.push(`the site evidence was left out: expected an object with photos and location; ${got(raw)}`);
     return { evidence, dropped };
   }
   const r = raw as Record<string, unknown>;
   const photos = r.photos ?? [];
   if (!Array.isArray(photos)) {
-    dropped.push(`the photos were left out: expected a list of photos; got ${what(photos)}`);
+    dropped.push(`the photos were left out: expected a list of photos; ${got(photos)}`);
   } else {
     photos.forEach((p, i) => {
       if (i >= MAX_FILE_PHOTOS) return;

@@ -49,8 +49,8 @@ describe('site evidence through a case file', () => {
     expect(photos.ok && photos.value.map((p) => p.id).includes('mine')).toBe(true);
     expect(photos.ok && photos.value.length).toBe(2);
     expect(await locationOf(c.id, f)).toEqual({ ok: true, value: mine });
-    expect(restoredText(r.ok ? r.value : (null as never), ['photo 3 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got “x”'])).toBe(
-      '1 site photo kept on this device with the case; 1 photo was already kept; the location already kept on this device was left as it was. From the site evidence, photo 3 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got “x”.',
+    expect(restoredText(r.ok ? r.value : (null as never), ['photo 3 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got "x"'])).toBe(
+      '1 site photo kept on this device with the case; 1 photo was already kept; the location already kept on this device was left as it was. From the site evidence, photo 3 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got "x".',
     );
   });
 });

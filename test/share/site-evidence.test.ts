@@ -39,7 +39,7 @@ describe('site evidence in the case file', () => {
     if (!r.ok) return;
     expect(r.value).toEqual(demoCase());
     expect(r.evidence).toEqual({ photos: [photo(8)], location: evidence().location });
-    expect(r.evidenceDropped).toEqual(['photo 1 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got “data:image/png;base64,iVBORw0KGgo=”']);
+    expect(r.evidenceDropped).toEqual(['photo 1 was left out: expected a JPEG data URL (data:image/jpeg;base64,…); got "data:image/png;base64,iVBORw0KGgo="']);
   });
 
   it('a photo too large, sizes that are not whole pixels, and a latitude out of range are each named', () => {
@@ -48,8 +48,8 @@ describe('site evidence in the case file', () => {
     expect(r.evidence).toEqual({ photos: [], location: null });
     expect(r.dropped).toEqual([
       `photo 1 was left out: expected a photo data URL of at most 700000 characters; got ${MAX_PHOTO_DATA_URL_CHARS + JPEG.length}`,
-      'photo 2 was left out: expected widthPx and heightPx to be whole numbers from 1 to 10000; got number 12.5 and number 1200',
-      'the location was left out: expected latitudeDeg from −90 to 90; got number 91',
+      'photo 2 was left out: expected widthPx and heightPx to be whole numbers from 1 to 10000; widthPx got 12.5, heightPx got 1200',
+      'the location was left out: expected latitudeDeg from −90 to 90; got 91',
     ]);
   });
 
@@ -62,7 +62,7 @@ describe('site evidence in the case file', () => {
 
   it('evidence of the wrong shape is dropped whole and the case opens without it', () => {
     const r = caseFromFileText(fileWith('photos'));
-    expect(r).toEqual({ ok: true, value: demoCase(), evidenceDropped: ['the site evidence was left out: expected an object with photos and location; got “photos”'] });
+    expect(r).toEqual({ ok: true, value: demoCase(), evidenceDropped: ['the site evidence was left out: expected an object with photos and location; got "photos"'] });
     const list = caseFromFileText(fileWith({ photos: { first: JPEG } }));
     expect(list.ok && list.evidenceDropped).toEqual(['the photos were left out: expected a list of photos; got an object']);
   });
