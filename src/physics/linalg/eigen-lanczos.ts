@@ -9,8 +9,10 @@
  * Lanczos vectors is tracked by Simon's ω-recurrence (no inner products needed); only when it passes √ε
  * is the new vector (and the next one) M-orthogonalised against all earlier ones. Semi-orthogonality
  * (|q_iᵀMq_j| ≤ √ε) keeps the tridiagonal's eigenvalues accurate to rounding and prevents spurious copies
- * (Simon, Theorem 4). The eigenvalues reported are the Ritz values σ + 1/θ: they carry the accuracy
- * of the solves, where a Rayleigh quotient xᵀKx on a fine mesh cancels terms of size ‖K‖.
+ * (Simon, Theorem 4). The eigenvalues are the Ritz values σ + 1/θ, except for the low modes of a
+ * stiff (fine-mesh) problem: there the factorisation's backward error ε‖K‖ leaves about ε·λmax/λ in a
+ * Ritz value, and a plain Rayleigh quotient xᵀKx cancels terms of size ‖K‖ just as badly, so those values
+ * are re-read as Rayleigh quotients summed in doubled precision (compensated-rayleigh.ts).
  * A Krylov space holds one vector per eigenvalue, so a repeated eigenvalue (the two rigid-body modes
  * of a free–free beam) could be missed: after convergence a Sturm count (inertia of K − μM) checks that
  * every eigenvalue below the highest one found is accounted for; if not, the found pairs are locked and
@@ -20,6 +22,7 @@ import { seededUniform01 } from './seeded';
 import { type SymBanded, symBandedGet, symBandedMulInto } from './banded';
 import { createLdltFactor, factorLdltInto, type LdltFactor, solveLdltInto } from './banded-ldlt';
 import { inverseRayleighRitz } from './eigen-rayleigh-ritz';
+import { compensatedRayleighQuotients } from './compensated-rayleigh';
 import { tridiagonalEigenInPlace } from './tridiagonal';
 
 export interface LowestModesOptions {
@@ -163,6 +166,12 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     }
     mOrthonormalise(m, vectors, want, n);
   }
+  // A low mode's Ritz value carries about ε·λmax/λ of rounding through the factorisation (λmax/λ1 reaches
+  // 1e16 on a 2,000-element beam): read it again as a compensated Rayleigh quotient where that could exceed
+  // 1e-12 (compensated-rayleigh.ts). The vector is accurate, so the quotient is, to its error squared.
+  let rough = 0;
+  while (rough < want && EPS * scale > 1e-12 * Math.abs(values[rough] - sigma)) rough++;
+  if (rough > 0) values.set(compensatedRayleighQuotients(k, m, vectors, rough));
   // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
   if (lastRun) recycleBasis(lastRun);
   return { ok: true, values, vectors, shift: sigma, steps, restarts };
