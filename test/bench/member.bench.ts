@@ -11,6 +11,7 @@ import pile from '../../examples/member-fender-pile-port-halloran.json';
 import riser from '../../examples/member-riser-skerry-alpha.json';
 import baffle from '../../examples/member-baffle-marrow-creek.json';
 import { report, seeded, time } from './timing';
+import { dumpEigenProblem } from './eigen-dump';
 import { buildStemModel } from '../../src/kinds/stem/build';
 
 /** 40 m tapered, flooded pile clamped at the root, with seeded lumped masses; 200 equal elements. */
@@ -67,6 +68,8 @@ export function run(): void {
   report('lowest 10 modes, banded shift-invert Lanczos', time(() => lowestModesBanded(system.kTotal, system.mDry, 10), 50, 10), 5);
   const fine = systemOf(model, 1000).system;
   report('lowest 10 modes, 1000 elements (2000 DOFs)', time(() => lowestModesBanded(fine.kTotal, fine.mDry, 10), 30, 5), 16);
+  dumpEigenProblem('member-200', system.kTotal, system.mDry, lowestModesBanded(system.kTotal, system.mDry, 10));
+  dumpEigenProblem('member-1000', fine.kTotal, fine.mDry, lowestModesBanded(fine.kTotal, fine.mDry, 10));
   const fineOnce = lowestModesBanded(fine.kTotal, fine.mDry, 10);
   if (fineOnce.ok) console.log(`  1000 elements: Lanczos steps ${fineOnce.steps}, restarts ${fineOnce.restarts}`);
   report('assembly of K, K_G, M (200 elements)', time(() => assembleMember(model, buildMesh(model, breaks, counts), null), 50, 10));
