@@ -5,7 +5,9 @@
  * removes the asymmetry.
  */
 import { createLuFactor, luFactorInPlace, luSolveManyInto, type LuFactor } from '../linalg/lu';
-import { assembleInto, createAssemblyWork, rigidNormalVelocities } from './assemble';
+import { assembleInto, createAssemblyWork, rigidNormalVelocities, rowAssembly } from './assemble';
+import { findMirror } from './mirror';
+import { solveMirrored } from './mirror-solve';
 import type { ImageMap } from './lines';
 import type { PanelSet } from './panels';
 
@@ -56,14 +58,22 @@ export function solveLevel(
   for (let j = 0; j < n; j++) if (P.bc[j] === 1) hasDirichlet = true;
   for (const g of group) if (g.sign < 0) hasDirichlet = true;
   const q = rigidNormalVelocities(P, refX, refY);
-  const lu = luWorkspace(n);
-  const rhs = new Float64Array(m3 * n);
   const pin = closed && !hasDirichlet;
-  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount, group.length));
-  const f = luFactorInPlace(lu);
-  if (!f.ok) return { ok: false, column: f.column };
+  const work = createAssemblyWork(P.nodeCount, group.length);
   const x = new Float64Array(m3 * n);
-  luSolveManyInto(lu, rhs, m3, x);
+  // A mirror-symmetric section splits into two half-size systems (mirror-solve.ts): same answer, less work.
+  const mirror = findMirror(P, group);
+  if (mirror) {
+    const out = solveMirrored(rowAssembly(P, group, q, K, pin, work), mirror, x, luWorkspace);
+    if (!out.ok) return out;
+  } else {
+    const lu = luWorkspace(n);
+    const rhs = new Float64Array(m3 * n);
+    assembleInto(P, group, q, K, pin, lu.lu, rhs, work);
+    const f = luFactorInPlace(lu);
+    if (!f.ok) return { ok: false, column: f.column };
+    luSolveManyInto(lu, rhs, m3, x);
+  }
 
   // Without any φ = 0 boundary the rigid motion must carry no net flux through the wetted outline
   // (∮ q ds = 0): otherwise the 2D potential grows like ln r (unbounded added mass) or, in a closed
