@@ -129,12 +129,13 @@ export function buildModel(input: SectionInput, panelsPerBody: number): SectionM
   const halfWidthForY: number[] = [];
   outlines.forEach((o) => {
     const whole = sampleChain(o.pieces, AREA_SAMPLES);
-    let poly = whole;
-    for (const l of lines) poly = clipByHalfPlane(poly, l.px, l.py, l.nx, l.ny);
     const clipped = lines.some((l) => {
       for (let q = 0; q < whole.length; q += 2) if (!((whole[q] - l.px) * l.nx + (whole[q + 1] - l.py) * l.ny > 0)) return true;
       return false;
     });
+    // A body wholly on the liquid side of every line is its own clip (every sample kept, no crossing).
+    let poly = whole;
+    if (clipped) for (const l of lines) poly = clipByHalfPlane(poly, l.px, l.py, l.nx, l.ny);
     // Exact area (Green's theorem on the pieces) unless clipped; clipped: dense polygon, error ~4e-7.
     wettedArea.push(clipped ? (poly.length >= 6 ? Math.abs(signedArea(poly)) : 0) : Math.abs(chainArea(o.pieces)));
     const b = bbox(poly);

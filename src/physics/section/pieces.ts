@@ -101,30 +101,36 @@ export function pieceLength(p: Piece): number {
   return len;
 }
 
-/**
- * Samples of a piece for geometric tests: `count` points from s = 0 (inclusive) to s = 1 (exclusive),
- * appended to `xs`/`ys`. Lines need one point (their start); arcs get points proportional to their angle.
- */
-export function samplePiece(p: Piece, perTurn: number, xs: number[], ys: number[]): void {
-  const count = p.kind === 'line' ? 1 : Math.max(2, Math.ceil((perTurn * Math.abs(p.t1 - p.t0)) / (2 * Math.PI)));
-  const out = [0, 0];
-  for (let k = 0; k < count; k++) {
-    pointAt(p, k / count, out);
-    xs.push(out[0]);
-    ys.push(out[1]);
-  }
+/** Number of samples `samplePiece` takes of a piece: one for a line (its start), arcs in proportion to their angle. */
+function sampleCount(p: Piece, perTurn: number): number {
+  return p.kind === 'line' ? 1 : Math.max(2, Math.ceil((perTurn * Math.abs(p.t1 - p.t0)) / (2 * Math.PI)));
 }
 
-/** Closed polygon sampling a closed chain of pieces: flat [x0, y0, x1, y1, ...]. */
-export function sampleChain(pieces: readonly Piece[], perTurn: number): Float64Array {
-  const xs: number[] = [];
-  const ys: number[] = [];
-  for (const p of pieces) samplePiece(p, perTurn, xs, ys);
-  const out = new Float64Array(2 * xs.length);
-  for (let i = 0; i < xs.length; i++) {
-    out[2 * i] = xs[i];
-    out[2 * i + 1] = ys[i];
+/**
+ * Samples of a piece for geometric tests: `sampleCount` points from s = 0 (inclusive) to s = 1 (exclusive),
+ * written as [x, y] pairs into `out` from pair index `at`. Returns the pair index after the last.
+ */
+export function samplePiece(p: Piece, perTurn: number, out: Float64Array, at: number): number {
+  const count = sampleCount(p, perTurn);
+  const pt = [0, 0];
+  for (let k = 0; k < count; k++) {
+    pointAt(p, k / count, pt);
+    out[2 * (at + k)] = pt[0];
+    out[2 * (at + k) + 1] = pt[1];
   }
+  return at + count;
+}
+
+/**
+ * Closed polygon sampling a closed chain of pieces: flat [x0, y0, x1, y1, ...]. Written straight into one
+ * typed array (the 4096-point samples of model.ts were most of a solve's short-lived garbage as growing arrays).
+ */
+export function sampleChain(pieces: readonly Piece[], perTurn: number): Float64Array {
+  let total = 0;
+  for (const p of pieces) total += sampleCount(p, perTurn);
+  const out = new Float64Array(2 * total);
+  let at = 0;
+  for (const p of pieces) at = samplePiece(p, perTurn, out, at);
   return out;
 }
 
