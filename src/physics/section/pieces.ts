@@ -134,6 +134,38 @@ export function sampleChain(pieces: readonly Piece[], perTurn: number): Float64A
   return out;
 }
 
+/**
+ * The samples of `sampleChain(pieces, perTurn)` that can be the farthest along the direction (dx, dy),
+ * appended as x, y pairs to `out`: each line's start, each arc's two end samples and the samples next to
+ * where dx·x + dy·y peaks on it. Along an arc that function is a sinusoid in the parameter,
+ * P cos t + Q sin t + const, peaking at t = atan2(Q, P); the samples beside the peak (±2, for round-off in
+ * locating it) are the largest there, so the largest over these candidates is the largest over all samples,
+ * the same number, from a few points instead of thousands.
+ */
+export function extremeSamples(pieces: readonly Piece[], perTurn: number, dx: number, dy: number, out: number[]): void {
+  const pt = [0, 0];
+  const push = (p: Piece, k: number, count: number) => {
+    pointAt(p, k / count, pt);
+    out.push(pt[0], pt[1]);
+  };
+  for (const p of pieces) {
+    const count = sampleCount(p, perTurn);
+    push(p, 0, count);
+    if (p.kind === 'line') continue;
+    push(p, count - 1, count);
+    const P = p.a * (dx * p.cos + dy * p.sin);
+    const Q = p.b * (dy * p.cos - dx * p.sin);
+    const peak = Math.atan2(Q, P);
+    const span = p.t1 - p.t0;
+    for (let m = -2; m <= 2; m++) {
+      const s = (peak + 2 * Math.PI * m - p.t0) / span;
+      if (!(s > -1 / count && s < 1 + 1 / count)) continue;
+      const k = Math.round(s * count);
+      for (let d = -2; d <= 2; d++) if (k + d >= 0 && k + d < count) push(p, k + d, count);
+    }
+  }
+}
+
 /** Gauss–Legendre nodes and weights on [0, 1], 8 points (exact for polynomials of degree ≤ 15). */
 const GL_X = [0.0198550717512319, 0.1016667612931866, 0.2372337950418355, 0.4082826787521751, 0.5917173212478249, 0.7627662049581645, 0.8983332387068134, 0.9801449282487681];
 const GL_W = [0.0506142681451881, 0.1111905172266872, 0.1568533229389436, 0.1813418916891810, 0.1813418916891810, 0.1568533229389436, 0.1111905172266872, 0.0506142681451881];
