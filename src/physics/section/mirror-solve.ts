@@ -18,10 +18,15 @@ import { assembleRow, type RowAssembly } from './assemble';
 export type HalfOutcome = { ok: true } | { ok: false; column: number };
 
 /**
- * Assembles and solves for all 3K motions into `x`. `workspace(order)` lends an LU workspace (used for one
- * half at a time). A singular half reports the panel of its pivot column.
+ * Assembles and solves for all 3K motions into `x`. `workspace(order, slot)` lends the LU workspaces of the
+ * two halves (slots 0 and 1). A singular half reports the panel of its pivot column.
  */
-export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Array, workspace: (order: number) => LuFactor): HalfOutcome {
+export function solveMirrored(
+  ra: RowAssembly,
+  mirror: Int32Array,
+  x: Float64Array,
+  workspace: (order: number, slot: number) => LuFactor,
+): HalfOutcome {
   const n = ra.P.count;
   const m3 = 3 * ra.bodyCount;
   // Representatives in panel order: the symmetric half's unknowns are `rows`, the antisymmetric half's
@@ -35,8 +40,11 @@ export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Arr
   }
   const ns = rows.length;
   const na = pairRows.length;
-  const as = new Float64Array(ns * ns);
-  const aa = new Float64Array(na * na);
+  // Both halves are folded straight into their LU workspaces, row by row as the rows are assembled.
+  const sym = workspace(ns, 0);
+  const anti = workspace(na, 1);
+  const as = sym.lu;
+  const aa = anti.lu;
   const bs = new Float64Array(m3 * ns);
   const ba = new Float64Array(m3 * na);
   const row = new Float64Array(n);
@@ -45,7 +53,6 @@ export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Arr
   for (let r = 0, ra2 = 0; r < ns; r++) {
     const i = rows[r];
     assembleRow(ra, i, row, 0, acc, mirror, accMirror);
-    const self = mirror[i] === i;
     const symRow = r * ns;
     for (let c = 0; c < ns; c++) {
       const j = rows[c];
@@ -53,7 +60,7 @@ export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Arr
       as[symRow + c] = js === j ? row[j] : row[j] + row[js];
     }
     for (let c = 0; c < m3; c++) bs[c * ns + r] = 0.5 * (acc[c] + accMirror[c]);
-    if (self) continue;
+    if (mirror[i] === i) continue;
     const antiRow = ra2 * na;
     for (let c = 0; c < na; c++) {
       const j = pairRows[c];
@@ -62,9 +69,9 @@ export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Arr
     for (let c = 0; c < m3; c++) ba[c * na + ra2] = 0.5 * (acc[c] - accMirror[c]);
     ra2++;
   }
-  const xs = solveHalf(as, ns, bs, m3, workspace);
+  const xs = solveHalf(sym, bs, m3);
   if (!xs.ok) return { ok: false, column: rows[xs.column] };
-  const xa = na > 0 ? solveHalf(aa, na, ba, m3, workspace) : { ok: true as const, x: new Float64Array(0) };
+  const xa = na > 0 ? solveHalf(anti, ba, m3) : { ok: true as const, x: new Float64Array(0) };
   if (!xa.ok) return { ok: false, column: pairRows[xa.column] };
   for (let c = 0; c < m3; c++) {
     const col = c * n;
@@ -84,18 +91,11 @@ export function solveMirrored(ra: RowAssembly, mirror: Int32Array, x: Float64Arr
   return { ok: true };
 }
 
-function solveHalf(
-  a: Float64Array,
-  order: number,
-  b: Float64Array,
-  m: number,
-  workspace: (order: number) => LuFactor,
-): { ok: true; x: Float64Array } | { ok: false; column: number } {
-  const lu = workspace(order);
-  lu.lu.set(a);
+/** Factors the half already in `lu` and solves its m right-hand sides (column-wise in `b`). */
+function solveHalf(lu: LuFactor, b: Float64Array, m: number): { ok: true; x: Float64Array } | { ok: false; column: number } {
   const f = luFactorInPlace(lu);
   if (!f.ok) return { ok: false, column: f.column };
-  const x = new Float64Array(m * order);
+  const x = new Float64Array(m * lu.n);
   luSolveManyInto(lu, b, m, x);
   return { ok: true, x };
 }

@@ -138,6 +138,12 @@ export interface SpanPanels {
   coarseCounts: number[];
   /** Node spreading per piece. */
   gradings: PieceGrading[];
+  /**
+   * Per piece, the graded fractions already found (by node position u = k/n on the piece): the levels are
+   * nested, so a coarser level's nodes (u = q/n = 2q/2n exactly) are all found at the finer one, and each
+   * costs a 60-step bisection.
+   */
+  fractions: Map<number, number>[];
 }
 
 /** A corner zone is added where the neighbouring piece is shorter than this fraction of the piece. */
@@ -178,7 +184,7 @@ export function planSpan(span: Span, total: number): SpanPanels {
     if (g.zone0 > 0) counts[neighbour(k, -1)] = Math.max(counts[neighbour(k, -1)], zoneCount);
     if (g.zone1 > 0) counts[neighbour(k, 1)] = Math.max(counts[neighbour(k, 1)], zoneCount);
   }
-  return { span, coarseCounts: counts, gradings };
+  return { span, coarseCounts: counts, gradings, fractions: pieces.map(() => new Map<number, number>()) };
 }
 
 /** Builds the panel set at level `factor` (1 = coarse, 2 = fine) from spans with their coarse counts. */
@@ -215,8 +221,16 @@ export function buildPanels(spans: readonly SpanPanels[], factor: number): Panel
     s.span.pieces.forEach((piece, k) => {
       const n = s.coarseCounts[k] * factor;
       // Nodes from the start of the piece; its end is the next piece's start (or the span's last node).
+      const known = s.fractions[k];
+      const g = s.gradings[k];
       for (let q = 0; q < n; q++) {
-        pointAt(piece, gradedFraction(q / n, s.gradings[k]), pt);
+        const u = q / n;
+        let f = known.get(u);
+        if (f === undefined) {
+          f = gradedFraction(u, g);
+          known.set(u, f);
+        }
+        pointAt(piece, f, pt);
         P.nodeX[node] = pt[0];
         P.nodeY[node] = pt[1];
         node++;

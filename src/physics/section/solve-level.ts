@@ -24,19 +24,21 @@ export interface LevelSolution {
 }
 
 /**
- * LU workspaces reused across solves, one per order, for orders up to 512 (at most 4 kept, 2 MB each at
- * most): the n² matrix is the solve's largest allocation, and re-allocating it per keystroke cost about
- * a tenth of the time in garbage collection. The factor is only used within one `solveLevel` call.
+ * LU workspaces reused across solves, per order and slot (a mirrored solve holds its two halves at once,
+ * slots 0 and 1), for orders up to 512 (at most 6 kept, 2 MB each at most): the n² matrix is the solve's
+ * largest allocation, and re-allocating it per keystroke cost about a tenth of the time in garbage
+ * collection. A workspace is only used within one `solveLevel` call.
  */
 const workspaces = new Map<number, LuFactor>();
 
-function luWorkspace(n: number): LuFactor {
+function luWorkspace(n: number, slot = 0): LuFactor {
   if (n > 512) return createLuFactor(n);
-  let w = workspaces.get(n);
+  const key = 2 * n + slot;
+  let w = workspaces.get(key);
   if (!w) {
-    if (workspaces.size >= 4) workspaces.delete(workspaces.keys().next().value as number);
+    if (workspaces.size >= 6) workspaces.delete(workspaces.keys().next().value as number);
     w = createLuFactor(n);
-    workspaces.set(n, w);
+    workspaces.set(key, w);
   }
   return w;
 }
