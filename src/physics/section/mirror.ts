@@ -22,13 +22,44 @@ import type { PanelSet } from './panels';
 /** Matching tolerance relative to the section's extent (coordinates of a symmetric input agree to ~1e-16). */
 const TOLERANCE = 1e-11;
 
+/** A symmetry line through (cx, cy) along the unit (dx, dy), and the panel permutation it induces. */
+export interface Mirror {
+  /** Panel j's mirror image σ(j), with σ(σ(j)) = j; σ(j) = j for a panel the line crosses at its midpoint. */
+  panel: Int32Array;
+  cx: number;
+  cy: number;
+  dx: number;
+  dy: number;
+  /** Matching tolerance used, m. */
+  tol: number;
+}
+
 /**
- * The mirror permutation of the panels (`σ(j)`, with σ(σ(j)) = j; σ(j) = j for a panel the line crosses at
- * its midpoint), or null when no symmetry line is found.
+ * The mirror symmetry of the panels, or null when no symmetry line is found. `nearby`, the mirror of a
+ * nested level with half or twice the panels (panel c of the coarser level is panels 2c and 2c + 1 of the
+ * finer, in the same order), proposes the permutation directly; it is checked panel by panel like any
+ * candidate, and the search runs only if it fails.
  */
-export function findMirror(P: PanelSet, group: readonly ImageMap[]): Int32Array | null {
+export function findMirror(P: PanelSet, group: readonly ImageMap[], nearby: Mirror | null = null): Mirror | null {
   const n = P.count;
   if (n < 2) return null;
+  if (nearby) {
+    const m = nearby.panel.length;
+    let proposed: Int32Array | null = null;
+    if (n === 2 * m) {
+      proposed = new Int32Array(n);
+      for (let c = 0; c < m; c++) {
+        // The mirror of a coarse panel runs the other way: its first child mirrors our second.
+        proposed[2 * c] = 2 * nearby.panel[c] + 1;
+        proposed[2 * c + 1] = 2 * nearby.panel[c];
+      }
+    } else if (2 * n === m) {
+      proposed = new Int32Array(n);
+      for (let c = 0; c < n; c++) proposed[c] = nearby.panel[2 * c] >> 1;
+    }
+    const { cx, cy, dx, dy, tol } = nearby;
+    if (proposed && checkPanels(P, proposed, cx, cy, -dy, dx, tol)) return { panel: proposed, cx, cy, dx, dy, tol };
+  }
   const { mx, my, len } = P;
   let total = 0;
   let cx = 0;
@@ -88,7 +119,7 @@ export function findMirror(P: PanelSet, group: readonly ImageMap[]): Int32Array 
     const ny = dx;
     if (!groupInvariant(group, cx, cy, nx, ny, tol)) continue;
     const map = matchPanels(P, cx, cy, dx, dy, tol);
-    if (map) return map;
+    if (map) return { panel: map, cx, cy, dx, dy, tol };
   }
   return null;
 }
@@ -127,19 +158,23 @@ function groupInvariant(group: readonly ImageMap[], cx: number, cy: number, nx: 
 
 /**
  * Pairs each panel with the panel whose midpoint is its reflected midpoint (panels sorted along the line,
- * each searched by bisection), then checks the ends (reversed), the boundary condition and the owner kind.
+ * each searched by bisection), then checks the pairing (`checkPanels`).
  */
 function matchPanels(P: PanelSet, cx: number, cy: number, dx: number, dy: number, tol: number): Int32Array | null {
   const n = P.count;
-  const { mx, my, pa, pb, nodeX, nodeY, bc, owner } = P;
+  const { mx, my } = P;
   const nx = -dy;
   const ny = dx;
   const u = new Float64Array(n);
-  for (let j = 0; j < n; j++) u[j] = (mx[j] - cx) * dx + (my[j] - cy) * dy;
-  const order = Int32Array.from({ length: n }, (_, j) => j).sort((a, b) => u[a] - u[b]);
-  const sorted = Float64Array.from(order, (j) => u[j]);
-  const map = new Int32Array(n).fill(-1);
-  const near = (ax: number, ay: number, bx: number, by: number) => Math.abs(ax - bx) <= tol && Math.abs(ay - by) <= tol;
+  const order = new Int32Array(n);
+  for (let j = 0; j < n; j++) {
+    u[j] = (mx[j] - cx) * dx + (my[j] - cy) * dy;
+    order[j] = j;
+  }
+  order.sort((a, b) => u[a] - u[b]);
+  const sorted = new Float64Array(n);
+  for (let q = 0; q < n; q++) sorted[q] = u[order[q]];
+  const map = new Int32Array(n);
   for (let j = 0; j < n; j++) {
     const w = 2 * ((mx[j] - cx) * nx + (my[j] - cy) * ny);
     const x = mx[j] - w * nx;
@@ -154,20 +189,38 @@ function matchPanels(P: PanelSet, cx: number, cy: number, dx: number, dy: number
     let found = -1;
     for (let q = lo; q < n && sorted[q] <= u[j] + tol; q++) {
       const k = order[q];
-      if (!near(mx[k], my[k], x, y)) continue;
+      if (!(Math.abs(mx[k] - x) <= tol && Math.abs(my[k] - y) <= tol)) continue;
       if (found >= 0) return null; // two panels at one point: not a clean mirror image
       found = k;
     }
-    if (found < 0 || bc[found] !== bc[j] || (owner[found] >= 0) !== (owner[j] >= 0)) return null;
-    // The mirror panel runs the other way: its start is the reflected end and its end the reflected start.
+    if (found < 0) return null;
+    map[j] = found;
+  }
+  return checkPanels(P, map, cx, cy, nx, ny, tol) ? map : null;
+}
+
+/**
+ * True when `map` is an involution pairing each panel with one whose midpoint is the reflected midpoint
+ * and which runs the other way (its start is the reflected end, its end the reflected start), with the same
+ * boundary condition and owner kind (body or not). Reflection in the line through (cx, cy) with unit
+ * normal (nx, ny): x' = x − 2((x − c)·ν)ν.
+ */
+function checkPanels(P: PanelSet, map: Int32Array, cx: number, cy: number, nx: number, ny: number, tol: number): boolean {
+  const n = P.count;
+  const { mx, my, pa, pb, nodeX, nodeY, bc, owner } = P;
+  const near = (ax: number, ay: number, bx: number, by: number) => Math.abs(ax - bx) <= tol && Math.abs(ay - by) <= tol;
+  for (let j = 0; j < n; j++) {
+    const k = map[j];
+    if (!(k >= 0 && k < n) || map[k] !== j) return false;
+    if (bc[k] !== bc[j] || (owner[k] >= 0) !== (owner[j] >= 0)) return false;
+    const w = 2 * ((mx[j] - cx) * nx + (my[j] - cy) * ny);
+    if (!near(mx[k], my[k], mx[j] - w * nx, my[j] - w * ny)) return false;
     const a = pa[j];
     const b = pb[j];
     const wa = 2 * ((nodeX[a] - cx) * nx + (nodeY[a] - cy) * ny);
     const wb = 2 * ((nodeX[b] - cx) * nx + (nodeY[b] - cy) * ny);
-    if (!near(nodeX[pa[found]], nodeY[pa[found]], nodeX[b] - wb * nx, nodeY[b] - wb * ny)) return null;
-    if (!near(nodeX[pb[found]], nodeY[pb[found]], nodeX[a] - wa * nx, nodeY[a] - wa * ny)) return null;
-    map[j] = found;
+    if (!near(nodeX[pa[k]], nodeY[pa[k]], nodeX[b] - wb * nx, nodeY[b] - wb * ny)) return false;
+    if (!near(nodeX[pb[k]], nodeY[pb[k]], nodeX[a] - wa * nx, nodeY[a] - wa * ny)) return false;
   }
-  for (let j = 0; j < n; j++) if (map[map[j]] !== j) return null;
-  return map;
+  return true;
 }

@@ -17,6 +17,7 @@
 import type { Piece } from './pieces';
 import { pieceLength, pointAt } from './pieces';
 import type { Span } from './domain';
+import { hypot2 } from '../linalg/hypot';
 
 export const GRADING_BETA = 2;
 
@@ -251,7 +252,7 @@ export function buildPanels(spans: readonly SpanPanels[], factor: number): Panel
       const b = s.span.closed ? first + ((q + 1) % nodesInSpan) : a + 1;
       const dx = P.nodeX[b] - P.nodeX[a];
       const dy = P.nodeY[b] - P.nodeY[a];
-      const L = Math.hypot(dx, dy);
+      const L = hypot2(dx, dy);
       P.pa[panel] = a;
       P.pb[panel] = b;
       P.len[panel] = L;

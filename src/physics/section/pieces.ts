@@ -6,6 +6,7 @@
  * (t1 < t0 runs clockwise). Panel nodes are placed on the exact curve; `gradeStart` / `gradeEnd` ask
  * for panels graded towards that end, where the outline has a corner and the flow is singular.
  */
+import { hypot2 } from '../linalg/hypot';
 
 export interface Piece {
   kind: 'line' | 'arc';
@@ -87,14 +88,14 @@ export function subPiece(p: Piece, s0: number, s1: number, gradeStart: boolean, 
 
 /** Arc length of a piece (arcs by 64-chord sum, relative error ~1e-4: used only to share out panels). */
 export function pieceLength(p: Piece): number {
-  if (p.kind === 'line') return Math.hypot(p.x1 - p.x0, p.y1 - p.y0);
+  if (p.kind === 'line') return hypot2(p.x1 - p.x0, p.y1 - p.y0);
   const out = [0, 0];
   let len = 0;
   let px = p.x0;
   let py = p.y0;
   for (let k = 1; k <= 64; k++) {
     pointAt(p, k / 64, out);
-    len += Math.hypot(out[0] - px, out[1] - py);
+    len += hypot2(out[0] - px, out[1] - py);
     px = out[0];
     py = out[1];
   }

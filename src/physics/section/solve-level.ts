@@ -6,10 +6,11 @@
  */
 import { createLuFactor, luFactorInPlace, luSolveManyInto, type LuFactor } from '../linalg/lu';
 import { assembleInto, createAssemblyWork, rigidNormalVelocities, rowAssembly } from './assemble';
-import { findMirror } from './mirror';
+import { findMirror, type Mirror } from './mirror';
 import { solveMirrored } from './mirror-solve';
 import type { ImageMap } from './lines';
 import type { PanelSet } from './panels';
+import { hypot2 } from '../linalg/hypot';
 
 export interface LevelSolution {
   panels: PanelSet;
@@ -21,6 +22,8 @@ export interface LevelSolution {
   m: Float64Array;
   /** Motions with net flux through the wetted outline (body resting on a wall moving off it). */
   blocked: boolean[];
+  /** The section's mirror symmetry at this level (mirror.ts), or null: a hint for the nested levels. */
+  mirror: Mirror | null;
 }
 
 /**
@@ -52,6 +55,7 @@ export function solveLevel(
   refY: readonly number[],
   density: number,
   closed: boolean,
+  nearbyMirror: Mirror | null = null,
 ): LevelOutcome {
   const n = P.count;
   const K = refX.length;
@@ -64,9 +68,9 @@ export function solveLevel(
   const work = createAssemblyWork(P.nodeCount, group.length);
   const x = new Float64Array(m3 * n);
   // A mirror-symmetric section splits into two half-size systems (mirror-solve.ts): same answer, less work.
-  const mirror = findMirror(P, group);
+  const mirror = findMirror(P, group, nearbyMirror);
   if (mirror) {
-    const out = solveMirrored(rowAssembly(P, group, q, K, pin, work), mirror, x, luWorkspace);
+    const out = solveMirrored(rowAssembly(P, group, q, K, pin, work), mirror.panel, x, luWorkspace);
     if (!out.ok) return out;
   } else {
     const lu = luWorkspace(n);
@@ -92,7 +96,7 @@ export function solveLevel(
         for (let j = 0; j < n; j++) {
           if (P.owner[j] !== k) continue;
           flux += q[3 * j + d] * P.len[j];
-          scale += (d < 2 ? 1 : Math.hypot(P.mx[j] - refX[k], P.my[j] - refY[k])) * P.len[j];
+          scale += (d < 2 ? 1 : hypot2(P.mx[j] - refX[k], P.my[j] - refY[k])) * P.len[j];
         }
         if (Math.abs(flux) > 1e-8 * scale) blocked[3 * k + d] = true;
       }
@@ -117,5 +121,5 @@ export function solveLevel(
       m[c * m3 + r] = 0;
     }
   }
-  return { ok: true, level: { panels: P, x, q, m, blocked } };
+  return { ok: true, level: { panels: P, x, q, m, blocked, mirror } };
 }

@@ -138,7 +138,9 @@ function solveAt(input: SectionInput, N: number, doublings: number, options: Sol
   let singularColumn = -1;
   const level = (factor: number): LevelSolution | null => {
     if (!solvedLevels.has(factor)) {
-      const out = solveLevel(buildPanels(model.spans, factor), model.group, model.refX, model.refY, rho, model.closed);
+      // A nested level already solved proposes the mirror symmetry (checked, not trusted).
+      const nearby = solvedLevels.get(2 * factor) ?? solvedLevels.get(factor / 2) ?? null;
+      const out = solveLevel(buildPanels(model.spans, factor), model.group, model.refX, model.refY, rho, model.closed, nearby?.mirror ?? null);
       if (!out.ok && singularColumn < 0) singularColumn = out.column;
       solvedLevels.set(factor, out.ok ? out.level : null);
     }

@@ -81,13 +81,41 @@ describe('mirror symmetry of the section', () => {
     });
   }
 
+  test('proposed from a nested level (twice or half the panels), it is the permutation the search finds', () => {
+    for (const [, input] of symmetric.slice(0, 3)) {
+      const model = buildModel(input, 32);
+      const levels = [1, 2, 4].map((f) => buildPanels(model.spans, f));
+      const searched = levels.map((P) => findMirror(P, model.group));
+      for (let l = 0; l < 3; l++) {
+        for (const from of [l - 1, l + 1]) {
+          if (from < 0 || from > 2) continue;
+          const proposed = findMirror(levels[l], model.group, searched[from]);
+          expect(Array.from(proposed?.panel ?? [])).toEqual(Array.from(searched[l]?.panel ?? [null]));
+        }
+      }
+    }
+  });
+
+  test('a wrong hint is checked and not trusted: the search decides', () => {
+    const model = buildModel(symmetric[0][1], 32);
+    const coarse = findMirror(buildPanels(model.spans, 1), model.group);
+    if (!coarse) throw new Error('no mirror found');
+    // Every panel its own mirror, on the right line: a permutation of the right size that is no symmetry.
+    const wrong = { ...coarse, panel: Int32Array.from(coarse.panel, (_, j) => j) };
+    const P = buildPanels(model.spans, 2);
+    const found = findMirror(P, model.group, wrong);
+    expect(Array.from(found?.panel ?? [])).toEqual(Array.from(findMirror(P, model.group)?.panel ?? [null]));
+    expect(found?.panel.some((k, j) => k !== j)).toBe(true);
+  });
+
   test('pairs each panel with one that runs the other way, and maps panels crossed by the line to themselves', () => {
     // A 2 × 1 rectangle: its 16 coarse panels are shared 5, 3, 5, 3 between the sides by length, so the x axis
     // crosses one panel of each short side at its midpoint.
     const model = buildModel({ liquidDensityKgPerM3: RHO, bodies: [{ shape: 'rectangle', widthM: 2, heightM: 1 }] }, 64);
     const P = buildPanels(model.spans, 1);
-    const mirror = findMirror(P, model.group);
-    if (!mirror) throw new Error('no mirror found');
+    const found = findMirror(P, model.group);
+    if (!found) throw new Error('no mirror found');
+    const mirror = found.panel;
     let self = 0;
     for (let j = 0; j < P.count; j++) {
       const k = mirror[j];
