@@ -5,7 +5,7 @@
  */
 import { lineDistance } from './lines';
 import type { SectionModel } from './model';
-import type { Polygon } from './polygon';
+import { bbox, type Polygon } from './polygon';
 
 /** Edges per chunk of an outline; a chunk is skipped whole when its bounding box is farther than the best gap. */
 const CHUNK = 16;
@@ -56,6 +56,7 @@ function polygonGap(p: Polygon, q: Polygon, best: number): number {
 /** Per body, the narrowest gap to any other outline or straight boundary, m (Infinity when alone in open liquid). */
 export function bodyClearances(model: SectionModel): number[] {
   const polys = model.bodyPolygons;
+  const boxes = polys.map(bbox);
   return polys.map((p, k) => {
     let gap = Infinity;
     for (const l of model.lines) {
@@ -66,7 +67,11 @@ export function bodyClearances(model: SectionModel): number[] {
     }
     if (model.enclosurePolygon) gap = polygonGap(p, model.enclosurePolygon, gap);
     polys.forEach((q, j) => {
-      if (j !== k) gap = polygonGap(p, q, gap);
+      // No vertex of p is nearer to q than their bounding boxes are to each other: skip pairs already beaten.
+      const [a, b] = [boxes[k], boxes[j]];
+      const dx = Math.max(a[0] - b[2], b[0] - a[2], 0);
+      const dy = Math.max(a[1] - b[3], b[1] - a[3], 0);
+      if (j !== k && dx * dx + dy * dy < gap * gap) gap = polygonGap(p, q, gap);
     });
     return gap;
   });

@@ -4,7 +4,7 @@
  */
 import type { SectionInput } from './types';
 import { bodyOutline, enclosureOutline } from './shapes';
-import { chainArea, sampleChain, pieceLength } from './pieces';
+import { chainArea, extremeSamples, sampleChain, pieceLength } from './pieces';
 import { clipChain, lineIntervals, type Span } from './domain';
 import { imageGroup, type ImageMap, type Line } from './lines';
 import { planSpan, shareByLength, type SpanPanels } from './panels';
@@ -123,20 +123,34 @@ export function buildModel(input: SectionInput, panelsPerBody: number): SectionM
     );
   }
 
-  // Wetted areas and extents from dense polygons clipped by the liquid half-planes.
+  // Wetted areas and extents from dense samples of the outlines, clipped by the liquid half-planes.
   const wettedArea: number[] = [];
   const halfWidthForX: number[] = [];
   const halfWidthForY: number[] = [];
   outlines.forEach((o) => {
+    // A body wholly on the liquid side of every line needs no dense polygon: its area is exact (Green's
+    // theorem on the pieces) and the extreme samples give the dense polygon's extents and the clip test.
+    const clippedBy = (pts: ArrayLike<number>) =>
+      lines.some((l) => {
+        for (let q = 0; q < pts.length; q += 2) if (!((pts[q] - l.px) * l.nx + (pts[q + 1] - l.py) * l.ny > 0)) return true;
+        return false;
+      });
+    const candidates: number[] = [];
+    for (const l of lines) extremeSamples(o.pieces, AREA_SAMPLES, -l.nx, -l.ny, candidates);
+    if (!clippedBy(candidates)) {
+      const extremes: number[] = [];
+      for (const [dx, dy] of [[1, 0], [-1, 0], [0, 1], [0, -1]]) extremeSamples(o.pieces, AREA_SAMPLES, dx, dy, extremes);
+      const b = bbox(Float64Array.from(extremes));
+      wettedArea.push(Math.abs(chainArea(o.pieces)));
+      halfWidthForX.push((b[3] - b[1]) / 2);
+      halfWidthForY.push((b[2] - b[0]) / 2);
+      return;
+    }
     const whole = sampleChain(o.pieces, AREA_SAMPLES);
     let poly = whole;
     for (const l of lines) poly = clipByHalfPlane(poly, l.px, l.py, l.nx, l.ny);
-    const clipped = lines.some((l) => {
-      for (let q = 0; q < whole.length; q += 2) if (!((whole[q] - l.px) * l.nx + (whole[q + 1] - l.py) * l.ny > 0)) return true;
-      return false;
-    });
-    // Exact area (Green's theorem on the pieces) unless clipped; clipped: dense polygon, error ~4e-7.
-    wettedArea.push(clipped ? (poly.length >= 6 ? Math.abs(signedArea(poly)) : 0) : Math.abs(chainArea(o.pieces)));
+    // Clipped: dense polygon, area error ~4e-7.
+    wettedArea.push(poly.length >= 6 ? Math.abs(signedArea(poly)) : 0);
     const b = bbox(poly);
     halfWidthForX.push((b[3] - b[1]) / 2);
     halfWidthForY.push((b[2] - b[0]) / 2);

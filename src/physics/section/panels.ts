@@ -17,6 +17,7 @@
 import type { Piece } from './pieces';
 import { pieceLength, pointAt } from './pieces';
 import type { Span } from './domain';
+import { hypot2 } from '../linalg/hypot';
 
 export const GRADING_BETA = 2;
 
@@ -138,6 +139,12 @@ export interface SpanPanels {
   coarseCounts: number[];
   /** Node spreading per piece. */
   gradings: PieceGrading[];
+  /**
+   * Per piece, the graded fractions already found (by node position u = k/n on the piece): the levels are
+   * nested, so a coarser level's nodes (u = q/n = 2q/2n exactly) are all found at the finer one, and each
+   * costs a 60-step bisection.
+   */
+  fractions: Map<number, number>[];
 }
 
 /** A corner zone is added where the neighbouring piece is shorter than this fraction of the piece. */
@@ -178,7 +185,7 @@ export function planSpan(span: Span, total: number): SpanPanels {
     if (g.zone0 > 0) counts[neighbour(k, -1)] = Math.max(counts[neighbour(k, -1)], zoneCount);
     if (g.zone1 > 0) counts[neighbour(k, 1)] = Math.max(counts[neighbour(k, 1)], zoneCount);
   }
-  return { span, coarseCounts: counts, gradings };
+  return { span, coarseCounts: counts, gradings, fractions: pieces.map(() => new Map<number, number>()) };
 }
 
 /** Builds the panel set at level `factor` (1 = coarse, 2 = fine) from spans with their coarse counts. */
@@ -215,8 +222,16 @@ export function buildPanels(spans: readonly SpanPanels[], factor: number): Panel
     s.span.pieces.forEach((piece, k) => {
       const n = s.coarseCounts[k] * factor;
       // Nodes from the start of the piece; its end is the next piece's start (or the span's last node).
+      const known = s.fractions[k];
+      const g = s.gradings[k];
       for (let q = 0; q < n; q++) {
-        pointAt(piece, gradedFraction(q / n, s.gradings[k]), pt);
+        const u = q / n;
+        let f = known.get(u);
+        if (f === undefined) {
+          f = gradedFraction(u, g);
+          known.set(u, f);
+        }
+        pointAt(piece, f, pt);
         P.nodeX[node] = pt[0];
         P.nodeY[node] = pt[1];
         node++;
@@ -237,7 +252,7 @@ export function buildPanels(spans: readonly SpanPanels[], factor: number): Panel
       const b = s.span.closed ? first + ((q + 1) % nodesInSpan) : a + 1;
       const dx = P.nodeX[b] - P.nodeX[a];
       const dy = P.nodeY[b] - P.nodeY[a];
-      const L = Math.hypot(dx, dy);
+      const L = hypot2(dx, dy);
       P.pa[panel] = a;
       P.pb[panel] = b;
       P.len[panel] = L;

@@ -6,6 +6,7 @@
  * (t1 < t0 runs clockwise). Panel nodes are placed on the exact curve; `gradeStart` / `gradeEnd` ask
  * for panels graded towards that end, where the outline has a corner and the flow is singular.
  */
+import { hypot2 } from '../linalg/hypot';
 
 export interface Piece {
   kind: 'line' | 'arc';
@@ -87,45 +88,83 @@ export function subPiece(p: Piece, s0: number, s1: number, gradeStart: boolean, 
 
 /** Arc length of a piece (arcs by 64-chord sum, relative error ~1e-4: used only to share out panels). */
 export function pieceLength(p: Piece): number {
-  if (p.kind === 'line') return Math.hypot(p.x1 - p.x0, p.y1 - p.y0);
+  if (p.kind === 'line') return hypot2(p.x1 - p.x0, p.y1 - p.y0);
   const out = [0, 0];
   let len = 0;
   let px = p.x0;
   let py = p.y0;
   for (let k = 1; k <= 64; k++) {
     pointAt(p, k / 64, out);
-    len += Math.hypot(out[0] - px, out[1] - py);
+    len += hypot2(out[0] - px, out[1] - py);
     px = out[0];
     py = out[1];
   }
   return len;
 }
 
-/**
- * Samples of a piece for geometric tests: `count` points from s = 0 (inclusive) to s = 1 (exclusive),
- * appended to `xs`/`ys`. Lines need one point (their start); arcs get points proportional to their angle.
- */
-export function samplePiece(p: Piece, perTurn: number, xs: number[], ys: number[]): void {
-  const count = p.kind === 'line' ? 1 : Math.max(2, Math.ceil((perTurn * Math.abs(p.t1 - p.t0)) / (2 * Math.PI)));
-  const out = [0, 0];
-  for (let k = 0; k < count; k++) {
-    pointAt(p, k / count, out);
-    xs.push(out[0]);
-    ys.push(out[1]);
-  }
+/** Number of samples `samplePiece` takes of a piece: one for a line (its start), arcs in proportion to their angle. */
+function sampleCount(p: Piece, perTurn: number): number {
+  return p.kind === 'line' ? 1 : Math.max(2, Math.ceil((perTurn * Math.abs(p.t1 - p.t0)) / (2 * Math.PI)));
 }
 
-/** Closed polygon sampling a closed chain of pieces: flat [x0, y0, x1, y1, ...]. */
-export function sampleChain(pieces: readonly Piece[], perTurn: number): Float64Array {
-  const xs: number[] = [];
-  const ys: number[] = [];
-  for (const p of pieces) samplePiece(p, perTurn, xs, ys);
-  const out = new Float64Array(2 * xs.length);
-  for (let i = 0; i < xs.length; i++) {
-    out[2 * i] = xs[i];
-    out[2 * i + 1] = ys[i];
+/**
+ * Samples of a piece for geometric tests: `sampleCount` points from s = 0 (inclusive) to s = 1 (exclusive),
+ * written as [x, y] pairs into `out` from pair index `at`. Returns the pair index after the last.
+ */
+export function samplePiece(p: Piece, perTurn: number, out: Float64Array, at: number): number {
+  const count = sampleCount(p, perTurn);
+  const pt = [0, 0];
+  for (let k = 0; k < count; k++) {
+    pointAt(p, k / count, pt);
+    out[2 * (at + k)] = pt[0];
+    out[2 * (at + k) + 1] = pt[1];
   }
+  return at + count;
+}
+
+/**
+ * Closed polygon sampling a closed chain of pieces: flat [x0, y0, x1, y1, ...]. Written straight into one
+ * typed array (the 4096-point samples of model.ts were most of a solve's short-lived garbage as growing arrays).
+ */
+export function sampleChain(pieces: readonly Piece[], perTurn: number): Float64Array {
+  let total = 0;
+  for (const p of pieces) total += sampleCount(p, perTurn);
+  const out = new Float64Array(2 * total);
+  let at = 0;
+  for (const p of pieces) at = samplePiece(p, perTurn, out, at);
   return out;
+}
+
+/**
+ * The samples of `sampleChain(pieces, perTurn)` that can be the farthest along the direction (dx, dy),
+ * appended as x, y pairs to `out`: each line's start, each arc's two end samples and the samples next to
+ * where dx·x + dy·y peaks on it. Along an arc that function is a sinusoid in the parameter,
+ * P cos t + Q sin t + const, peaking at t = atan2(Q, P); the samples beside the peak (±2, for round-off in
+ * locating it) are the largest there, so the largest over these candidates is the largest over all samples,
+ * the same number, from a few points instead of thousands.
+ */
+export function extremeSamples(pieces: readonly Piece[], perTurn: number, dx: number, dy: number, out: number[]): void {
+  const pt = [0, 0];
+  const push = (p: Piece, k: number, count: number) => {
+    pointAt(p, k / count, pt);
+    out.push(pt[0], pt[1]);
+  };
+  for (const p of pieces) {
+    const count = sampleCount(p, perTurn);
+    push(p, 0, count);
+    if (p.kind === 'line') continue;
+    push(p, count - 1, count);
+    const P = p.a * (dx * p.cos + dy * p.sin);
+    const Q = p.b * (dy * p.cos - dx * p.sin);
+    const peak = Math.atan2(Q, P);
+    const span = p.t1 - p.t0;
+    for (let m = -2; m <= 2; m++) {
+      const s = (peak + 2 * Math.PI * m - p.t0) / span;
+      if (!(s > -1 / count && s < 1 + 1 / count)) continue;
+      const k = Math.round(s * count);
+      for (let d = -2; d <= 2; d++) if (k + d >= 0 && k + d < count) push(p, k + d, count);
+    }
+  }
 }
 
 /** Gauss–Legendre nodes and weights on [0, 1], 8 points (exact for polynomials of degree ≤ 15). */

@@ -127,19 +127,25 @@ export function bbox(p: Polygon): [number, number, number, number] {
  */
 export function clipByHalfPlane(p: Polygon, px: number, py: number, nx: number, ny: number): Polygon {
   const n = p.length / 2;
-  const out: number[] = [];
+  // At most two points per edge (a kept start and a crossing), written into one typed array.
+  const out = new Float64Array(4 * n);
+  let m = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
     const xi = p[2 * i], yi = p[2 * i + 1], xj = p[2 * j], yj = p[2 * j + 1];
     const di = (xi - px) * nx + (yi - py) * ny;
     const dj = (xj - px) * nx + (yj - py) * ny;
-    if (di >= 0) out.push(xi, yi);
+    if (di >= 0) {
+      out[m++] = xi;
+      out[m++] = yi;
+    }
     if ((di >= 0) !== (dj >= 0)) {
       const t = di / (di - dj);
-      out.push(xi + t * (xj - xi), yi + t * (yj - yi));
+      out[m++] = xi + t * (xj - xi);
+      out[m++] = yi + t * (yj - yi);
     }
   }
-  return Float64Array.from(out);
+  return out.slice(0, m);
 }
 
 /** Distance from a point to segment AB. */

@@ -5,9 +5,12 @@
  * removes the asymmetry.
  */
 import { createLuFactor, luFactorInPlace, luSolveManyInto, type LuFactor } from '../linalg/lu';
-import { assembleInto, createAssemblyWork, rigidNormalVelocities } from './assemble';
+import { assembleInto, createAssemblyWork, rigidNormalVelocities, rowAssembly } from './assemble';
+import { findMirror, type Mirror } from './mirror';
+import { solveMirrored } from './mirror-solve';
 import type { ImageMap } from './lines';
 import type { PanelSet } from './panels';
+import { hypot2 } from '../linalg/hypot';
 
 export interface LevelSolution {
   panels: PanelSet;
@@ -19,22 +22,26 @@ export interface LevelSolution {
   m: Float64Array;
   /** Motions with net flux through the wetted outline (body resting on a wall moving off it). */
   blocked: boolean[];
+  /** The section's mirror symmetry at this level (mirror.ts), or null: a hint for the nested levels. */
+  mirror: Mirror | null;
 }
 
 /**
- * LU workspaces reused across solves, one per order, for orders up to 512 (at most 4 kept, 2 MB each at
- * most): the n² matrix is the solve's largest allocation, and re-allocating it per keystroke cost about
- * a tenth of the time in garbage collection. The factor is only used within one `solveLevel` call.
+ * LU workspaces reused across solves, per order and slot (a mirrored solve holds its two halves at once,
+ * slots 0 and 1), for orders up to 512 (at most 6 kept, 2 MB each at most): the n² matrix is the solve's
+ * largest allocation, and re-allocating it per keystroke cost about a tenth of the time in garbage
+ * collection. A workspace is only used within one `solveLevel` call.
  */
 const workspaces = new Map<number, LuFactor>();
 
-function luWorkspace(n: number): LuFactor {
+function luWorkspace(n: number, slot = 0): LuFactor {
   if (n > 512) return createLuFactor(n);
-  let w = workspaces.get(n);
+  const key = 2 * n + slot;
+  let w = workspaces.get(key);
   if (!w) {
-    if (workspaces.size >= 4) workspaces.delete(workspaces.keys().next().value as number);
+    if (workspaces.size >= 6) workspaces.delete(workspaces.keys().next().value as number);
     w = createLuFactor(n);
-    workspaces.set(n, w);
+    workspaces.set(key, w);
   }
   return w;
 }
@@ -48,6 +55,7 @@ export function solveLevel(
   refY: readonly number[],
   density: number,
   closed: boolean,
+  nearbyMirror: Mirror | null = null,
 ): LevelOutcome {
   const n = P.count;
   const K = refX.length;
@@ -56,14 +64,22 @@ export function solveLevel(
   for (let j = 0; j < n; j++) if (P.bc[j] === 1) hasDirichlet = true;
   for (const g of group) if (g.sign < 0) hasDirichlet = true;
   const q = rigidNormalVelocities(P, refX, refY);
-  const lu = luWorkspace(n);
-  const rhs = new Float64Array(m3 * n);
   const pin = closed && !hasDirichlet;
-  assembleInto(P, group, q, K, pin, lu.lu, rhs, createAssemblyWork(P.nodeCount, group.length));
-  const f = luFactorInPlace(lu);
-  if (!f.ok) return { ok: false, column: f.column };
+  const work = createAssemblyWork(P.nodeCount, group.length);
   const x = new Float64Array(m3 * n);
-  luSolveManyInto(lu, rhs, m3, x);
+  // A mirror-symmetric section splits into two half-size systems (mirror-solve.ts): same answer, less work.
+  const mirror = findMirror(P, group, nearbyMirror);
+  if (mirror) {
+    const out = solveMirrored(rowAssembly(P, group, q, K, pin, work), mirror.panel, x, luWorkspace);
+    if (!out.ok) return out;
+  } else {
+    const lu = luWorkspace(n);
+    const rhs = new Float64Array(m3 * n);
+    assembleInto(P, group, q, K, pin, lu.lu, rhs, work);
+    const f = luFactorInPlace(lu);
+    if (!f.ok) return { ok: false, column: f.column };
+    luSolveManyInto(lu, rhs, m3, x);
+  }
 
   // Without any φ = 0 boundary the rigid motion must carry no net flux through the wetted outline
   // (∮ q ds = 0): otherwise the 2D potential grows like ln r (unbounded added mass) or, in a closed
@@ -80,7 +96,7 @@ export function solveLevel(
         for (let j = 0; j < n; j++) {
           if (P.owner[j] !== k) continue;
           flux += q[3 * j + d] * P.len[j];
-          scale += (d < 2 ? 1 : Math.hypot(P.mx[j] - refX[k], P.my[j] - refY[k])) * P.len[j];
+          scale += (d < 2 ? 1 : hypot2(P.mx[j] - refX[k], P.my[j] - refY[k])) * P.len[j];
         }
         if (Math.abs(flux) > 1e-8 * scale) blocked[3 * k + d] = true;
       }
@@ -105,5 +121,5 @@ export function solveLevel(
       m[c * m3 + r] = 0;
     }
   }
-  return { ok: true, level: { panels: P, x, q, m, blocked } };
+  return { ok: true, level: { panels: P, x, q, m, blocked, mirror } };
 }

@@ -8,7 +8,9 @@
  * rounded corners), panels are graded towards corners and plate edges where the flow is singular
  * (panels.ts), and straight boundaries are represented by images or explicit panels (lines.ts,
  * domain.ts). For smooth outlines and graded corners the added mass converges like O(h²) (circles
- * faster), measured in the tests.
+ * faster), measured in the tests. A section with a mirror symmetry (most single members by a wall or in a
+ * caisson, rows of equal piles) is solved as its symmetric and antisymmetric halves (mirror.ts,
+ * mirror-solve.ts): half the assembly and a quarter of the factorisation, the same answer to round-off.
  *
  * Error estimate: three nested resolutions (N/4, N/2 and N panels per body; the coarser meshes are
  * every other node of the finer), Richardson extrapolation with the observed order (error-estimate.ts).
@@ -138,7 +140,9 @@ function solveAt(input: SectionInput, N: number, doublings: number, options: Sol
   let singularColumn = -1;
   const level = (factor: number): LevelSolution | null => {
     if (!solvedLevels.has(factor)) {
-      const out = solveLevel(buildPanels(model.spans, factor), model.group, model.refX, model.refY, rho, model.closed);
+      // A nested level already solved proposes the mirror symmetry (checked, not trusted).
+      const nearby = solvedLevels.get(2 * factor) ?? solvedLevels.get(factor / 2) ?? null;
+      const out = solveLevel(buildPanels(model.spans, factor), model.group, model.refX, model.refY, rho, model.closed, nearby?.mirror ?? null);
       if (!out.ok && singularColumn < 0) singularColumn = out.column;
       solvedLevels.set(factor, out.ok ? out.level : null);
     }

@@ -289,7 +289,10 @@ export function validateSectionInput(input: SectionInput): void {
     scale = Math.max(scale, b[2] - b[0], b[3] - b[1], Math.abs(b[0]), Math.abs(b[1]), Math.abs(b[2]), Math.abs(b[3]));
   }
   const tol = 1e-9 * scale;
-  const wetted = (x: number, y: number) => lines.every((l) => lineDistance(l, x, y) > tol);
+  const wetted = (x: number, y: number) => {
+    for (const l of lines) if (!(lineDistance(l, x, y) > tol)) return false;
+    return true;
+  };
 
   polys.forEach((p, k) => {
     for (const l of lines) {
