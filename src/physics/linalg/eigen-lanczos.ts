@@ -307,12 +307,30 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
   /** One modified Gram–Schmidt pass of v against basis vectors 0 … count−1 (only those marked, if a mask is given). */
   const orthBasis = (v: Float64Array, count: number, mask?: Uint8Array): void => {
     const { q, mq } = ws;
-    for (let k = 0; k < count; k++) {
-      if (mask && mask[k] === 0) continue;
+    let k = 0;
+    while (k < count && mask && mask[k] === 0) k++;
+    if (k >= count) return;
+    let c = 0;
+    for (let i = 0; i < n; i++) c += mq[k * n + i] * v[i];
+    for (;;) {
+      let next = k + 1;
+      while (next < count && mask && mask[next] === 0) next++;
       const off = k * n;
-      let c = 0;
-      for (let i = 0; i < n; i++) c += mq[off + i] * v[i];
-      for (let i = 0; i < n; i++) v[i] -= c * q[off + i];
+      if (next >= count) {
+        for (let i = 0; i < n; i++) v[i] -= c * q[off + i];
+        return;
+      }
+      // v −= c q_k fused with the next coefficient (M q_next)ᵀ v: each v_i is updated, then read, exactly as
+      // by two separate passes (same operations, same order, so the same bits), in one sweep over v.
+      const noff = next * n;
+      let cn = 0;
+      for (let i = 0; i < n; i++) {
+        const vi = v[i] - c * q[off + i];
+        v[i] = vi;
+        cn += mq[noff + i] * vi;
+      }
+      c = cn;
+      k = next;
     }
   };
   const mNorm = (): number => {
@@ -484,7 +502,8 @@ class RitzWork {
     const z = this.z.subarray(0, j);
     z.fill(0);
     z[j - 1] = 1;
-    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
+    // Quick rotations: this pass only decides whether to stop; the reported pairs come from `pairs`.
+    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1, true).ok) return null;
     this.largestFirst(j, Math.min(want, j));
     let converged = true;
     let worst = 0;
