@@ -157,10 +157,15 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     values.set(refined.values.subarray(0, want));
     vectors.set(refined.vectors.subarray(0, want * n));
   } else {
-    for (let i = 0; i < want; i++) {
-      values[i] = locked[i].lambda;
-      vectors.set(locked[i].x, i * n);
+    const wanted = locked.slice(0, want);
+    const run = wanted[0] instanceof RitzVector ? wanted[0].basisOf().ws : null;
+    if (run && wanted.every((p) => p instanceof RitzVector && p.basisOf().ws === run)) {
+      // All from one run (the usual case): combined from its basis in one sweep over it, straight into `vectors`.
+      combineRitzVectors(wanted as RitzVector[], vectors);
+    } else {
+      for (let i = 0; i < want; i++) vectors.set(wanted[i].x, i * n);
     }
+    for (let i = 0; i < want; i++) values[i] = locked[i].lambda;
     mOrthonormalise(m, vectors, want, n);
   }
   // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
@@ -176,13 +181,29 @@ function mOrthonormalise(m: SymBanded, vectors: Float64Array, count: number, n: 
   const mv = new Float64Array(count * n);
   for (let pass = 0; pass < 2; pass++) {
     for (let a = 0; a < count; a++) {
-      const va = vectors.subarray(a * n, (a + 1) * n);
-      for (let b = 0; b < a; b++) {
-        const c = dot(mv.subarray(b * n, (b + 1) * n), va, n);
-        const vb = vectors.subarray(b * n, (b + 1) * n);
-        for (let i = 0; i < n; i++) va[i] -= c * vb[i];
+      const ao = a * n;
+      if (a > 0) {
+        let c = 0;
+        for (let i = 0; i < n; i++) c += mv[i] * vectors[ao + i];
+        for (let b = 0; b < a; b++) {
+          const bo = b * n;
+          if (b + 1 === a) {
+            for (let i = 0; i < n; i++) vectors[ao + i] -= c * vectors[bo + i];
+            break;
+          }
+          // v_a −= c v_b fused with the next coefficient (M v_{b+1})ᵀ v_a: the same operations in the same order as two passes.
+          const no = bo + n;
+          let cn = 0;
+          for (let i = 0; i < n; i++) {
+            const vi = vectors[ao + i] - c * vectors[bo + i];
+            vectors[ao + i] = vi;
+            cn += mv[no + i] * vi;
+          }
+          c = cn;
+        }
       }
-      const ma = mv.subarray(a * n, (a + 1) * n);
+      const va = vectors.subarray(ao, ao + n);
+      const ma = mv.subarray(ao, ao + n);
       symBandedMulInto(m, va, ma);
       const norm = Math.sqrt(Math.max(dot(va, ma, n), 0));
       if (norm > 0) {
@@ -537,6 +558,27 @@ class RitzWork {
 }
 
 /**
+ * x_t = Σ_r s[r, col_t] · q_r for pairs of one run, into `out` (vector t at `[t·n … (t+1)·n)`): each basis
+ * vector is read once for all pairs; each x_t is summed over r in the same order as `RitzVector.x`, so the
+ * same bits.
+ */
+function combineRitzVectors(pairs: RitzVector[], out: Float64Array): void {
+  if (pairs.length === 0) return;
+  const { ws, s, j } = pairs[0].basisOf();
+  const { n, q } = ws;
+  out.fill(0, 0, pairs.length * n);
+  for (let r = 0; r < j; r++) {
+    const off = r * n;
+    for (let t = 0; t < pairs.length; t++) {
+      const c = s[r * j + pairs[t].col];
+      if (c === 0) continue;
+      const o = t * n;
+      for (let i = 0; i < n; i++) out[o + i] += c * q[off + i];
+    }
+  }
+}
+
+/**
  * A converged Ritz pair whose vectors are combined from the run's basis on first read: a run converges
  * two pairs beyond those wanted (their values serve the Sturm check) and M x is needed only after a
  * restart, so most combinations are never formed. The basis is not touched after its run ends, and each
@@ -552,8 +594,12 @@ class RitzVector implements RitzPair {
     private readonly ws: Workspace,
     private readonly s: Float64Array,
     private readonly j: number,
-    private readonly col: number,
+    readonly col: number,
   ) {}
+  /** The run this pair belongs to (its basis, the tridiagonal's eigenvectors and its size). */
+  basisOf(): { ws: Workspace; s: Float64Array; j: number } {
+    return { ws: this.ws, s: this.s, j: this.j };
+  }
   get x(): Float64Array {
     return (this.xv ??= this.combine(this.ws.q));
   }
