@@ -131,7 +131,8 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
   let lastRun: Workspace | null = null;
   for (;;) {
     const need = want - Math.min(locked.length, want) || 1;
-    const run = lanczosRun(factor, m, locked, Math.min(need + 2, n - locked.length), tol, rand);
+    const runWant = Math.min(need + 2, n - locked.length);
+    const run = lanczosRun(factor, m, locked, runWant, Math.min(need, runWant), tol, rand);
     steps += run.steps;
     lastRun = run.ws;
     if (!run.ok) return { ok: false, reason: 'not-converged', message: `Lanczos did not converge in ${run.steps} steps` };
@@ -308,10 +309,14 @@ function stepsToNextCheck(worst: number): number {
 }
 
 /**
- * One Lanczos run, M-orthogonal to the locked pairs, until the `want` largest Ritz values θ
- * have relative residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) or the space is exhausted.
+ * One Lanczos run, M-orthogonal to the locked pairs, until the `tight` largest Ritz values θ have relative
+ * residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) and the next `want − tight` ≤ √tol, or the space
+ * is exhausted. Those extra pairs serve the Sturm check, where a looser pair cannot hide a missed eigenvalue:
+ * by interlacing (Cauchy; Parlett §10.1) the k-th largest Ritz value θ never exceeds the k-th largest
+ * eigenvalue, so a Ritz λ = σ + 1/θ below μ means a true one below μ too. Asking them for tol as well would
+ * cost the run several steps (the last pairs converge last) for digits nobody reads.
  */
-function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tol: number, rand: () => number): RunOutcome {
+function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tight: number, tol: number, rand: () => number): RunOutcome {
   const n = f.n;
   const maxSteps = n - locked.length;
   const ws = new Workspace(n, Math.min(maxSteps, Math.max(2 * want + 16, 32)));
@@ -451,7 +456,7 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     const breakdown = b <= 1e-12 * tnorm;
     const exhausted = j >= maxSteps;
     if (j >= want && (j >= nextCheck || breakdown || exhausted)) {
-      const check = ritz.check(ws, j, breakdown ? 0 : b, want, tol, exhausted);
+      const check = ritz.check(ws, j, breakdown ? 0 : b, want, tight, tol, exhausted);
       if (!check) return { ok: false, steps: j, ws, pairs: [] };
       if (check.converged) return { ok: true, steps: j, ws, pairs: ritz.pairs(ws, j, want) };
       nextCheck = j + stepsToNextCheck(check.worst);
@@ -515,10 +520,11 @@ class RitzWork {
   /**
    * Ritz values and their residual estimates, rotating only the last row of the eigenvector matrix
    * (the residual of pair i is |β_{j+1} s_{j,i}|): O(j²) per check instead of O(j³).
-   * `worst` is the largest of |β_{j+1} s_{j,i}| / (tol θ_i) over the wanted pairs (∞ for a θ ≤ 0): below 1 all
-   * have converged; its logarithm says how far the run still is (see `stepsToNextCheck`).
+   * The first `tight` pairs are held to tol, the rest to √tol. `worst` is the largest of
+   * |β_{j+1} s_{j,i}| / (tol_i θ_i) over the wanted pairs (∞ for a θ ≤ 0): below 1 all have converged; its
+   * logarithm says how far the run still is (see `stepsToNextCheck`).
    */
-  check(ws: Workspace, j: number, bNext: number, want: number, tol: number, exhausted: boolean): { converged: boolean; worst: number } | null {
+  check(ws: Workspace, j: number, bNext: number, want: number, tight: number, tol: number, exhausted: boolean): { converged: boolean; worst: number } | null {
     this.load(ws, j);
     const z = this.z.subarray(0, j);
     z.fill(0);
@@ -528,12 +534,14 @@ class RitzWork {
     this.largestFirst(j, Math.min(want, j));
     let converged = true;
     let worst = 0;
+    const loose = Math.sqrt(tol);
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
       const theta = this.d[col];
       const residual = Math.abs(bNext * z[col]);
-      if (!(theta > 0 && residual <= tol * theta)) converged = false;
-      worst = Math.max(worst, theta > 0 ? residual / (tol * theta) : Infinity);
+      const tolT = t < tight ? tol : loose;
+      if (!(theta > 0 && residual <= tolT * theta)) converged = false;
+      worst = Math.max(worst, theta > 0 ? residual / (tolT * theta) : Infinity);
     }
     return { converged: exhausted || converged, worst };
   }
