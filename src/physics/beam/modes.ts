@@ -7,6 +7,7 @@ import { factorLdlt } from '../linalg/banded-ldlt';
 import { lowestModesBanded } from '../linalg/eigen-lanczos';
 import type { MemberSystem } from './assemble';
 import type { ModeResult } from './result';
+import { signedPeak } from '../linalg/shape-sign';
 
 export type StiffnessCheck = { ok: true } | { ok: false; reason: 'buckles' | 'not-converged'; message: string };
 
@@ -59,12 +60,12 @@ export function meshModes(system: MemberSystem, mass: SymBanded, count: number):
 export function modeResult(system: MemberSystem, lambda: number, x: Float64Array, mode: number, addedMass: SymBanded | null): ModeResult {
   const nodes = system.mesh.z.length;
   const w = new Float64Array(nodes);
-  let big = 0;
   for (let i = 0; i < nodes; i++) {
     const r = system.dofMap[2 * i];
     w[i] = r >= 0 ? x[r] : 0;
-    if (Math.abs(w[i]) > Math.abs(big)) big = w[i];
   }
+  // ±(largest |w|), signed so that the first node at the peak (ties within a relative 1e-6) comes out +1.
+  const big = signedPeak(w);
   const omega = Math.sqrt(Math.max(lambda, 0));
   const f = omega / (2 * Math.PI);
   const result: ModeResult = {
