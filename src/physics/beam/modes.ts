@@ -42,8 +42,13 @@ export function wetMass(system: MemberSystem): SymBanded {
   return out;
 }
 
+/**
+ * Modes on one mesh. `vectors()` forms the eigenvectors (vector i at `[i·n … (i+1)·n)`) on first call;
+ * `release()` says they will not be needed (a mesh the refinement goes past), so the eigen-solver may reuse
+ * its work space. Call one of the two for each result.
+ */
 export type MeshModes =
-  | { ok: true; lambdas: Float64Array; vectors: Float64Array }
+  | { ok: true; lambdas: Float64Array; vectors: () => Float64Array; release: () => void }
   | { ok: false; reason: 'buckles' | 'not-converged'; message: string };
 
 export function meshModes(system: MemberSystem, mass: SymBanded, count: number): MeshModes {
@@ -53,7 +58,7 @@ export function meshModes(system: MemberSystem, mass: SymBanded, count: number):
       ? { ok: false, reason: 'buckles', message: 'buckles under this load: stiffness is not positive definite' }
       : { ok: false, reason: 'not-converged', message: `eigen-solver: ${out.message}` };
   }
-  return { ok: true, lambdas: out.values, vectors: out.vectors };
+  return { ok: true, lambdas: out.values, vectors: () => out.vectors, release: out.release };
 }
 
 /** Reported mode from an M-orthonormal reduced eigenvector x (xᵀ M x = 1). */

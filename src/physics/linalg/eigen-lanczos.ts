@@ -36,8 +36,16 @@ export type LowestModesOutcome =
       ok: true;
       /** Lowest `count` eigenvalues λ = ω², ascending. */
       values: Float64Array;
-      /** M-orthonormal eigenvectors: vector i at `vectors[i·n … (i+1)·n)`. */
-      vectors: Float64Array;
+      /**
+       * M-orthonormal eigenvectors: vector i at `vectors[i·n … (i+1)·n)`. Formed on first read (a refinement
+       * reads only its last mesh's), from the run's basis, which is kept until then.
+       */
+      readonly vectors: Float64Array;
+      /**
+       * Says the vectors will not be read: the run's basis may then serve the next solve. Reading `vectors`
+       * after this throws.
+       */
+      release(): void;
       /** Shift σ used. */
       shift: number;
       /** Lanczos steps taken (= solves with K − σM). */
@@ -122,7 +130,7 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
       message: `K − σM has ${factor.negativePivots} negative pivot(s) at σ = ${sigma}: eigenvalues lie below the shift`,
     };
   }
-  if (want === 0) return { ok: true, values: new Float64Array(0), vectors: new Float64Array(0), shift: sigma, steps: 0, restarts: 0 };
+  if (want === 0) return { ok: true, values: new Float64Array(0), vectors: new Float64Array(0), release: () => {}, shift: sigma, steps: 0, restarts: 0 };
 
   const locked: RitzPair[] = [];
   let steps = 0;
@@ -151,14 +159,24 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     if (++restarts > MAX_RESTARTS) return { ok: false, reason: 'not-converged', message: `Sturm count ${below} below ${mu} but ${found} eigenvalues found` };
   }
   const values = new Float64Array(want);
-  const vectors = new Float64Array(want * n);
   if (restarts > 0) {
     // Pairs from separate runs: one Rayleigh–Ritz step on their span couples them and squares their error.
     const refined = inverseRayleighRitz(factor, m, sigma, locked);
     values.set(refined.values.subarray(0, want));
-    vectors.set(refined.vectors.subarray(0, want * n));
-  } else {
-    const wanted = locked.slice(0, want);
+    const vectors = refined.vectors.slice(0, want * n);
+    // Every vector read from the runs' bases is formed by now: the last basis may serve the next solve.
+    if (lastRun) recycleBasis(lastRun);
+    return { ok: true, values, vectors, release: () => {}, shift: sigma, steps, restarts };
+  }
+  const wanted = locked.slice(0, want);
+  for (let i = 0; i < want; i++) values[i] = locked[i].lambda;
+  const basis = lastRun;
+  let formed: Float64Array | null = null;
+  let released = false;
+  const form = (): Float64Array => {
+    if (formed) return formed;
+    if (released) throw new Error('lowestModesBanded: vectors read after release()');
+    const vectors = new Float64Array(want * n);
     const run = wanted[0] instanceof RitzVector ? wanted[0].basisOf().ws : null;
     if (run && wanted.every((p) => p instanceof RitzVector && p.basisOf().ws === run)) {
       // All from one run (the usual case): combined from its basis in one sweep over it, straight into `vectors`.
@@ -166,12 +184,27 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     } else {
       for (let i = 0; i < want; i++) vectors.set(wanted[i].x, i * n);
     }
-    for (let i = 0; i < want; i++) values[i] = locked[i].lambda;
     mOrthonormalise(m, vectors, want, n);
-  }
-  // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
-  if (lastRun) recycleBasis(lastRun);
-  return { ok: true, values, vectors, shift: sigma, steps, restarts };
+    formed = vectors;
+    // Every vector read from the run's basis is formed by now (the locked pairs die here): it may serve the next solve.
+    if (basis) recycleBasis(basis);
+    return vectors;
+  };
+  return {
+    ok: true,
+    values,
+    get vectors() {
+      return form();
+    },
+    release: () => {
+      if (formed || released) return;
+      released = true;
+      if (basis) recycleBasis(basis);
+    },
+    shift: sigma,
+    steps,
+    restarts,
+  };
 }
 
 /**
@@ -226,14 +259,34 @@ interface RunOutcome {
   pairs: RitzVector[];
 }
 
-/** Basis arrays kept from the last finished solve (the solver runs on one thread and never re-enters). */
-let spareBasis: { q: Float64Array; mq: Float64Array } | null = null;
-/** Largest basis kept between solves (floats per array): 32 MB for the pair. */
+/**
+ * Basis arrays kept from finished solves (the solver runs on one thread and never re-enters): two, as a
+ * refinement holds a mesh's dry and wet solves until it knows whether that mesh is its last.
+ */
+const spareBases: { q: Float64Array; mq: Float64Array }[] = [];
+const SPARE_COUNT = 2;
+/** Largest basis kept between solves (floats per array): 32 MB for a pair of arrays. */
 const SPARE_LIMIT = 1 << 21;
 
 function recycleBasis(ws: Workspace): void {
-  if (ws.q.length > SPARE_LIMIT) return;
-  if (!spareBasis || spareBasis.q.length < ws.q.length) spareBasis = { q: ws.q, mq: ws.mq };
+  if (ws.q.length > SPARE_LIMIT || spareBases.some((b) => b.q === ws.q)) return;
+  if (spareBases.length < SPARE_COUNT) {
+    spareBases.push({ q: ws.q, mq: ws.mq });
+    return;
+  }
+  // Full: the new basis replaces the smallest kept one if it is larger.
+  let smallest = 0;
+  for (let i = 1; i < spareBases.length; i++) if (spareBases[i].q.length < spareBases[smallest].q.length) smallest = i;
+  if (spareBases[smallest].q.length < ws.q.length) spareBases[smallest] = { q: ws.q, mq: ws.mq };
+}
+
+/** The smallest kept basis with room for `floats` per array, taken out of the pool; null if none fits. */
+function takeSpareBasis(floats: number): { q: Float64Array; mq: Float64Array } | null {
+  let best = -1;
+  for (let i = 0; i < spareBases.length; i++) {
+    if (spareBases[i].q.length >= floats && (best < 0 || spareBases[i].q.length < spareBases[best].q.length)) best = i;
+  }
+  return best < 0 ? null : spareBases.splice(best, 1)[0];
 }
 
 /**
@@ -255,13 +308,13 @@ class Workspace {
     cap: number,
   ) {
     this.cap = cap;
-    // The basis arrays are the large ones: taken from the last solve's when they fit (a refinement's
+    // The basis arrays are the large ones: taken from an earlier solve's when they fit (a refinement's
     // dry and wet solves, and the next mesh, which has about twice the DOFs), else made with room for that.
     // Stale entries are harmless: vector j is written before anything reads it.
-    if (spareBasis && spareBasis.q.length >= cap * n) {
-      this.q = spareBasis.q;
-      this.mq = spareBasis.mq;
-      spareBasis = null;
+    const spare = takeSpareBasis(cap * n);
+    if (spare) {
+      this.q = spare.q;
+      this.mq = spare.mq;
     } else {
       this.q = new Float64Array(2 * cap * n);
       this.mq = new Float64Array(2 * cap * n);
@@ -552,16 +605,43 @@ class RitzWork {
    */
   pairs(ws: Workspace, j: number, want: number): RitzVector[] {
     this.load(ws, j);
-    const s = new Float64Array(j * j);
-    for (let i = 0; i < j; i++) s[i * j + i] = 1;
-    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
+    // Eigenvalues only here: the QL method's d never reads the rotated vectors, so the eigenvectors formed
+    // later by `RunEigenvectors` belong to these very values (the same bits, the same order).
+    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j));
     this.largestFirst(j, Math.min(want, j));
+    const run = new RunEigenvectors(ws, j);
     const out: RitzVector[] = [];
     for (let t = 0; t < Math.min(want, j); t++) {
       const col = this.order[t];
-      out.push(new RitzVector(this.d[col], ws, s, j, col));
+      out.push(new RitzVector(this.d[col], run, col));
     }
     return out;
+  }
+}
+
+/**
+ * Eigenvectors of a finished run's tridiagonal T_j (row-major j × j, column i for eigenvalue i), formed on
+ * first use: only the run whose vectors are read needs them (O(j³), against O(j²) for the values).
+ */
+class RunEigenvectors {
+  private sv: Float64Array | null = null;
+  constructor(
+    readonly ws: Workspace,
+    readonly j: number,
+  ) {}
+  get s(): Float64Array {
+    if (this.sv) return this.sv;
+    const { ws, j } = this;
+    const d = new Float64Array(j);
+    const e = new Float64Array(j);
+    for (let i = 0; i < j; i++) {
+      d[i] = ws.alpha[i];
+      e[i] = i + 1 < j ? ws.beta[i + 1] : 0;
+    }
+    const s = new Float64Array(j * j);
+    for (let i = 0; i < j; i++) s[i * j + i] = 1;
+    tridiagonalEigenInPlace(j, d, e, s, j);
+    return (this.sv = s);
   }
 }
 
@@ -574,6 +654,7 @@ function combineRitzVectors(pairs: RitzVector[], out: Float64Array): void {
   if (pairs.length === 0) return;
   const { ws, s, j } = pairs[0].basisOf();
   const { n, q } = ws;
+  // s is the run's (shared) eigenvector matrix: formed once, on this first read.
   out.fill(0, 0, pairs.length * n);
   for (let r = 0; r < j; r++) {
     const off = r * n;
@@ -599,25 +680,24 @@ class RitzVector implements RitzPair {
   private mxv: Float64Array | null = null;
   constructor(
     readonly theta: number,
-    private readonly ws: Workspace,
-    private readonly s: Float64Array,
-    private readonly j: number,
+    private readonly run: RunEigenvectors,
     readonly col: number,
   ) {}
   /** The run this pair belongs to (its basis, the tridiagonal's eigenvectors and its size). */
   basisOf(): { ws: Workspace; s: Float64Array; j: number } {
-    return { ws: this.ws, s: this.s, j: this.j };
+    return { ws: this.run.ws, s: this.run.s, j: this.run.j };
   }
   get x(): Float64Array {
-    return (this.xv ??= this.combine(this.ws.q));
+    return (this.xv ??= this.combine(this.run.ws.q));
   }
   get mx(): Float64Array {
-    return (this.mxv ??= this.combine(this.ws.mq));
+    return (this.mxv ??= this.combine(this.run.ws.mq));
   }
   /** Σ_r s[r, col] · basis vector r. */
   private combine(basis: Float64Array): Float64Array {
-    const { n } = this.ws;
-    const { s, j, col } = this;
+    const { n } = this.run.ws;
+    const { s, j } = this.run;
+    const { col } = this;
     const out = new Float64Array(n);
     for (let r = 0; r < j; r++) {
       const c = s[r * j + col];
