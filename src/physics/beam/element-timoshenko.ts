@@ -71,12 +71,17 @@ function coefficients(h: number, s: number): void {
   for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) coef[i * 4 + j] = a[i * 8 + 4 + j];
 }
 
+/** Upper triangle (j ≥ i) of out += f v vᵀ; `mirror` fills the lower one once all terms are in. */
 function addOuter(out: Float64Array, v: Float64Array, f: number): void {
   if (f === 0) return;
   for (let i = 0; i < 4; i++) {
     const vi = v[i] * f;
-    for (let j = 0; j < 4; j++) out[i * 4 + j] += vi * v[j];
+    for (let j = i; j < 4; j++) out[i * 4 + j] += vi * v[j];
   }
+}
+
+function mirror(out: Float64Array): void {
+  for (let i = 1; i < 4; i++) for (let j = 0; j < i; j++) out[i * 4 + j] = out[j * 4 + i];
 }
 
 export function addTimoshenkoElement(h: number, p: TimoshenkoSamples, out: TimoshenkoOut): void {
@@ -105,4 +110,9 @@ export function addTimoshenkoElement(h: number, p: TimoshenkoSamples, out: Timos
     addOuter(out.m, npsi, wh * p.rotary[g]);
     addOuter(out.ma, nw, wh * p.added[g]);
   }
+  // Symmetric: the lower triangles copied from the upper ones, not summed again.
+  mirror(out.k);
+  mirror(out.kg);
+  mirror(out.m);
+  mirror(out.ma);
 }
