@@ -347,11 +347,12 @@ class Workspace {
 /**
  * Largest fall of the worst residual ratio (`RitzWork.check`) in one Lanczos step assumed when spacing the
  * convergence checks, in decades. The residuals of the wanted Ritz pairs fall geometrically, at a rate set by
- * the gaps of the spectrum (Parlett, The Symmetric Eigenvalue Problem, §12.4; Saad, Numerical Methods for
- * Large Eigenvalue Problems, §6.6): measured on the demo members and on a 200- and a 1000-element pile, the
- * worst ratio fell by 0.1 to 2.0 decades a step, starting near 10¹⁰. A run whose ratio is 10^L away cannot
- * converge in fewer than L / 3 steps unless it falls faster than that; if it ever does, the run only takes a
- * step or two more than it needed (its pairs are then more accurate, not less).
+ * the gaps of the spectrum (the Kaniel–Paige–Saad bounds: Parlett, The Symmetric Eigenvalue Problem, ch. 12;
+ * Saad, Numerical Methods for Large Eigenvalue Problems, ch. 6; chapters from memory). Measured on the demo
+ * members and on a 200- and a 1000-element pile, the worst ratio fell by 0.1 to 2.0 decades a step, starting
+ * near 10¹⁰. A run whose ratio is 10^L away cannot converge in fewer than L / 3 steps unless it falls faster
+ * than that; if it ever does, the run only takes a step or two more than it needed (its pairs are then more
+ * accurate, not less).
  */
 const MAX_DECADES_PER_STEP = 3;
 
@@ -365,9 +366,9 @@ function stepsToNextCheck(worst: number): number {
  * One Lanczos run, M-orthogonal to the locked pairs, until the `tight` largest Ritz values θ have relative
  * residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) and the next `want − tight` ≤ √tol, or the space
  * is exhausted. Those extra pairs serve the Sturm check, where a looser pair cannot hide a missed eigenvalue:
- * by interlacing (Cauchy; Parlett §10.1) the k-th largest Ritz value θ never exceeds the k-th largest
- * eigenvalue, so a Ritz λ = σ + 1/θ below μ means a true one below μ too. Asking them for tol as well would
- * cost the run several steps (the last pairs converge last) for digits nobody reads.
+ * by Cauchy's interlace theorem (classical; Parlett, ch. 10) the k-th largest Ritz value θ never exceeds the
+ * k-th largest eigenvalue, so a Ritz λ = σ + 1/θ below μ means a true one below μ too. Asking them for tol as
+ * well would cost the run several steps (the last pairs converge last) for digits nobody reads.
  */
 function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tight: number, tol: number, rand: () => number): RunOutcome {
   const n = f.n;
