@@ -43,13 +43,19 @@ const gam = new Float64Array(4);
 
 /** C = A⁻¹, A mapping a = [a0..a3] of w = Σ a_i x^i, ψ = a1 + 6 s a3 + 2 a2 x + 3 a3 x² to nodal DOFs. */
 function coefficients(h: number, s: number): void {
-  const rows = [
-    [1, 0, 0, 0],
-    [0, 1, 0, 6 * s],
-    [1, h, h * h, h * h * h],
-    [0, 1, 2 * h, 3 * h * h + 6 * s],
-  ];
-  for (let i = 0; i < 4; i++) for (let j = 0; j < 8; j++) a[i * 8 + j] = j < 4 ? rows[i][j] : j - 4 === i ? 1 : 0;
+  // Rows of A, then the identity, written straight into the work array (no nested arrays per element).
+  a.fill(0);
+  a[0] = 1;
+  a[9] = 1;
+  a[11] = 6 * s;
+  a[16] = 1;
+  a[17] = h;
+  a[18] = h * h;
+  a[19] = h * h * h;
+  a[25] = 1;
+  a[26] = 2 * h;
+  a[27] = 3 * h * h + 6 * s;
+  for (let i = 0; i < 4; i++) a[i * 8 + 4 + i] = 1;
   for (let col = 0; col < 4; col++) {
     let piv = col;
     for (let r = col + 1; r < 4; r++) if (Math.abs(a[r * 8 + col]) > Math.abs(a[piv * 8 + col])) piv = r;
@@ -65,12 +71,17 @@ function coefficients(h: number, s: number): void {
   for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) coef[i * 4 + j] = a[i * 8 + 4 + j];
 }
 
+/** Upper triangle (j ≥ i) of out += f v vᵀ; `mirror` fills the lower one once all terms are in. */
 function addOuter(out: Float64Array, v: Float64Array, f: number): void {
   if (f === 0) return;
   for (let i = 0; i < 4; i++) {
     const vi = v[i] * f;
-    for (let j = 0; j < 4; j++) out[i * 4 + j] += vi * v[j];
+    for (let j = i; j < 4; j++) out[i * 4 + j] += vi * v[j];
   }
+}
+
+function mirror(out: Float64Array): void {
+  for (let i = 1; i < 4; i++) for (let j = 0; j < i; j++) out[i * 4 + j] = out[j * 4 + i];
 }
 
 export function addTimoshenkoElement(h: number, p: TimoshenkoSamples, out: TimoshenkoOut): void {
@@ -99,4 +110,9 @@ export function addTimoshenkoElement(h: number, p: TimoshenkoSamples, out: Timos
     addOuter(out.m, npsi, wh * p.rotary[g]);
     addOuter(out.ma, nw, wh * p.added[g]);
   }
+  // Symmetric: the lower triangles copied from the upper ones, not summed again.
+  mirror(out.k);
+  mirror(out.kg);
+  mirror(out.m);
+  mirror(out.ma);
 }

@@ -59,8 +59,10 @@ export function addElementIntegral(kind: Integrand, h: number, f: Float64Array, 
     const b = basisAt(kind, GAUSS_XI[g], h);
     for (let i = 0; i < 4; i++) {
       const bi = b[i] * fw;
-      for (let j = 0; j < 4; j++) out[i * 4 + j] += bi * b[j];
+      for (let j = i; j < 4; j++) out[i * 4 + j] += bi * b[j];
     }
   }
+  // Symmetric: the upper triangle summed, the lower one copied from it.
+  for (let i = 1; i < 4; i++) for (let j = 0; j < i; j++) out[i * 4 + j] = out[j * 4 + i];
   return out;
 }

@@ -7,6 +7,7 @@ import { factorLdlt } from '../linalg/banded-ldlt';
 import { lowestModesBanded } from '../linalg/eigen-lanczos';
 import type { MemberSystem } from './assemble';
 import type { ModeResult } from './result';
+import { signedPeak } from '../linalg/shape-sign';
 
 export type StiffnessCheck = { ok: true } | { ok: false; reason: 'buckles' | 'not-converged'; message: string };
 
@@ -41,8 +42,13 @@ export function wetMass(system: MemberSystem): SymBanded {
   return out;
 }
 
+/**
+ * Modes on one mesh. `vectors()` forms the eigenvectors (vector i at `[i·n … (i+1)·n)`) on first call;
+ * `release()` says they will not be needed (a mesh the refinement goes past), so the eigen-solver may reuse
+ * its work space. Call one of the two for each result.
+ */
 export type MeshModes =
-  | { ok: true; lambdas: Float64Array; vectors: Float64Array }
+  | { ok: true; lambdas: Float64Array; vectors: () => Float64Array; release: () => void }
   | { ok: false; reason: 'buckles' | 'not-converged'; message: string };
 
 export function meshModes(system: MemberSystem, mass: SymBanded, count: number): MeshModes {
@@ -52,19 +58,19 @@ export function meshModes(system: MemberSystem, mass: SymBanded, count: number):
       ? { ok: false, reason: 'buckles', message: 'buckles under this load: stiffness is not positive definite' }
       : { ok: false, reason: 'not-converged', message: `eigen-solver: ${out.message}` };
   }
-  return { ok: true, lambdas: out.values, vectors: out.vectors };
+  return { ok: true, lambdas: out.values, vectors: () => out.vectors, release: out.release };
 }
 
 /** Reported mode from an M-orthonormal reduced eigenvector x (xᵀ M x = 1). */
 export function modeResult(system: MemberSystem, lambda: number, x: Float64Array, mode: number, addedMass: SymBanded | null): ModeResult {
   const nodes = system.mesh.z.length;
   const w = new Float64Array(nodes);
-  let big = 0;
   for (let i = 0; i < nodes; i++) {
     const r = system.dofMap[2 * i];
     w[i] = r >= 0 ? x[r] : 0;
-    if (Math.abs(w[i]) > Math.abs(big)) big = w[i];
   }
+  // ±(largest |w|), signed so that the first node at the peak (ties within a relative 1e-6) comes out +1.
+  const big = signedPeak(w);
   const omega = Math.sqrt(Math.max(lambda, 0));
   const f = omega / (2 * Math.PI);
   const result: ModeResult = {

@@ -4,7 +4,10 @@ import type { AddedMassMethod } from './added-mass';
 export interface ModeShape {
   /** Node positions along the member, m. */
   zM: number[];
-  /** Lateral displacement at the nodes, normalised so that the largest |value| is 1 (and positive). */
+  /**
+   * Lateral displacement at the nodes, normalised so that the largest |value| is 1 and positive; where equal and
+   * opposite peaks tie (within a relative 1e-6), the one nearest z = 0 is the positive one.
+   */
   displacement: number[];
 }
 

@@ -72,10 +72,13 @@ function tooFine(what: string, estimate: number): MemberOutcome {
   };
 }
 
+/** Modes of one mesh; their vectors are formed only for the mesh that is reported (see `MeshModes`). */
+type LevelModes = { lambdas: Float64Array; vectors: () => Float64Array; release: () => void };
+
 interface Level {
   system: MemberSystem;
-  dry: { lambdas: Float64Array; vectors: Float64Array };
-  wet: { lambdas: Float64Array; vectors: Float64Array } | null;
+  dry: LevelModes;
+  wet: LevelModes | null;
 }
 
 function frequencies(lambdas: Float64Array): number[] {
@@ -165,15 +168,20 @@ export function solveMember(input: MemberModel, options: SolveMemberOptions = {}
       precisionStop = true;
       break;
     }
+    // Going on to a finer mesh: this one's vectors will never be read, and its eigen-solver work space may
+    // serve the next mesh's solves.
+    level.dry.release();
+    level.wet?.release();
     counts = next;
   }
 
   const final = prev!;
   const sys = final.system;
   const n = sys.n;
-  const build = (modes: { lambdas: Float64Array; vectors: Float64Array }, wetSet: boolean): ModeSetResult => {
+  const build = (modes: LevelModes, wetSet: boolean): ModeSetResult => {
+    const vectors = modes.vectors();
     const list = Array.from(modes.lambdas, (l, i) =>
-      modeResult(sys, l, modes.vectors.subarray(i * n, (i + 1) * n), i + 1, wetSet ? sys.mAdded : null),
+      modeResult(sys, l, vectors.subarray(i * n, (i + 1) * n), i + 1, wetSet ? sys.mAdded : null),
     );
     return { frequenciesHz: frequencies(modes.lambdas), periodsS: list.map((m) => m.periodS), modes: list };
   };

@@ -76,20 +76,34 @@ export function solveLdltInto(f: LdltFactor, rhs: Float64Array, out: Float64Arra
   const { n, halfBandwidth: b, data } = f;
   const w = b + 1;
   if (out !== rhs) out.set(rhs.subarray(0, n));
+  // Half-bandwidth 3 (every beam matrix): the loops over the band written out, rows clear of the end only.
+  const full = b === 3 ? n - 3 : 0;
   // L y = rhs (column-oriented: l_{k+p,k} sits in row k).
   for (let k = 0; k < n; k++) {
     const yk = out[k];
     if (yk === 0) continue;
-    const last = Math.min(b, n - 1 - k);
     const rk = k * w;
+    if (k < full) {
+      out[k + 1] -= data[rk + 1] * yk;
+      out[k + 2] -= data[rk + 2] * yk;
+      out[k + 3] -= data[rk + 3] * yk;
+      continue;
+    }
+    const last = Math.min(b, n - 1 - k);
     for (let p = 1; p <= last; p++) out[k + p] -= data[rk + p] * yk;
   }
   // D z = y and Lᵀ x = z in one backward pass (z_k = y_k / d_k is formed just before it is used).
   for (let k = n - 1; k >= 0; k--) {
-    const last = Math.min(b, n - 1 - k);
     const rk = k * w;
     let s = out[k] / data[rk];
-    for (let p = 1; p <= last; p++) s -= data[rk + p] * out[k + p];
+    if (k < full) {
+      s -= data[rk + 1] * out[k + 1];
+      s -= data[rk + 2] * out[k + 2];
+      s -= data[rk + 3] * out[k + 3];
+    } else {
+      const last = Math.min(b, n - 1 - k);
+      for (let p = 1; p <= last; p++) s -= data[rk + p] * out[k + p];
+    }
     out[k] = s;
   }
   return out;

@@ -44,15 +44,29 @@ export function symBandedMulInto(a: SymBanded, x: Float64Array, out: Float64Arra
   const { n, halfBandwidth: b, data } = a;
   const w = b + 1;
   out.fill(0, 0, n);
+  // Half-bandwidth 3 (every beam matrix): the loop over the band written out, same operations in the same order.
+  const full = b === 3 ? n - 3 : 0;
   for (let i = 0; i < n; i++) {
     const row = i * w;
     const xi = x[i];
     let s = data[row] * xi;
-    const kmax = Math.min(b, n - 1 - i);
-    for (let k = 1; k <= kmax; k++) {
-      const v = data[row + k];
-      s += v * x[i + k];
-      out[i + k] += v * xi;
+    if (i < full) {
+      const v1 = data[row + 1];
+      s += v1 * x[i + 1];
+      out[i + 1] += v1 * xi;
+      const v2 = data[row + 2];
+      s += v2 * x[i + 2];
+      out[i + 2] += v2 * xi;
+      const v3 = data[row + 3];
+      s += v3 * x[i + 3];
+      out[i + 3] += v3 * xi;
+    } else {
+      const kmax = Math.min(b, n - 1 - i);
+      for (let k = 1; k <= kmax; k++) {
+        const v = data[row + k];
+        s += v * x[i + k];
+        out[i + k] += v * xi;
+      }
     }
     out[i] += s;
   }

@@ -23,7 +23,8 @@ import { type SymBanded, symBandedGet, symBandedMulInto } from './banded';
 import { createLdltFactor, factorLdltInto, type LdltFactor, solveLdltInto } from './banded-ldlt';
 import { inverseRayleighRitz } from './eigen-rayleigh-ritz';
 import { compensatedRayleighQuotients } from './compensated-rayleigh';
-import { tridiagonalEigenInPlace } from './tridiagonal';
+import { recycleBasis, Workspace } from './lanczos-basis';
+import { combineRitzVectors, type RitzPair, RitzVector, RitzWork } from './lanczos-ritz';
 
 export interface LowestModesOptions {
   /** Shift σ below the lowest wanted eigenvalue (K − σM must be positive definite). Default: chosen automatically. */
@@ -39,8 +40,16 @@ export type LowestModesOutcome =
       ok: true;
       /** Lowest `count` eigenvalues λ = ω², ascending. */
       values: Float64Array;
-      /** M-orthonormal eigenvectors: vector i at `vectors[i·n … (i+1)·n)`. */
-      vectors: Float64Array;
+      /**
+       * M-orthonormal eigenvectors: vector i at `vectors[i·n … (i+1)·n)`. Formed on first read (a refinement
+       * reads only its last mesh's), from the run's basis, which is kept until then.
+       */
+      readonly vectors: Float64Array;
+      /**
+       * Says the vectors will not be read: the run's basis may then serve the next solve. Reading `vectors`
+       * after this throws.
+       */
+      release(): void;
       /** Shift σ used. */
       shift: number;
       /** Lanczos steps taken (= solves with K − σM). */
@@ -49,12 +58,6 @@ export type LowestModesOutcome =
       restarts: number;
     }
   | { ok: false; reason: 'not-positive-definite' | 'not-converged'; message: string };
-
-interface RitzPair {
-  lambda: number;
-  x: Float64Array;
-  mx: Float64Array;
-}
 
 const MAX_RESTARTS = 8;
 const EPS = 2.220446049250313e-16;
@@ -125,7 +128,7 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
       message: `K − σM has ${factor.negativePivots} negative pivot(s) at σ = ${sigma}: eigenvalues lie below the shift`,
     };
   }
-  if (want === 0) return { ok: true, values: new Float64Array(0), vectors: new Float64Array(0), shift: sigma, steps: 0, restarts: 0 };
+  if (want === 0) return { ok: true, values: new Float64Array(0), vectors: new Float64Array(0), release: () => {}, shift: sigma, steps: 0, restarts: 0 };
 
   const locked: RitzPair[] = [];
   let steps = 0;
@@ -134,7 +137,8 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
   let lastRun: Workspace | null = null;
   for (;;) {
     const need = want - Math.min(locked.length, want) || 1;
-    const run = lanczosRun(factor, m, locked, Math.min(need + 2, n - locked.length), tol, rand);
+    const runWant = Math.min(need + 2, n - locked.length);
+    const run = lanczosRun(factor, m, locked, runWant, Math.min(need, runWant), tol, rand);
     steps += run.steps;
     lastRun = run.ws;
     if (!run.ok) return { ok: false, reason: 'not-converged', message: `Lanczos did not converge in ${run.steps} steps` };
@@ -153,28 +157,77 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
     if (++restarts > MAX_RESTARTS) return { ok: false, reason: 'not-converged', message: `Sturm count ${below} below ${mu} but ${found} eigenvalues found` };
   }
   const values = new Float64Array(want);
-  const vectors = new Float64Array(want * n);
   if (restarts > 0) {
     // Pairs from separate runs: one Rayleigh–Ritz step on their span couples them and squares their error.
     const refined = inverseRayleighRitz(factor, m, sigma, locked);
     values.set(refined.values.subarray(0, want));
-    vectors.set(refined.vectors.subarray(0, want * n));
-  } else {
-    for (let i = 0; i < want; i++) {
-      values[i] = locked[i].lambda;
-      vectors.set(locked[i].x, i * n);
+    const vectors = refined.vectors.slice(0, want * n);
+    reReadStiffValues(k, m, sigma, scale, values, vectors);
+    // Every vector read from the runs' bases is formed by now: the last basis may serve the next solve.
+    if (lastRun) recycleBasis(lastRun);
+    return { ok: true, values, vectors, release: () => {}, shift: sigma, steps, restarts };
+  }
+  const wanted = locked.slice(0, want);
+  for (let i = 0; i < want; i++) values[i] = locked[i].lambda;
+  const basis = lastRun;
+  let formed: Float64Array | null = null;
+  let released = false;
+  const form = (): Float64Array => {
+    if (formed) return formed;
+    if (released) throw new Error('lowestModesBanded: vectors read after release()');
+    const vectors = new Float64Array(want * n);
+    const run = wanted[0] instanceof RitzVector ? wanted[0].basisOf().ws : null;
+    if (run && wanted.every((p) => p instanceof RitzVector && p.basisOf().ws === run)) {
+      // All from one run (the usual case): combined from its basis in one sweep over it, straight into `vectors`.
+      combineRitzVectors(wanted as RitzVector[], vectors);
+    } else {
+      for (let i = 0; i < want; i++) vectors.set(wanted[i].x, i * n);
     }
     mOrthonormalise(m, vectors, want, n);
-  }
-  // A low mode's Ritz value carries about ε·λmax/λ of rounding through the factorisation (λmax/λ1 reaches
-  // 1e16 on a 2,000-element beam): read it again as a compensated Rayleigh quotient where that could exceed
-  // 1e-12 (compensated-rayleigh.ts). The vector is accurate, so the quotient is, to its error squared.
+    formed = vectors;
+    // Every vector read from the run's basis is formed by now (the locked pairs die here): it may serve the next solve.
+    if (basis) recycleBasis(basis);
+    return vectors;
+  };
+  reReadStiffValues(k, m, sigma, scale, values, form);
+  return {
+    ok: true,
+    values,
+    get vectors() {
+      return form();
+    },
+    release: () => {
+      if (formed || released) return;
+      released = true;
+      if (basis) recycleBasis(basis);
+    },
+    shift: sigma,
+    steps,
+    restarts,
+  };
+}
+
+/**
+ * A low mode's Ritz value carries about ε·λmax/λ of rounding through the factorisation's backward error
+ * (λmax/λ1 reaches 1e16 on a 2,000-element beam), and a plain Rayleigh quotient cancels just as badly. Where
+ * the bound ε·scale/λ (scale ≈ λmax, `diagonalRatioMax`) passes 1e-9, the values are read again as Rayleigh
+ * quotients summed in doubled precision (compensated-rayleigh.ts), exact to the vectors' error squared. The
+ * error seen is about a thousandth of the bound (2.6e-6 against 6e-3 on λ1 of the bench's 1,000-element
+ * member), so below it the Ritz value stands and the vectors of a coarse mesh need not be formed at all.
+ * `vectors`: the vectors, or a function that forms them (called only when some value is re-read).
+ */
+function reReadStiffValues(
+  k: SymBanded,
+  m: SymBanded,
+  sigma: number,
+  scale: number,
+  values: Float64Array,
+  vectors: Float64Array | (() => Float64Array),
+): void {
   let rough = 0;
-  while (rough < want && EPS * scale > 1e-12 * Math.abs(values[rough] - sigma)) rough++;
-  if (rough > 0) values.set(compensatedRayleighQuotients(k, m, vectors, rough));
-  // Every vector read from the runs' bases is formed by now (the locked pairs die here): the last basis may serve the next solve.
-  if (lastRun) recycleBasis(lastRun);
-  return { ok: true, values, vectors, shift: sigma, steps, restarts };
+  while (rough < values.length && EPS * scale > 1e-9 * Math.abs(values[rough] - sigma)) rough++;
+  if (rough === 0) return;
+  values.set(compensatedRayleighQuotients(k, m, typeof vectors === 'function' ? vectors() : vectors, rough));
 }
 
 /**
@@ -185,13 +238,29 @@ function mOrthonormalise(m: SymBanded, vectors: Float64Array, count: number, n: 
   const mv = new Float64Array(count * n);
   for (let pass = 0; pass < 2; pass++) {
     for (let a = 0; a < count; a++) {
-      const va = vectors.subarray(a * n, (a + 1) * n);
-      for (let b = 0; b < a; b++) {
-        const c = dot(mv.subarray(b * n, (b + 1) * n), va, n);
-        const vb = vectors.subarray(b * n, (b + 1) * n);
-        for (let i = 0; i < n; i++) va[i] -= c * vb[i];
+      const ao = a * n;
+      if (a > 0) {
+        let c = 0;
+        for (let i = 0; i < n; i++) c += mv[i] * vectors[ao + i];
+        for (let b = 0; b < a; b++) {
+          const bo = b * n;
+          if (b + 1 === a) {
+            for (let i = 0; i < n; i++) vectors[ao + i] -= c * vectors[bo + i];
+            break;
+          }
+          // v_a −= c v_b fused with the next coefficient (M v_{b+1})ᵀ v_a: the same operations in the same order as two passes.
+          const no = bo + n;
+          let cn = 0;
+          for (let i = 0; i < n; i++) {
+            const vi = vectors[ao + i] - c * vectors[bo + i];
+            vectors[ao + i] = vi;
+            cn += mv[no + i] * vi;
+          }
+          c = cn;
+        }
       }
-      const ma = mv.subarray(a * n, (a + 1) * n);
+      const va = vectors.subarray(ao, ao + n);
+      const ma = mv.subarray(ao, ao + n);
       symBandedMulInto(m, va, ma);
       const norm = Math.sqrt(Math.max(dot(va, ma, n), 0));
       if (norm > 0) {
@@ -213,76 +282,33 @@ interface RunOutcome {
   pairs: RitzVector[];
 }
 
-/** Basis arrays kept from the last finished solve (the solver runs on one thread and never re-enters). */
-let spareBasis: { q: Float64Array; mq: Float64Array } | null = null;
-/** Largest basis kept between solves (floats per array): 32 MB for the pair. */
-const SPARE_LIMIT = 1 << 21;
+/**
+ * Largest fall of the worst residual ratio (`RitzWork.check`) in one Lanczos step assumed when spacing the
+ * convergence checks, in decades. The residuals of the wanted Ritz pairs fall geometrically, at a rate set by
+ * the gaps of the spectrum (the Kaniel–Paige–Saad bounds: Parlett, The Symmetric Eigenvalue Problem, ch. 12;
+ * Saad, Numerical Methods for Large Eigenvalue Problems, ch. 6; chapters from memory). Measured on the demo
+ * members and on a 200- and a 1000-element pile, the worst ratio fell by 0.1 to 2.0 decades a step, starting
+ * near 10¹⁰. A run whose ratio is 10^L away cannot converge in fewer than L / 3 steps unless it falls faster
+ * than that; if it ever does, the run only takes a step or two more than it needed (its pairs are then more
+ * accurate, not less).
+ */
+const MAX_DECADES_PER_STEP = 3;
 
-function recycleBasis(ws: Workspace): void {
-  if (ws.q.length > SPARE_LIMIT) return;
-  if (!spareBasis || spareBasis.q.length < ws.q.length) spareBasis = { q: ws.q, mq: ws.mq };
+/** Steps until the next convergence check worth its O(j²) cost, from the worst residual ratio of the last one. */
+function stepsToNextCheck(worst: number): number {
+  if (!(worst > 1) || worst === Infinity) return 1;
+  return Math.max(1, Math.ceil(Math.log10(worst) / MAX_DECADES_PER_STEP));
 }
 
 /**
- * Krylov basis and its M-images, one flat Float64Array each: vector j at `[j·n … (j+1)·n)`; the
- * tridiagonal's α_j and β_j (β_j couples vectors j − 1 and j; 0 at a block start) and the ω estimates
- * of |q_jᵀ M q_k| for the current and previous vectors. Grown by doubling, never per step.
+ * One Lanczos run, M-orthogonal to the locked pairs, until the `tight` largest Ritz values θ have relative
+ * residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) and the next `want − tight` ≤ √tol, or the space
+ * is exhausted. Those extra pairs serve the Sturm check, where a looser pair cannot hide a missed eigenvalue:
+ * by Cauchy's interlace theorem (classical; Parlett, ch. 10) the k-th largest Ritz value θ never exceeds the
+ * k-th largest eigenvalue, so a Ritz λ = σ + 1/θ below μ means a true one below μ too. Asking them for tol as
+ * well would cost the run several steps (the last pairs converge last) for digits nobody reads.
  */
-class Workspace {
-  q: Float64Array;
-  mq: Float64Array;
-  alpha: Float64Array;
-  beta: Float64Array;
-  omPrev: Float64Array;
-  omCur: Float64Array;
-  omNext: Float64Array;
-  cap: number;
-  constructor(
-    readonly n: number,
-    cap: number,
-  ) {
-    this.cap = cap;
-    // The basis arrays are the large ones: taken from the last solve's when they fit (a refinement's
-    // dry and wet solves, and the next mesh, which has about twice the DOFs), else made with room for that.
-    // Stale entries are harmless: vector j is written before anything reads it.
-    if (spareBasis && spareBasis.q.length >= cap * n) {
-      this.q = spareBasis.q;
-      this.mq = spareBasis.mq;
-      spareBasis = null;
-    } else {
-      this.q = new Float64Array(2 * cap * n);
-      this.mq = new Float64Array(2 * cap * n);
-    }
-    this.alpha = new Float64Array(cap);
-    this.beta = new Float64Array(cap + 1);
-    this.omPrev = new Float64Array(cap + 1);
-    this.omCur = new Float64Array(cap + 1);
-    this.omNext = new Float64Array(cap + 1);
-  }
-  grow(limit: number): void {
-    const cap = Math.min(limit, 2 * this.cap);
-    const n = this.n;
-    const more = (a: Float64Array, len: number) => {
-      const b = new Float64Array(len);
-      b.set(a.subarray(0, Math.min(a.length, len)));
-      return b;
-    };
-    this.q = more(this.q, cap * n);
-    this.mq = more(this.mq, cap * n);
-    this.alpha = more(this.alpha, cap);
-    this.beta = more(this.beta, cap + 1);
-    this.omPrev = more(this.omPrev, cap + 1);
-    this.omCur = more(this.omCur, cap + 1);
-    this.omNext = more(this.omNext, cap + 1);
-    this.cap = cap;
-  }
-}
-
-/**
- * One Lanczos run, M-orthogonal to the locked pairs, until the `want` largest Ritz values θ
- * have relative residual ≤ tol (|β_{j+1} s_ji| ≤ tol·θ_i, Parlett §13.2) or the space is exhausted.
- */
-function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tol: number, rand: () => number): RunOutcome {
+function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: number, tight: number, tol: number, rand: () => number): RunOutcome {
   const n = f.n;
   const maxSteps = n - locked.length;
   const ws = new Workspace(n, Math.min(maxSteps, Math.max(2 * want + 16, 32)));
@@ -299,12 +325,30 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
   /** One modified Gram–Schmidt pass of v against basis vectors 0 … count−1 (only those marked, if a mask is given). */
   const orthBasis = (v: Float64Array, count: number, mask?: Uint8Array): void => {
     const { q, mq } = ws;
-    for (let k = 0; k < count; k++) {
-      if (mask && mask[k] === 0) continue;
+    let k = 0;
+    while (k < count && mask && mask[k] === 0) k++;
+    if (k >= count) return;
+    let c = 0;
+    for (let i = 0; i < n; i++) c += mq[k * n + i] * v[i];
+    for (;;) {
+      let next = k + 1;
+      while (next < count && mask && mask[next] === 0) next++;
       const off = k * n;
-      let c = 0;
-      for (let i = 0; i < n; i++) c += mq[off + i] * v[i];
-      for (let i = 0; i < n; i++) v[i] -= c * q[off + i];
+      if (next >= count) {
+        for (let i = 0; i < n; i++) v[i] -= c * q[off + i];
+        return;
+      }
+      // v −= c q_k fused with the next coefficient (M q_next)ᵀ v: each v_i is updated, then read, exactly as
+      // by two separate passes (same operations, same order, so the same bits), in one sweep over v.
+      const noff = next * n;
+      let cn = 0;
+      for (let i = 0; i < n; i++) {
+        const vi = v[i] - c * q[off + i];
+        v[i] = vi;
+        cn += mq[noff + i] * vi;
+      }
+      c = cn;
+      k = next;
     }
   };
   const mNorm = (): number => {
@@ -329,6 +373,7 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
   let j = 0;
   let tnorm = 0;
   let forceNext = false;
+  let nextCheck = 0;
   let mask = new Uint8Array(ws.cap + 1);
   ws.beta[0] = 0;
   ws.omCur[0] = 1;
@@ -402,10 +447,11 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     j++;
     const breakdown = b <= 1e-12 * tnorm;
     const exhausted = j >= maxSteps;
-    if (j >= want) {
-      const check = ritz.check(ws, j, breakdown ? 0 : b, want, tol, exhausted);
+    if (j >= want && (j >= nextCheck || breakdown || exhausted)) {
+      const check = ritz.check(ws, j, breakdown ? 0 : b, want, tight, tol, exhausted);
       if (!check) return { ok: false, steps: j, ws, pairs: [] };
       if (check.converged) return { ok: true, steps: j, ws, pairs: ritz.pairs(ws, j, want) };
+      nextCheck = j + stepsToNextCheck(check.worst);
     }
     // Rotate the ω rows: the new vector becomes the current one.
     ws.omPrev = omCur;
@@ -422,120 +468,4 @@ function lanczosRun(f: LdltFactor, m: SymBanded, locked: RitzPair[], want: numbe
     }
   }
   return { ok: false, steps: j, ws, pairs: [] };
-}
-
-/** The tridiagonal's eigen-decomposition, with buffers reused from check to check. */
-class RitzWork {
-  private d = new Float64Array(0);
-  private e = new Float64Array(0);
-  private z = new Float64Array(0);
-  private order: number[] = [];
-
-  private load(ws: Workspace, j: number): void {
-    if (this.d.length < j) {
-      this.d = new Float64Array(2 * j);
-      this.e = new Float64Array(2 * j);
-      this.z = new Float64Array(2 * j);
-    }
-    for (let i = 0; i < j; i++) {
-      this.d[i] = ws.alpha[i];
-      this.e[i] = i + 1 < j ? ws.beta[i + 1] : 0;
-    }
-  }
-
-  /**
-   * `order[0 … count)`: indices of the `count` largest of d[0 … j), largest first, ties by index — the head
-   * of a stable descending sort, by insertion, without sorting (and allocating) all j every step.
-   */
-  private largestFirst(j: number, count: number): void {
-    const d = this.d;
-    const order = this.order;
-    let len = 0;
-    for (let i = 0; i < j; i++) {
-      const v = d[i];
-      let pos = len;
-      while (pos > 0 && d[order[pos - 1]] < v) pos--;
-      if (pos >= count) continue;
-      for (let k = Math.min(len, count - 1); k > pos; k--) order[k] = order[k - 1];
-      order[pos] = i;
-      if (len < count) len++;
-    }
-    order.length = len;
-  }
-
-  /**
-   * Ritz values and their residual estimates, rotating only the last row of the eigenvector matrix
-   * (the residual of pair i is |β_{j+1} s_{j,i}|): O(j²) per check instead of O(j³), so it can run every step.
-   */
-  check(ws: Workspace, j: number, bNext: number, want: number, tol: number, exhausted: boolean): { converged: boolean } | null {
-    this.load(ws, j);
-    const z = this.z.subarray(0, j);
-    z.fill(0);
-    z[j - 1] = 1;
-    if (!tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), z, 1).ok) return null;
-    this.largestFirst(j, Math.min(want, j));
-    for (let t = 0; t < Math.min(want, j); t++) {
-      const col = this.order[t];
-      const theta = this.d[col];
-      if (!exhausted && !(theta > 0 && Math.abs(bNext * z[col]) <= tol * theta)) return { converged: false };
-    }
-    return { converged: true };
-  }
-
-  /**
-   * The `want` largest Ritz pairs of the converged run: full eigenvectors of T once; x = Q s and M x = (MQ) s
-   * are formed only when read (see RitzVector).
-   */
-  pairs(ws: Workspace, j: number, want: number): RitzVector[] {
-    this.load(ws, j);
-    const s = new Float64Array(j * j);
-    for (let i = 0; i < j; i++) s[i * j + i] = 1;
-    tridiagonalEigenInPlace(j, this.d.subarray(0, j), this.e.subarray(0, j), s, j);
-    this.largestFirst(j, Math.min(want, j));
-    const out: RitzVector[] = [];
-    for (let t = 0; t < Math.min(want, j); t++) {
-      const col = this.order[t];
-      out.push(new RitzVector(this.d[col], ws, s, j, col));
-    }
-    return out;
-  }
-}
-
-/**
- * A converged Ritz pair whose vectors are combined from the run's basis on first read: a run converges
- * two pairs beyond those wanted (their values serve the Sturm check) and M x is needed only after a
- * restart, so most combinations are never formed. The basis is not touched after its run ends, and each
- * vector is summed in the same order as when formed at once, so the values are the same to the bit.
- */
-class RitzVector implements RitzPair {
-  /** λ = σ + 1/θ, set by the caller that knows σ. */
-  lambda = 0;
-  private xv: Float64Array | null = null;
-  private mxv: Float64Array | null = null;
-  constructor(
-    readonly theta: number,
-    private readonly ws: Workspace,
-    private readonly s: Float64Array,
-    private readonly j: number,
-    private readonly col: number,
-  ) {}
-  get x(): Float64Array {
-    return (this.xv ??= this.combine(this.ws.q));
-  }
-  get mx(): Float64Array {
-    return (this.mxv ??= this.combine(this.ws.mq));
-  }
-  /** Σ_r s[r, col] · basis vector r. */
-  private combine(basis: Float64Array): Float64Array {
-    const { n } = this.ws;
-    const { s, j, col } = this;
-    const out = new Float64Array(n);
-    for (let r = 0; r < j; r++) {
-      const c = s[r * j + col];
-      if (c === 0) continue;
-      const off = r * n;
-      for (let i = 0; i < n; i++) out[i] += c * basis[off + i];
-    }
-    return out;
-  }
 }

@@ -11,6 +11,7 @@ import { sloshingModes } from './sloshing';
 import { tankAddedMass } from './tank';
 import { combineVectors, dominantDryMode, wetModes } from './wet';
 import { BoundedMemo } from '../memo/bounded-memo';
+import { signedPeak } from '../linalg/shape-sign';
 import type { PlateInput, PlateOutcome, PlateResolution, PlateResult, SloshingMode } from './types';
 
 const DEFAULTS: Required<PlateResolution> = {
@@ -102,12 +103,11 @@ function frequencies(p: PlateInput, modes: number, res: Required<PlateResolution
 
 const relative = (fine: number[], coarse: number[]) => fine.map((f, i) => Math.abs(f - coarse[i]) / f);
 
-function normalised(shapes: Float64Array[]): Float64Array[] {
+/** Each shape scaled to a largest |value| of 1, its first peak positive (`signedPeak`: ties within 1e-6 go to the lower index). */
+export function normalised(shapes: Float64Array[]): Float64Array[] {
   return shapes.map((s) => {
-    let big = 0;
-    let at = 0;
-    for (let i = 0; i < s.length; i++) if (Math.abs(s[i]) > big) { big = Math.abs(s[i]); at = i; }
-    const f = big > 0 ? Math.sign(s[at]) / big : 1;
+    const peak = signedPeak(s);
+    const f = peak !== 0 ? 1 / peak : 1;
     return s.map((v) => v * f);
   });
 }

@@ -82,7 +82,8 @@ export interface PlateResolution {
 /**
  * One set of modes. `shapes[i]` is mode i's deflection on a (nx × ny) grid of points including the edges,
  * layout `[iy·nx + ix]` (ix along the width from the left edge, iy up from the bottom edge), scaled so the
- * largest |w| is 1.
+ * largest |w| is 1 and positive; where equal and opposite peaks tie (within a relative 1e-6), the first in
+ * that layout is the positive one.
  */
 export interface PlateModeSet {
   frequenciesHz: number[];

@@ -86,6 +86,34 @@ describe('shift-invert Lanczos on banded matrices', () => {
     }
   });
 
+  it('forms the vectors of an earlier solve correctly after later solves, and refuses them after release', () => {
+    // Vectors are formed on first read from the run's basis, which later solves must not overwrite meanwhile.
+    const { k, m } = secondDifference(60);
+    const first = lowestModesBanded(k, m, 4);
+    if (!first.ok) throw new Error(first.message);
+    for (let t = 0; t < 4; t++) {
+      const other = secondDifference(30 + 10 * t);
+      const out = lowestModesBanded(other.k, other.m, 3);
+      if (!out.ok) throw new Error(out.message);
+      out.release();
+    }
+    const n = 60;
+    for (let a = 0; a < 4; a++) {
+      const x = first.vectors.subarray(a * n, (a + 1) * n);
+      const kx = symBandedMul(k, x);
+      const mx = symBandedMul(m, x);
+      let norm = 0;
+      for (let i = 0; i < n; i++) norm += x[i] * mx[i];
+      // M-orthonormal to rounding (see above); the residual as tight as for a vector read at once.
+      expectClose(norm, 1, { atol: 1e-10, label: `xᵀMx mode ${a + 1}` });
+      for (let i = 0; i < n; i++) expectClose(kx[i], first.values[a] * mx[i], { atol: 1e-9, label: `residual mode ${a + 1} row ${i}` });
+    }
+    const released = lowestModesBanded(k, m, 2);
+    if (!released.ok) throw new Error(released.message);
+    released.release();
+    expect(() => released.vectors).toThrow(/after release/);
+  });
+
   it('finds both copies of a repeated eigenvalue, zero included', () => {
     // A single Krylov space holds one vector per eigenvalue; the copies arrive through breakdown restarts,
     // rounding, or the Sturm-count restart. Whatever the route, both copies must be returned.
