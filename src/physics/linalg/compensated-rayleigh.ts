@@ -16,22 +16,56 @@ import type { SymBanded } from './banded';
 
 /** 2^27 + 1, Dekker's splitting constant for binary64. */
 const SPLIT = 134217729;
+const EPS = 2.220446049250313e-16;
 
 /**
- * Rayleigh quotients of `count` vectors (vector i at `vectors[i·n … (i+1)·n)`), xᵀKx compensated; M is positive
- * definite, so xᵀMx is summed plainly (no cancellation). K's entries are split once for all the vectors.
+ * Re-reads `values[i]` (i < count) as the Rayleigh quotient of vector i (at `vectors[i·n … (i+1)·n)`) with
+ * xᵀKx compensated, wherever the plain value could be off by more than `tolerance` (relative). The test is
+ * the condition of the sum, |x|ᵀ|K||x| / xᵀKx, times (b + 2)·ε: a first-order bound on what a banded LDLᵀ
+ * with half-bandwidth b (its backward error: G.H. Golub & C.F. Van Loan, Matrix Computations, ch. 4, from memory) or a
+ * plain sum leaves in the value; it costs one plain pass. M is positive definite, so xᵀMx is summed plainly
+ * (no cancellation). K's entries are split once, on the first vector that needs it. Returns how many were re-read.
  */
-export function compensatedRayleighQuotients(k: SymBanded, m: SymBanded, vectors: Float64Array, count: number): Float64Array {
+export function reReadRayleighQuotients(
+  k: SymBanded,
+  m: SymBanded,
+  vectors: Float64Array,
+  values: Float64Array,
+  count: number,
+  tolerance: number,
+): number {
   const n = k.n;
-  const split = splitBanded(k);
-  const xh = new Float64Array(n);
-  const xl = new Float64Array(n);
-  const out = new Float64Array(count);
+  const bound = (k.halfBandwidth + 2) * EPS;
+  let split: SplitBanded | null = null;
+  let xh: Float64Array | null = null;
+  let xl: Float64Array | null = null;
+  let reRead = 0;
   for (let v = 0; v < count; v++) {
     const x = vectors.subarray(v * n, (v + 1) * n);
-    out[v] = compensatedQuadraticForm(split, x, xh, xl) / quadraticForm(m, x);
+    const mass = quadraticForm(m, x);
+    if (bound * absoluteQuadraticForm(k, x) <= tolerance * Math.abs(values[v]) * mass) continue;
+    split ??= splitBanded(k);
+    xh ??= new Float64Array(n);
+    xl ??= new Float64Array(n);
+    values[v] = compensatedQuadraticForm(split, x, xh, xl) / mass;
+    reRead++;
   }
-  return out;
+  return reRead;
+}
+
+/** Σ |a_ij·x_i·x_j| over the whole of a symmetric banded A: the size of the terms xᵀAx cancels. */
+function absoluteQuadraticForm(a: SymBanded, x: Float64Array): number {
+  const { n, halfBandwidth: b, data } = a;
+  const w = b + 1;
+  let s = 0;
+  for (let i = 0; i < n; i++) {
+    const row = i * w;
+    const last = Math.min(b, n - 1 - i);
+    let r = Math.abs(data[row] * x[i]);
+    for (let d = 1; d <= last; d++) r += 2 * Math.abs(data[row + d] * x[i + d]);
+    s += r * Math.abs(x[i]);
+  }
+  return s;
 }
 
 /** A banded matrix with each stored entry a = hi + lo (Dekker's split, off-diagonals doubled: they stand for both triangles). */

@@ -22,7 +22,7 @@ import { seededUniform01 } from './seeded';
 import { type SymBanded, symBandedGet, symBandedMulInto } from './banded';
 import { createLdltFactor, factorLdltInto, type LdltFactor, solveLdltInto } from './banded-ldlt';
 import { inverseRayleighRitz } from './eigen-rayleigh-ritz';
-import { compensatedRayleighQuotients } from './compensated-rayleigh';
+import { reReadRayleighQuotients } from './compensated-rayleigh';
 import { recycleBasis, Workspace } from './lanczos-basis';
 import { combineRitzVectors, type RitzPair, RitzVector, RitzWork } from './lanczos-ritz';
 
@@ -209,12 +209,12 @@ export function lowestModesBanded(k: SymBanded, m: SymBanded, count: number, opt
 
 /**
  * A low mode's Ritz value carries about ε·λmax/λ of rounding through the factorisation's backward error
- * (λmax/λ1 reaches 1e16 on a 2,000-element beam), and a plain Rayleigh quotient cancels just as badly. Where
- * the bound ε·scale/λ (scale ≈ λmax, `diagonalRatioMax`) passes 1e-9, the values are read again as Rayleigh
- * quotients summed in doubled precision (compensated-rayleigh.ts), exact to the vectors' error squared. The
- * error seen is about a thousandth of the bound (2.6e-6 against 6e-3 on λ1 of the bench's 1,000-element
- * member), so below it the Ritz value stands and the vectors of a coarse mesh need not be formed at all.
- * `vectors`: the vectors, or a function that forms them (called only when some value is re-read).
+ * (λmax/λ1 reaches 1e16 on a 2,000-element beam), and a plain Rayleigh quotient cancels just as badly.
+ * Where the crude bound ε·scale/λ (scale ≈ λmax, `diagonalRatioMax`) passes 1e-9, the vectors are formed and
+ * each value whose sharper bound (the condition of xᵀKx) passes 1e-11 is read again as a Rayleigh quotient
+ * summed in doubled precision (compensated-rayleigh.ts), exact to its vector's error squared. A coarse mesh
+ * passes neither test, so its vectors need not be formed at all.
+ * `vectors`: the vectors, or a function that forms them (called only when the crude bound passes).
  */
 function reReadStiffValues(
   k: SymBanded,
@@ -227,7 +227,7 @@ function reReadStiffValues(
   let rough = 0;
   while (rough < values.length && EPS * scale > 1e-9 * Math.abs(values[rough] - sigma)) rough++;
   if (rough === 0) return;
-  values.set(compensatedRayleighQuotients(k, m, typeof vectors === 'function' ? vectors() : vectors, rough));
+  reReadRayleighQuotients(k, m, typeof vectors === 'function' ? vectors() : vectors, values, rough, 1e-11);
 }
 
 /**
