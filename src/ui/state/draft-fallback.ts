@@ -32,6 +32,12 @@ export function clearFallback(tab: string): void {
   }
 }
 
+/** Whether any tab left a copy (read without parsing; throws when localStorage cannot be read). */
+export function hasFallbacks(): boolean {
+  for (let i = 0; i < localStorage.length; i++) if (localStorage.key(i)?.startsWith(PREFIX)) return true;
+  return false;
+}
+
 /** Every copy left by any tab (unparsed cases: the store checks them). Damaged entries are removed. */
 export function readFallbacks(): FallbackDraft[] {
   const out: FallbackDraft[] = [];
