@@ -15,10 +15,13 @@ export function startSolverFirst(): Plugin {
     config: () => ({ build: { rollupOptions: { input: { index: resolve(import.meta.dirname, '../index.html'), 'start-solver': ENTRY } } } }),
     transformIndexHtml: {
       order: 'post',
-      handler(_html, ctx) {
+      handler(html, ctx) {
         const chunk = Object.values(ctx.bundle ?? {}).find((c) => c.type === 'chunk' && c.isEntry && c.facadeModuleId === ENTRY);
         if (!chunk) throw new Error('wetmode-start-solver-first: the start-solver entry was not built');
-        return [{ tag: 'script', attrs: { type: 'module', async: true, src: `/${chunk.fileName}` }, injectTo: 'head' }];
+        // Just before the app's script, ahead of its preloads: asked for second, it is not queued behind them.
+        const at = html.indexOf('<script type="module"');
+        if (at < 0) throw new Error('wetmode-start-solver-first: index.html has no module script');
+        return `${html.slice(0, at)}<script type="module" async src="/${chunk.fileName}"></script>\n    ${html.slice(at)}`;
       },
     },
   };

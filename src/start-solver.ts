@@ -9,6 +9,7 @@ import type { StartedSolverHolder, StartedSolverKey } from './worker/started-sol
 const KEY: StartedSolverKey = '__wetmodeStartedSolver';
 
 try {
+  performance.mark('wetmode:solver-start'); // a start step the first-load measurement prints (see boot-marks.ts)
   (globalThis as StartedSolverHolder)[KEY] = new Worker(new URL('./worker/solver.worker.ts', import.meta.url), { type: 'module' });
 } catch {
   // No module workers here: the app makes its own and reports the problem.
