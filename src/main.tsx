@@ -19,9 +19,11 @@ const mount = () => {
   markOnce('wetmode:mount');
   render(<App />, document.getElementById('app')!);
 };
-// The demo opened before the store (a device with nothing kept): nothing the store says can change the first screen
-// unless it holds work after all, so the UI mounts now and its answer is drawn as soon as the worker has it.
-// A task later, not now: the solver worker, just created, starts only once this task has ended (its script then
-// loads on its own thread while the UI renders).
-if (boot.openedEarly) setTimeout(mount, 0);
-else void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);
+// The first case opened before the store (see early-boot.ts): the UI mounts now, its answer drawn as soon as the
+// worker has it; the store, once open, replaces that case only if it holds other work to reopen. A task later, not
+// now: the solver worker, just created, starts only once this task has ended (its script then loads on its own
+// thread while the UI renders).
+void boot.openedEarly.then((early) => {
+  if (early) setTimeout(mount, 0);
+  else void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);
+});

@@ -14,11 +14,13 @@ export interface FallbackDraft {
   savedAt: string;
   baseRevision: number | null;
   received: boolean;
+  /** Written as the page went away for good (pagehide, not kept for back/forward), not merely hidden. */
+  leaving: boolean;
 }
 
-export function writeFallback(tab: string, doc: Case, baseRevision: number | null, received: boolean): void {
+export function writeFallback(tab: string, doc: Case, baseRevision: number | null, received: boolean, leaving = false): void {
   try {
-    localStorage.setItem(PREFIX + tab, JSON.stringify({ savedAt: new Date().toISOString(), baseRevision, received, case: doc }));
+    localStorage.setItem(PREFIX + tab, JSON.stringify({ savedAt: new Date().toISOString(), baseRevision, received, leaving, case: doc }));
   } catch {
     /* storage full or off: the database draft is all there is */
   }
@@ -49,7 +51,7 @@ export function readFallbacks(): FallbackDraft[] {
         const v = JSON.parse(localStorage.getItem(key) ?? '') as Partial<FallbackDraft>;
         if (typeof v.savedAt !== 'string') throw new Error('no time');
         const base = typeof v.baseRevision === 'number' ? v.baseRevision : null;
-        out.push({ tab: key.slice(PREFIX.length), case: v.case, savedAt: v.savedAt, baseRevision: base, received: v.received === true });
+        out.push({ tab: key.slice(PREFIX.length), case: v.case, savedAt: v.savedAt, baseRevision: base, received: v.received === true, leaving: v.leaving === true });
       } catch {
         localStorage.removeItem(key);
       }

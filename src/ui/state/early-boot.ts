@@ -2,9 +2,10 @@
  * The boot of the page, started as the app's script runs, before the UI mounts: the solver worker starts, the
  * device store opens, and the first case (this tab's draft, a closed tab's draft, the last case, or the demo on a
  * fresh device) is opened in the model, which reads it with the quick unit reader and sends it to the worker at
- * once. The UI then mounts on a model that is already solving, straight onto the Member screen. On a device that
- * has kept nothing (device-record.ts) the demo is opened before the store, and the UI mounts at once; the store's
- * choice replaces it when it opens if the user has not touched it. Whatever fails on the way, the store and the
+ * once. The UI then mounts on a model that is already solving, straight onto the Member screen. When the first
+ * case can be told without the store (the demo on a device that has kept nothing, device-record.ts; the unsaved
+ * work a page left as it went away, first-guess.ts) it is opened before the store, and the UI mounts at once; the
+ * store's choice replaces it when it opens if it differs and the user has not touched it. Whatever fails on the way, the store and the
  * Cases screen still open. One boot per page; `useBoot` takes it over.
  */
 import type { CaseStore } from '../../store';
@@ -14,11 +15,12 @@ import { openDeviceStoreOnce } from './early-store';
 import { lastOpenCase } from './last-case';
 import { followStoreChanges } from './remote-changes';
 import { createModel, createSectionModel, createSectionSolver, firstCase, mergeFallbacks, type FirstCase } from './services';
-import { openTabs, type TabIdentity } from './tab';
+import { openTabs, tabIdentity, type TabIdentity } from './tab';
 import { markOnce } from './boot-marks';
 import { likelyFirstRequest } from './first-request';
 import { freshDevice, noteStoreHolds } from './device-record';
-import type { Case } from '../../case';
+import { sameCaseContent, type Case } from '../../case';
+import { guessFirstCase, type GuessedCase } from './first-guess';
 import { caseFromDemo } from '../../app/create-case';
 import { DEMO_CASES } from '../../kinds/registry';
 
@@ -37,8 +39,9 @@ export interface Boot {
   outcome: Promise<BootOutcome>;
   /** The outcome once settled (null before): a UI mounted after it starts with the store and renders once. */
   settled: BootOutcome | null;
-  /** The demo was opened before the store, on a device with nothing kept (device-record.ts): mount at once. */
-  openedEarly: boolean;
+  /** True once the first case has been opened before the store (the demo on a device with nothing kept, or a page's
+   * unsaved work left as it went away; settled at once, or when the open tabs are known): the UI mounts then. */
+  openedEarly: Promise<boolean>;
 }
 
 let boot: Boot | null = null;
@@ -48,21 +51,38 @@ export function bootOnce(openingLink: boolean): Boot {
   if (boot) return boot;
   const sectionSolver = createSectionSolver();
   const services: BootServices = { model: createModel(), section: createSectionModel(sectionSolver), sectionSolver };
-  let early: Case | null = null;
-  if (!openingLink && freshDevice()) {
-    // Nothing kept on this device: the first case is the demo. Open it now (its solve starts at once) rather than
-    // after the store has opened; the store is still read below and wins if it holds something after all.
-    early = caseFromDemo(DEMO_CASES[0]);
-    services.model.open(early, 'editing', false, null);
-    if (landingHash()) location.hash = '#/member';
-  } else if (!openingLink) {
-    // The worker starts on the likeliest first case now, while the store opens (a few hundred ms on a slow tablet).
-    const guess = likelyFirstRequest();
-    if (guess) services.model.prefetch(guess);
+  const lastCase = { reloaded: lastOpenCase(false), newTab: lastOpenCase(true) }; // before an early case is remembered
+  // The first case opened before the store has opened (its solve starts at once), when it can be told without the
+  // store: the demo on a device that has kept nothing, or the unsaved work a page left as it went away
+  // (first-guess.ts). The store is still read below and wins if it holds something else.
+  let early: Promise<Case | null> = Promise.resolve(null);
+  if (!openingLink) {
+    const open = (guess: GuessedCase | null): Case | null => {
+      if (!guess) return null;
+      services.model.open(guess.doc, 'editing', false, guess.baseRevision);
+      if (landingHash()) location.hash = '#/member';
+      return guess.doc;
+    };
+    const tab = tabIdentity();
+    const fallbacks = typeof indexedDB === 'undefined' ? [] : readFallbacks();
+    const opened = open(freshDevice() ? { doc: caseFromDemo(DEMO_CASES[0]), baseRevision: null } : guessFirstCase(fallbacks, tab, null));
+    if (opened) early = Promise.resolve(opened);
+    else {
+      // The worker starts on the likeliest first case now, while the store opens (a few hundred ms on a slow tablet).
+      const request = likelyFirstRequest();
+      if (request) services.model.prefetch(request);
+      // A new tab may take a closed tab's copy: which tabs are open is known long before the store is.
+      if (tab.fresh && fallbacks.length > 0) early = openTabs().then((live) => (live ? open(guessFirstCase(fallbacks, tab, live)) : null));
+    }
   }
-  const made: Boot = { services, settled: null, openedEarly: early !== null, outcome: openFirstCase(services.model, openingLink, early).then((o) => (made.settled = o)) };
+  const made: Boot = { services, settled: null, openedEarly: early.then((c) => c !== null), outcome: openFirstCase(services.model, openingLink, early, lastCase).then((o) => (made.settled = o)) };
   boot = made;
   return made;
+}
+
+/** Whether this browser can tell open tabs from closed ones (Web Locks): only then does a new tab take a closed tab's draft. */
+function canTellOpenTabs(): boolean {
+  return typeof (globalThis.navigator as { locks?: { query?: unknown } } | undefined)?.locks?.query === 'function';
 }
 
 /** The location of a start with no screen asked for: it lands on the screen of the first case. */
@@ -76,8 +96,8 @@ function landingHash(): boolean {
  * list) replaces it exactly as a start without it would open; if they have, their edits stand and are kept as
  * this tab's draft now that there is a store to keep them in. Never rejects.
  */
-async function openFirstCase(model: BootServices['model'], openingLink: boolean, early: Case | null): Promise<BootOutcome> {
-  const { tab, opened } = await openDeviceStoreOnce();
+async function openFirstCase(model: BootServices['model'], openingLink: boolean, earlyOpening: Promise<Case | null>, lastCase: { reloaded: string | null; newTab: string | null }): Promise<BootOutcome> {
+  const [{ tab, opened }, early] = await Promise.all([openDeviceStoreOnce(), earlyOpening]);
   markOnce('wetmode:store-open');
   const store = opened.store && noteWrites(opened.store);
   try {
@@ -95,13 +115,12 @@ async function openFirstCase(model: BootServices['model'], openingLink: boolean,
     }
     const untouched = () => model.get().doc === null || (early !== null && model.get().doc === early);
     if (!openingLink && untouched()) {
-      // The early demo was opened on a device with no last case: none is looked up (its own id is remembered by now).
-      const first = await firstCase(store, tab.fresh, await openTabs(), early ? null : lastOpenCase(tab.fresh));
+      const first = await firstCase(store, tab.fresh, await openTabs(), tab.fresh ? lastCase.newTab : lastCase.reloaded);
       if (store && !first?.demo) noteStoreHolds(); // a store with cases or drafts (one kept before this mark existed)
       // The user may have opened or changed a case while the store was read: theirs stands.
       if (untouched()) openChosen(model, first, early);
     }
-    // Edits made to the early demo before there was a store: keep them as this tab's draft now.
+    // Edits made to the case opened early, before there was a store: keep them as this tab's draft now.
     if (early && model.get().doc !== early && model.get().mode === 'editing' && model.unsaved()) await model.flushDraft();
   } catch (e) {
     // Never let a case stop the app from starting: the store and the Cases screen still open regardless.
@@ -112,7 +131,13 @@ async function openFirstCase(model: BootServices['model'], openingLink: boolean,
 
 /** Opens the boot's choice of first case, in place of the early demo when there was one. */
 function openChosen(model: BootServices['model'], first: FirstCase | null, early: Case | null): void {
-  if (first?.demo && early) return; // the store holds nothing to reopen: the demo already open stays, its answer too
+  if (first?.demo && early) return; // the store holds nothing to reopen: the case already open stays, its answer too
+  if (early && first && first.mode === 'editing' && first.doc.id === early.id && sameCaseContent(first.doc, early)) {
+    // The guess was the store's choice: it stays open (its answer too), with what the store knows of its saved copy.
+    if (first.saved) model.markSaved(early, first.baseRevision);
+    else model.setBaseRevision(first.baseRevision);
+    return;
+  }
   const movedHash = early !== null && location.hash === '#/member';
   if (!first) {
     // Saved cases but nothing to reopen: the Cases list, as a start that had waited for the store would show.

@@ -43,18 +43,19 @@ export function useBoot(openingLink: boolean): AppServices {
     remember(); // the boot may have opened the first case already
     const offUpdate = onBeforeUpdate(() => model.flushDraft({ everyCase: true }));
     // Synchronous: an IndexedDB write started here may never commit before the page is gone.
-    const keepCopy = () => {
+    const keepCopy = (leaving: boolean) => {
       const { doc, mode, baseRevision } = model.get();
-      if (doc && mode === 'editing' && model.unsaved()) writeFallback(tab.id, doc, baseRevision, false);
+      if (doc && mode === 'editing' && model.unsaved()) writeFallback(tab.id, doc, baseRevision, false, leaving);
     };
     const onHide = () => {
       if (document.visibilityState === 'hidden') {
-        keepCopy();
+        keepCopy(false);
         void model.flushDraft();
       }
     };
-    const onPageHide = () => {
-      keepCopy();
+    // Leaving for good (not kept for back/forward): the next start may open this copy before its store is open.
+    const onPageHide = (e: PageTransitionEvent) => {
+      keepCopy(!e.persisted);
       void model.flushDraft();
     };
     document.addEventListener('visibilitychange', onHide);
