@@ -241,3 +241,16 @@ test('edits typed into the demo before the store has opened are kept as a draft 
   await expect(next.locator('#case-name')).toHaveValue('Typed before the store opened');
   await expect(next.locator('[data-field="outerDiameter"] input')).toHaveValue('1067 mm');
 });
+
+test('Save pressed before the store has opened waits for it and saves the case, never saying storage is unavailable', async ({ page }) => {
+  await page.addInitScript(slowStoreOpening, 2000);
+  await page.goto('/');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.locator('#case-name').fill('Marrow Creek intake pile, saved at once');
+  await page.getByRole('button', { name: 'Save case' }).click();
+  expect(await page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length)).toBe(0);
+  await expect(page.getByText('Saved on this device').first()).toBeVisible({ timeout: 10_000 });
+  await expect(page.getByText(/cannot be kept/)).toHaveCount(0);
+  await page.goto('/#/cases');
+  await expect(page.locator('li', { hasText: 'Marrow Creek intake pile, saved at once' }).first()).toBeVisible();
+});

@@ -85,6 +85,11 @@ function canTellOpenTabs(): boolean {
   return typeof (globalThis.navigator as { locks?: { query?: unknown } } | undefined)?.locks?.query === 'function';
 }
 
+/** The device store once the page's boot has opened it (null when it cannot be opened, or with no boot started). */
+export function storeOnceOpen(): Promise<CaseStore | null> {
+  return boot ? boot.outcome.then((o) => o.store) : Promise.resolve(null);
+}
+
 /** The location of a start with no screen asked for: it lands on the screen of the first case. */
 function landingHash(): boolean {
   return location.hash === '' || location.hash === '#' || location.hash === '#/';

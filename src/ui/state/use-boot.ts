@@ -17,13 +17,14 @@ export function useBoot(openingLink: boolean): AppServices {
     const { services: made, settled } = bootOnce(openingLink);
     return settled ? { ...made, store: settled.store, storeMessage: settled.storeMessage, storeRetryable: settled.storeRetryable } : { ...made, store: null, storeMessage: null };
   });
+  // Whether the first render had the store's outcome: decided with the render, not in the effect after it (the
+  // store may open between the two, and the screens would then never hear of it).
+  const [mountedAfterBoot] = useState(() => bootOnce(openingLink).settled !== null);
   useEffect(() => {
     let cancelled = false;
     const { model, section, sectionSolver } = services;
     let tab = tabIdentity();
-    const started = bootOnce(openingLink);
-    const mountedAfterBoot = started.settled !== null;
-    void started.outcome.then((o) => {
+    void bootOnce(openingLink).outcome.then((o) => {
       tab = o.tab;
       // Mounted after the boot: the first render already had the store; another would redraw every screen for nothing.
       if (!cancelled && !mountedAfterBoot) setServices({ model, section, sectionSolver, store: o.store, storeMessage: o.storeMessage, storeRetryable: o.storeRetryable });
