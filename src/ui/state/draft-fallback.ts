@@ -15,7 +15,7 @@ export interface FallbackDraft {
   baseRevision: number | null;
   received: boolean;
   /** Written as the page went away for good (pagehide, not kept for back/forward), not merely hidden. */
-  leaving: boolean;
+  leaving?: boolean;
 }
 
 export function writeFallback(tab: string, doc: Case, baseRevision: number | null, received: boolean, leaving = false): void {

@@ -27,7 +27,7 @@ export function guessFirstCase(fallbacks: readonly FallbackDraft[], tab: { id: s
   for (const f of fallbacks) {
     if (f.received || Number.isNaN(Date.parse(f.savedAt))) continue;
     // A new tab has no draft of its own: the newest copy of a closed tab (hidden before it closed, or as it did).
-    const candidate = tab.fresh ? liveTabs !== null && f.tab !== tab.id && !liveTabs.has(f.tab) : f.tab === tab.id && f.leaving;
+    const candidate = tab.fresh ? liveTabs !== null && f.tab !== tab.id && !liveTabs.has(f.tab) : f.tab === tab.id && f.leaving === true;
     if (candidate && (!best || Date.parse(f.savedAt) > Date.parse(best.savedAt))) best = f;
   }
   if (!best) return null;
