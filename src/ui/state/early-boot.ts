@@ -85,6 +85,25 @@ function canTellOpenTabs(): boolean {
   return typeof (globalThis.navigator as { locks?: { query?: unknown } } | undefined)?.locks?.query === 'function';
 }
 
+/** Longest the store waits for the first answer of a case opened early (a slow solve must not hold it back). */
+const STORE_WAITS_FOR_ANSWER_MS = 1000;
+
+/** Settles once the open case has its answer (or a solver message), or after `ms`. */
+export function answeredOr(model: Pick<BootServices['model'], 'get' | 'subscribe'>, ms: number): Promise<void> {
+  return new Promise((resolve) => {
+    const answered = () => model.get().results !== null || model.get().solverMessage !== null;
+    let off = () => {};
+    const timer = setTimeout(() => done(), ms);
+    const done = () => {
+      off();
+      clearTimeout(timer);
+      resolve();
+    };
+    off = model.subscribe(() => answered() && done());
+    if (answered()) done();
+  });
+}
+
 /** The device store once the page's boot has opened it (null when it cannot be opened, or with no boot started). */
 export function storeOnceOpen(): Promise<CaseStore | null> {
   return boot ? boot.outcome.then((o) => o.store) : Promise.resolve(null);
@@ -102,7 +121,10 @@ function landingHash(): boolean {
  * this tab's draft now that there is a store to keep them in. Never rejects.
  */
 async function openFirstCase(model: BootServices['model'], openingLink: boolean, earlyOpening: Promise<Case | null>, lastCase: { reloaded: string | null; newTab: string | null }): Promise<BootOutcome> {
-  const [{ tab, opened }, early] = await Promise.all([openDeviceStoreOnce(), earlyOpening]);
+  const early = await earlyOpening; // settled at once, or when the open tabs are known (a few ms)
+  // A case opened early: the store's work on the main thread (opening, upgrading, merging) waits for its answer.
+  if (early) await answeredOr(model, STORE_WAITS_FOR_ANSWER_MS);
+  const { tab, opened } = await openDeviceStoreOnce();
   markOnce('wetmode:store-open');
   const store = opened.store && noteWrites(opened.store);
   try {
