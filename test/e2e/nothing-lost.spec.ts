@@ -254,3 +254,18 @@ test('Save pressed before the store has opened waits for it and saves the case, 
   await page.goto('/#/cases');
   await expect(page.locator('li', { hasText: 'Marrow Creek intake pile, saved at once' }).first()).toBeVisible();
 });
+
+test('a reload shows the work it left before the store has opened, and it stays once the store agrees', async ({ page }) => {
+  await startOnDemo(page);
+  await page.locator('[data-field="outerDiameter"] input').fill('1219 mm');
+  await page.locator('#case-name').fill('Port Halloran dolphin, reloaded');
+  await page.addInitScript(slowStoreOpening, 2000);
+  await page.reload();
+  await expect(page.locator('#case-name')).toHaveValue('Port Halloran dolphin, reloaded');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  expect(await page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length)).toBe(0);
+  await expect.poll(() => page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length), { timeout: 10_000 }).toBe(1);
+  await expect(page.locator('#case-name')).toHaveValue('Port Halloran dolphin, reloaded');
+  await expect(page.locator('[data-field="outerDiameter"] input')).toHaveValue('1219 mm');
+  await expect(page.getByText('Unsaved changes (kept as a draft)').first()).toBeVisible();
+});

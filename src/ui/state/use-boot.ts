@@ -44,19 +44,22 @@ export function useBoot(openingLink: boolean): AppServices {
     remember(); // the boot may have opened the first case already
     const offUpdate = onBeforeUpdate(() => model.flushDraft({ everyCase: true }));
     // Synchronous: an IndexedDB write started here may never commit before the page is gone.
-    const keepCopy = (leaving: boolean) => {
+    // Leaving for good (pagehide, not kept for back/forward): the next start may open this copy before its store is
+    // open. The page also turns hidden as it unloads, after pagehide: that copy keeps the mark.
+    let leaving = false;
+    const keepCopy = () => {
       const { doc, mode, baseRevision } = model.get();
       if (doc && mode === 'editing' && model.unsaved()) writeFallback(tab.id, doc, baseRevision, false, leaving);
     };
     const onHide = () => {
       if (document.visibilityState === 'hidden') {
-        keepCopy(false);
+        keepCopy();
         void model.flushDraft();
       }
     };
-    // Leaving for good (not kept for back/forward): the next start may open this copy before its store is open.
     const onPageHide = (e: PageTransitionEvent) => {
-      keepCopy(!e.persisted);
+      leaving = !e.persisted;
+      keepCopy();
       void model.flushDraft();
     };
     document.addEventListener('visibilitychange', onHide);
