@@ -3,6 +3,7 @@ import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import pkg from './package.json' with { type: 'json' };
 import { unitReaderOnDemand } from './build/unit-reader-on-demand.ts';
+import { startSolverFirst } from './build/start-solver-first.ts';
 
 // Colours of the daylight theme: a deep harbour blue on near-white, chosen for contrast in sun.
 const themeColour = '#0b3d5c';
@@ -44,6 +45,7 @@ export default defineConfig({
   plugins: [
     contentSecurityPolicy(),
     unitReaderOnDemand(),
+    startSolverFirst(),
     preact(),
     VitePWA({
       // The update waits for the user (see src/ui/shell/UpdatePrompt.tsx); the app imports the register module itself.

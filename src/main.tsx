@@ -1,7 +1,7 @@
 import { render } from 'preact';
 import { App } from './ui/App';
 import './ui/styles.css';
-import { bootOnce } from './ui/state/early-boot';
+import { answeredOr, bootOnce } from './ui/state/early-boot';
 import { parseHash } from './ui/shell/router';
 import { markOnce } from './ui/state/boot-marks';
 
@@ -12,6 +12,8 @@ import { markOnce } from './ui/state/boot-marks';
  * to open holds the first paint back by at most MOUNT_WAIT_MS.
  */
 const MOUNT_WAIT_MS = 400;
+/** Longest the UI waits for the answer of a case opened before the store: a slow solve must not hide the screen. */
+const MOUNT_WAITS_FOR_ANSWER_MS = 300;
 
 markOnce('wetmode:script-start');
 const boot = bootOnce(parseHash(location.hash).screen === 'open');
@@ -19,4 +21,11 @@ const mount = () => {
   markOnce('wetmode:mount');
   render(<App />, document.getElementById('app')!);
 };
-void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);
+// The first case opened before the store (see early-boot.ts): the UI mounts once its answer is in, so the first
+// paint holds the answer (drawn once, and the solver worker has the processor to itself meanwhile), or after
+// MOUNT_WAITS_FOR_ANSWER_MS with the answer still on its way. The store, once open, replaces that case only if it
+// holds other work to reopen.
+void boot.openedEarly.then((early) => {
+  if (early) void answeredOr(boot.services.model, MOUNT_WAITS_FOR_ANSWER_MS).then(mount);
+  else void Promise.race([boot.outcome, new Promise((resolve) => setTimeout(resolve, MOUNT_WAIT_MS))]).then(mount);
+});

@@ -167,3 +167,105 @@ test('unsaved work in a closed tab comes back in the next new tab; an older one 
   await fresh.goto('/#/cases');
   await expect(fresh.locator('li', { hasText: 'Port Halloran berth 2, newer' })).toBeVisible();
 });
+
+/**
+ * Runs in the page before its scripts: the device store's database opens `delayMs` later than it would (its
+ * "success" event is held back), as on a slow tablet, so the page is usable before the store is there.
+ */
+function slowStoreOpening(delayMs: number): void {
+  const open = IDBFactory.prototype.open;
+  IDBFactory.prototype.open = function (this: IDBFactory, ...args: Parameters<IDBFactory['open']>) {
+    const request = open.apply(this, args);
+    const add = request.addEventListener.bind(request);
+    request.addEventListener = ((type: string, listener: EventListener, options?: AddEventListenerOptions) =>
+      add(type, type === 'success' ? (e: Event) => void setTimeout(() => listener.call(request, e), delayMs) : listener, options)) as IDBOpenDBRequest['addEventListener'];
+    return request;
+  };
+}
+
+/** The drafts in the page's database (read directly, not through the app), as [case name, outer diameter]. */
+function storedDrafts(page: Page): Promise<[string, string][]> {
+  return page.evaluate(
+    () =>
+      new Promise<[string, string][]>((resolve, reject) => {
+        const r = indexedDB.open('wetmode');
+        r.onerror = () => reject(r.error);
+        r.onsuccess = () => {
+          const db = r.result;
+          const all = db.transaction('drafts').objectStore('drafts').getAll();
+          all.onsuccess = () => {
+            db.close();
+            resolve((all.result as { case: { name: string; inputs: { outerDiameter: string } } }[]).map((d) => [d.case.name, d.case.inputs.outerDiameter]));
+          };
+        };
+      }),
+  );
+}
+
+test('a draft the store holds replaces the demo a device that seemed fresh opened before the store: nothing is lost', async ({ context }) => {
+  const first = await context.newPage();
+  await startOnDemo(first);
+  await first.locator('#case-name').fill('Skerry Alpha riser guide, unsaved');
+  await first.waitForTimeout(700); // the draft is written 400 ms after the last edit
+  await first.close();
+  // The same device with its localStorage and sessionStorage cleared but its database kept: nothing says there is
+  // work, so the demo opens at once; the store, once open, holds the closed tab's draft, and that is opened instead.
+  const second = await context.newPage();
+  await second.addInitScript(() => {
+    localStorage.clear();
+    sessionStorage.clear();
+  });
+  await second.addInitScript(slowStoreOpening, 1500);
+  await second.goto('/');
+  await expect(second.getByTestId('quick-wet')).toContainText('Hz'); // the demo's answer, before the store
+  await expect(second.locator('#case-name')).not.toHaveValue('Skerry Alpha riser guide, unsaved');
+  await expect(second.locator('#case-name')).toHaveValue('Skerry Alpha riser guide, unsaved', { timeout: 10_000 });
+  await expect(second).toHaveURL(/#\/member$/);
+  await expect(second.getByTestId('quick-wet')).toContainText('Hz');
+});
+
+test('edits typed into the demo before the store has opened are kept as a draft once it opens, and reopen', async ({ context }) => {
+  const page = await context.newPage();
+  await page.addInitScript(slowStoreOpening, 2500);
+  await page.goto('/');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.locator('[data-field="outerDiameter"] input').fill('1067 mm');
+  await page.locator('#case-name').fill('Typed before the store opened');
+  expect(await page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length)).toBe(0);
+  // Once the store is open, the edits are in it as this tab's draft (and the edited case stays open).
+  await expect.poll(() => storedDrafts(page), { timeout: 10_000 }).toContainEqual(['Typed before the store opened', '1067 mm']);
+  await expect(page.locator('#case-name')).toHaveValue('Typed before the store opened');
+  await page.close();
+  const next = await context.newPage();
+  await next.goto('/');
+  await expect(next.locator('#case-name')).toHaveValue('Typed before the store opened');
+  await expect(next.locator('[data-field="outerDiameter"] input')).toHaveValue('1067 mm');
+});
+
+test('Save pressed before the store has opened waits for it and saves the case, never saying storage is unavailable', async ({ page }) => {
+  await page.addInitScript(slowStoreOpening, 2000);
+  await page.goto('/');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  await page.locator('#case-name').fill('Marrow Creek intake pile, saved at once');
+  await page.getByRole('button', { name: 'Save case' }).click();
+  expect(await page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length)).toBe(0);
+  await expect(page.getByText('Saved on this device').first()).toBeVisible({ timeout: 10_000 });
+  await expect(page.getByText(/cannot be kept/)).toHaveCount(0);
+  await page.goto('/#/cases');
+  await expect(page.locator('li', { hasText: 'Marrow Creek intake pile, saved at once' }).first()).toBeVisible();
+});
+
+test('a reload shows the work it left before the store has opened, and it stays once the store agrees', async ({ page }) => {
+  await startOnDemo(page);
+  await page.locator('[data-field="outerDiameter"] input').fill('1219 mm');
+  await page.locator('#case-name').fill('Port Halloran dolphin, reloaded');
+  await page.addInitScript(slowStoreOpening, 2000);
+  await page.reload();
+  await expect(page.locator('#case-name')).toHaveValue('Port Halloran dolphin, reloaded');
+  await expect(page.getByTestId('quick-wet')).toContainText('Hz');
+  expect(await page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length)).toBe(0);
+  await expect.poll(() => page.evaluate(() => performance.getEntriesByName('wetmode:store-open').length), { timeout: 10_000 }).toBe(1);
+  await expect(page.locator('#case-name')).toHaveValue('Port Halloran dolphin, reloaded');
+  await expect(page.locator('[data-field="outerDiameter"] input')).toHaveValue('1219 mm');
+  await expect(page.getByText('Unsaved changes (kept as a draft)').first()).toBeVisible();
+});

@@ -42,4 +42,20 @@ describe('the open-case model', () => {
     expect(model.get().warnings.liquidDensity).toMatch(/^liquid density 1200 kg\/m³ is outside the usual 950 kg\/m³ to 1100 kg\/m³/);
     expect(model.get().results?.inputWarnings?.[0]).toMatch(/^Input check: Liquid density 1200 kg\/m³ is outside/);
   });
+
+  it('closing the open case (the early demo the store replaced by the Cases list) keeps no draft and ignores the answer still on its way', async () => {
+    let answer: (() => void) | null = null;
+    const held: Solver = { request: (req) => new Promise((resolve) => (answer = () => void inlineSolver.request(req).then(resolve))) };
+    const written: string[] = [];
+    const model = new AppModel(held, { saveDraft: async (c) => (written.push(c.name), { ok: true }) }, 0);
+    model.open(caseFromDemo(DEMO_CASES[0]), 'editing', false);
+    model.setField('topMass', '9 t'); // a draft is scheduled
+    model.close();
+    expect(model.get()).toMatchObject({ doc: null, results: null, computing: false, errors: {}, solverMessage: null });
+    answer!();
+    await new Promise((r) => setTimeout(r, 50));
+    expect(model.get().results).toBeNull();
+    expect(model.get().doc).toBeNull();
+    expect(written).toEqual([]); // the draft scheduled before the close was not written
+  });
 });

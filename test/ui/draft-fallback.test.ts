@@ -26,12 +26,12 @@ describe('the localStorage copy of a draft', () => {
     vi.stubGlobal('localStorage', memoryStorage());
     const doc = caseFromDemo(DEMO_CASES[0]);
     writeFallback('tab-1', doc, 3, false);
-    writeFallback('tab-2', { ...doc, name: 'received' }, null, true);
+    writeFallback('tab-2', { ...doc, name: 'received' }, null, true, true);
     localStorage.setItem('wetmode.theme', 'dark');
     const read = readFallbacks().sort((a, b) => a.tab.localeCompare(b.tab));
-    expect(read.map((f) => [f.tab, (f.case as { name: string }).name, f.baseRevision, f.received])).toEqual([
-      ['tab-1', doc.name, 3, false],
-      ['tab-2', 'received', null, true],
+    expect(read.map((f) => [f.tab, (f.case as { name: string }).name, f.baseRevision, f.received, f.leaving])).toEqual([
+      ['tab-1', doc.name, 3, false, false],
+      ['tab-2', 'received', null, true, true],
     ]);
     clearFallback('tab-1');
     expect(readFallbacks().map((f) => f.tab)).toEqual(['tab-2']);

@@ -9,6 +9,7 @@ import { saveOpenCase } from '../cases/open-case';
 import { kindOf } from '../../kinds/registry';
 import { isUntouchedStart } from '../cases/new-case';
 import { demoOf } from './defaults-in-use';
+import { storeOnceOpen } from '../state/early-boot';
 
 /** The low and high of each range with their bare numbers' unit pinned (see pin-units.ts). */
 function pinRangeUnits(fields: readonly FieldDef[], texts: RangeTexts, system: UnitSystem): RangeTexts {
@@ -20,7 +21,7 @@ function pinRangeUnits(fields: readonly FieldDef[], texts: RangeTexts, system: U
 
 /** Unit system toggle and Save, with what happened in words. */
 export function MemberToolbar({ state, model }: { state: ModelState; model: AppModel }) {
-  const { store } = useServices();
+  const { store, storeMessage } = useServices();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const doc = state.doc!;
   const setSystem = (to: UnitSystem) => {
@@ -35,11 +36,16 @@ export function MemberToolbar({ state, model }: { state: ModelState; model: AppM
     }));
   };
   const save = async () => {
-    if (!store) {
+    // Still opening (a first case opened early is on screen before its store): the save waits for it, and is
+    // dropped if the store's own first case (work left from before) replaced the one on screen meanwhile.
+    const shown = model.get().doc;
+    const opened = store ?? (storeMessage === null ? await storeOnceOpen() : null);
+    if (model.get().doc !== shown) return;
+    if (!opened) {
       setMessage({ ok: false, text: 'Cases cannot be kept on this device (storage is unavailable). Export the case as a file or copy its link instead.' });
       return;
     }
-    const r = await saveOpenCase(store, model);
+    const r = await saveOpenCase(opened, model);
     setMessage({ ok: r.ok, text: r.text });
   };
   const unsaved = model.unsaved();

@@ -142,6 +142,13 @@ export class AppModel {
     this.recompute();
   }
 
+  /** Closes the open case without keeping it (the boot's early demo on a device whose store turned out to hold cases). */
+  close(): void {
+    if (this.draftTimer !== null) clearTimeout(this.draftTimer);
+    this.draftTimer = null;
+    this.set({ doc: null, mode: 'editing', saved: null, errors: {}, excitationErrors: {}, warnings: {}, results: null, computing: false, solverMessage: null, baseRevision: null, conflict: null, elsewhere: null });
+  }
+
   /** A save was refused because the case was saved elsewhere meanwhile (null: the choice was made). */
   setConflict(conflict: Conflict | null): void {
     this.set({ conflict });
@@ -230,7 +237,7 @@ export class AppModel {
       .request(request)
       .catch((e: unknown): Answer<CaseAnswer> => ({ status: 'crashed', message: e instanceof Error ? e.message : String(e) }))
       .then((ans) => {
-      if (ans.status === 'superseded') return;
+      if (ans.status === 'superseded' || !this.state.doc) return; // closed meanwhile: nothing to show it on
       if (ans.status === 'done') {
         markOnce('wetmode:answer-received');
         const current = this.state.doc && contentKey(this.state.doc) === key;

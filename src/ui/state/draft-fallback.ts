@@ -14,11 +14,13 @@ export interface FallbackDraft {
   savedAt: string;
   baseRevision: number | null;
   received: boolean;
+  /** Written as the page went away for good (pagehide, not kept for back/forward), not merely hidden. */
+  leaving?: boolean;
 }
 
-export function writeFallback(tab: string, doc: Case, baseRevision: number | null, received: boolean): void {
+export function writeFallback(tab: string, doc: Case, baseRevision: number | null, received: boolean, leaving = false): void {
   try {
-    localStorage.setItem(PREFIX + tab, JSON.stringify({ savedAt: new Date().toISOString(), baseRevision, received, case: doc }));
+    localStorage.setItem(PREFIX + tab, JSON.stringify({ savedAt: new Date().toISOString(), baseRevision, received, leaving, case: doc }));
   } catch {
     /* storage full or off: the database draft is all there is */
   }
@@ -32,6 +34,12 @@ export function clearFallback(tab: string): void {
   }
 }
 
+/** Whether any tab left a copy (read without parsing; throws when localStorage cannot be read). */
+export function hasFallbacks(): boolean {
+  for (let i = 0; i < localStorage.length; i++) if (localStorage.key(i)?.startsWith(PREFIX)) return true;
+  return false;
+}
+
 /** Every copy left by any tab (unparsed cases: the store checks them). Damaged entries are removed. */
 export function readFallbacks(): FallbackDraft[] {
   const out: FallbackDraft[] = [];
@@ -43,7 +51,7 @@ export function readFallbacks(): FallbackDraft[] {
         const v = JSON.parse(localStorage.getItem(key) ?? '') as Partial<FallbackDraft>;
         if (typeof v.savedAt !== 'string') throw new Error('no time');
         const base = typeof v.baseRevision === 'number' ? v.baseRevision : null;
-        out.push({ tab: key.slice(PREFIX.length), case: v.case, savedAt: v.savedAt, baseRevision: base, received: v.received === true });
+        out.push({ tab: key.slice(PREFIX.length), case: v.case, savedAt: v.savedAt, baseRevision: base, received: v.received === true, leaving: v.leaving === true });
       } catch {
         localStorage.removeItem(key);
       }

@@ -4,7 +4,8 @@
  * the installed app opens a new tab). Only the case id is kept; the case itself is read from the store.
  * Storage switched off simply means nothing is remembered.
  */
-const KEY = 'wetmode.lastCase';
+export const LAST_CASE_KEY = 'wetmode.lastCase';
+const KEY = LAST_CASE_KEY;
 
 function put(area: () => Storage, id: string | null): void {
   try {

@@ -14,10 +14,12 @@ import { sectionModelOnDemand, type SectionModelOnDemand } from '../section/sect
 import type { SectionSolver } from '../section/section-solves';
 import { DEMO_CASES } from '../../kinds/registry';
 import { loadUnitReaderAfterFirstAnswer } from './read-on-demand';
+import { takeStartedSolver } from '../../worker/started-solver';
 
 export function createModel(): AppModel {
   const client = new SolverClient<CaseRequest, CaseAnswer>(
-    () => new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike,
+    // The first worker was started by the page's first script (src/start-solver.ts); a replacement is made here.
+    () => (takeStartedSolver() ?? new Worker(new URL('../../worker/solver.worker.ts', import.meta.url), { type: 'module' })) as unknown as WorkerLike,
   );
   client.start(); // the worker loads while the device store opens
   const model = new AppModel(client);
@@ -66,6 +68,8 @@ export interface FirstCase {
   mode: 'editing' | 'received';
   saved: boolean;
   baseRevision: number | null;
+  /** The demo, opened because the store holds nothing to reopen (or there is no store). */
+  demo?: true;
 }
 
 async function fromDraft(store: CaseStore, draft: Draft): Promise<FirstCase> {
@@ -84,7 +88,7 @@ async function fromDraft(store: CaseStore, draft: Draft): Promise<FirstCase> {
  * Never throws: a draft or list that cannot be read is passed over (and listed on the Cases screen).
  */
 export async function firstCase(store: CaseStore | null, fresh = false, liveTabs: Set<string> | null = null, lastCaseId: string | null = null): Promise<FirstCase | null> {
-  const demo = (): FirstCase => ({ doc: caseFromDemo(DEMO_CASES[0]), mode: 'editing', saved: false, baseRevision: null });
+  const demo = (): FirstCase => ({ doc: caseFromDemo(DEMO_CASES[0]), mode: 'editing', saved: false, baseRevision: null, demo: true });
   if (!store) return demo();
   try {
     const own = await store.loadDraft();

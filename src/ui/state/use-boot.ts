@@ -17,13 +17,14 @@ export function useBoot(openingLink: boolean): AppServices {
     const { services: made, settled } = bootOnce(openingLink);
     return settled ? { ...made, store: settled.store, storeMessage: settled.storeMessage, storeRetryable: settled.storeRetryable } : { ...made, store: null, storeMessage: null };
   });
+  // Whether the first render had the store's outcome: decided with the render, not in the effect after it (the
+  // store may open between the two, and the screens would then never hear of it).
+  const [mountedAfterBoot] = useState(() => bootOnce(openingLink).settled !== null);
   useEffect(() => {
     let cancelled = false;
     const { model, section, sectionSolver } = services;
     let tab = tabIdentity();
-    const started = bootOnce(openingLink);
-    const mountedAfterBoot = started.settled !== null;
-    void started.outcome.then((o) => {
+    void bootOnce(openingLink).outcome.then((o) => {
       tab = o.tab;
       // Mounted after the boot: the first render already had the store; another would redraw every screen for nothing.
       if (!cancelled && !mountedAfterBoot) setServices({ model, section, sectionSolver, store: o.store, storeMessage: o.storeMessage, storeRetryable: o.storeRetryable });
@@ -43,9 +44,12 @@ export function useBoot(openingLink: boolean): AppServices {
     remember(); // the boot may have opened the first case already
     const offUpdate = onBeforeUpdate(() => model.flushDraft({ everyCase: true }));
     // Synchronous: an IndexedDB write started here may never commit before the page is gone.
+    // Leaving for good (pagehide, not kept for back/forward): the next start may open this copy before its store is
+    // open. The page also turns hidden as it unloads, after pagehide: that copy keeps the mark.
+    let leaving = false;
     const keepCopy = () => {
       const { doc, mode, baseRevision } = model.get();
-      if (doc && mode === 'editing' && model.unsaved()) writeFallback(tab.id, doc, baseRevision, false);
+      if (doc && mode === 'editing' && model.unsaved()) writeFallback(tab.id, doc, baseRevision, false, leaving);
     };
     const onHide = () => {
       if (document.visibilityState === 'hidden') {
@@ -53,7 +57,8 @@ export function useBoot(openingLink: boolean): AppServices {
         void model.flushDraft();
       }
     };
-    const onPageHide = () => {
+    const onPageHide = (e: PageTransitionEvent) => {
+      leaving = !e.persisted;
       keepCopy();
       void model.flushDraft();
     };
