@@ -153,5 +153,7 @@ export function describeSeries({ cold, warm }: FirstLoadSeries): string {
     `first answer at 4x CPU throttle, cold: ${fig(cold)}`,
     `first answer at 4x CPU throttle, warm (service worker): ${fig(warm)}`,
     describeLoad('cold load', cold[0]),
+    `  warm load: first answer ${warm[0].firstAnswerMs.toFixed(0)} ms`,
+    `    steps (ms): ${warm[0].steps.map((s) => `${s.name} ${s.atMs.toFixed(0)}`).join(', ')}`,
   ].join('\n');
 }
