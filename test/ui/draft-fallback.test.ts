@@ -3,21 +3,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { DEMO_CASES } from '../../src/kinds/registry';
 import { clearFallback, readFallbacks, writeFallback } from '../../src/ui/state/draft-fallback';
 import { caseFromDemo } from '../../src/app/create-case';
-
-/** A Storage in memory (Node has no localStorage). */
-function memoryStorage(): Storage {
-  const m = new Map<string, string>();
-  return {
-    get length() {
-      return m.size;
-    },
-    key: (i: number) => [...m.keys()][i] ?? null,
-    getItem: (k: string) => m.get(k) ?? null,
-    setItem: (k: string, v: string) => void m.set(k, String(v)),
-    removeItem: (k: string) => void m.delete(k),
-    clear: () => m.clear(),
-  };
-}
+import { memoryStorage } from '../helpers/memory-storage';
 
 afterEach(() => vi.unstubAllGlobals());
 

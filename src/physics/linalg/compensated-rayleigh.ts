@@ -43,7 +43,7 @@ export function reReadRayleighQuotients(
   for (let v = 0; v < count; v++) {
     const x = vectors.subarray(v * n, (v + 1) * n);
     const mass = quadraticForm(m, x);
-    if (bound * absoluteQuadraticForm(k, x) <= tolerance * Math.abs(values[v]) * mass) continue;
+    if (bound * quadraticForm(k, x, true) <= tolerance * Math.abs(values[v]) * mass) continue;
     split ??= splitBanded(k);
     xh ??= new Float64Array(n);
     xl ??= new Float64Array(n);
@@ -51,21 +51,6 @@ export function reReadRayleighQuotients(
     reRead++;
   }
   return reRead;
-}
-
-/** Σ |a_ij·x_i·x_j| over the whole of a symmetric banded A: the size of the terms xᵀAx cancels. */
-function absoluteQuadraticForm(a: SymBanded, x: Float64Array): number {
-  const { n, halfBandwidth: b, data } = a;
-  const w = b + 1;
-  let s = 0;
-  for (let i = 0; i < n; i++) {
-    const row = i * w;
-    const last = Math.min(b, n - 1 - i);
-    let r = Math.abs(data[row] * x[i]);
-    for (let d = 1; d <= last; d++) r += 2 * Math.abs(data[row + d] * x[i + d]);
-    s += r * Math.abs(x[i]);
-  }
-  return s;
 }
 
 /** A banded matrix with each stored entry a = hi + lo (Dekker's split, off-diagonals doubled: they stand for both triangles). */
@@ -136,17 +121,23 @@ function compensatedQuadraticForm(split: SplitBanded, x: Float64Array, xh: Float
   return s + c;
 }
 
-/** xᵀAx of a symmetric banded A, summed plainly. */
-function quadraticForm(a: SymBanded, x: Float64Array): number {
+/**
+ * xᵀAx of a symmetric banded A, summed plainly; with `absolute`, Σ |a_ij·x_i·x_j| instead: the size of the
+ * terms that xᵀAx cancels.
+ */
+function quadraticForm(a: SymBanded, x: Float64Array, absolute = false): number {
   const { n, halfBandwidth: b, data } = a;
   const w = b + 1;
   let s = 0;
   for (let i = 0; i < n; i++) {
     const row = i * w;
     const last = Math.min(b, n - 1 - i);
-    let r = data[row] * x[i];
-    for (let d = 1; d <= last; d++) r += 2 * data[row + d] * x[i + d];
-    s += r * x[i];
+    let r = absolute ? Math.abs(data[row] * x[i]) : data[row] * x[i];
+    for (let d = 1; d <= last; d++) {
+      const t = 2 * data[row + d] * x[i + d];
+      r += absolute ? Math.abs(t) : t;
+    }
+    s += r * (absolute ? Math.abs(x[i]) : x[i]);
   }
   return s;
 }

@@ -9,21 +9,7 @@ import { writeFallback } from '../../../src/ui/state/draft-fallback';
 import { rememberOpenCase } from '../../../src/ui/state/last-case';
 import { caseFromDemo } from '../../../src/app/create-case';
 import { DEMO_CASES } from '../../../src/kinds/registry';
-
-/** A Storage in memory (Node has no localStorage). */
-function memoryStorage(): Storage {
-  const m = new Map<string, string>();
-  return {
-    get length() {
-      return m.size;
-    },
-    key: (i: number) => [...m.keys()][i] ?? null,
-    getItem: (k: string) => m.get(k) ?? null,
-    setItem: (k: string, v: string) => void m.set(k, String(v)),
-    removeItem: (k: string) => void m.delete(k),
-    clear: () => m.clear(),
-  };
-}
+import { memoryStorage } from '../../helpers/memory-storage';
 
 /** A Storage that throws on every use, as a browser with site data blocked does. */
 function blockedStorage(): Storage {

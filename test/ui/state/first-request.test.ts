@@ -4,20 +4,7 @@ import { likelyFirstRequest, rememberRequest } from '../../../src/ui/state/first
 import { caseFromDemo } from '../../../src/app/create-case';
 import { readCase, requestOf } from '../../../src/app/read-case';
 import { DEMO_CASES } from '../../../src/kinds/registry';
-
-function memoryStorage(): Storage {
-  const m = new Map<string, string>();
-  return {
-    get length() {
-      return m.size;
-    },
-    clear: () => m.clear(),
-    getItem: (k) => m.get(k) ?? null,
-    key: (i) => [...m.keys()][i] ?? null,
-    removeItem: (k) => void m.delete(k),
-    setItem: (k, v) => void m.set(k, String(v)),
-  };
-}
+import { memoryStorage } from '../../helpers/memory-storage';
 
 function demoRequest() {
   const r = readCase(caseFromDemo(DEMO_CASES[0]));
