@@ -26,6 +26,23 @@ for (const size of TABLET_SIZES) {
   });
 }
 
+test('a screen asked for the instant the first answer is drawn is the one shown (the route never misses a hash change)', async ({ page }) => {
+  // As the first answer enters the page, and before the page has painted or run its effects, the hash moves on to
+  // the Cases screen: the quickest tap a user (or a test) could make. The route must follow it.
+  await page.addInitScript(() => {
+    const watch = new MutationObserver(() => {
+      if (!/Hz/.test(document.querySelector('[data-testid="quick-wet"]')?.textContent ?? '')) return;
+      watch.disconnect();
+      location.hash = '#/cases';
+    });
+    watch.observe(document, { childList: true, subtree: true, characterData: true });
+  });
+  await page.goto('/');
+  await expect(page).toHaveURL(/#\/cases$/);
+  await expect(page.getByRole('heading', { level: 1, name: 'Cases' })).toBeVisible();
+  await expect(page.getByRole('button', { name: /^Riser or conductor/ })).toBeVisible();
+});
+
 test('every touch target in the navigation is at least 44 px high and wide', async ({ page }) => {
   await page.goto('/');
   const targets = page.locator('.topbar a, .topbar button, .caution-line a');

@@ -1,13 +1,21 @@
-import { useEffect, useState } from 'preact/hooks';
+import { useLayoutEffect, useState } from 'preact/hooks';
 import { parseHash, type Route } from './router';
 
 /** The current hash route, following back/forward and link clicks. */
 export function useRoute(): Route {
   const [route, setRoute] = useState<Route>(() => parseHash(location.hash));
-  useEffect(() => {
-    const onChange = () => setRoute(parseHash(location.hash));
+  // A layout effect subscribes before the first paint, and the hash is read again once subscribed: a hash changed
+  // between the first render and the subscription (a quick tap as the first screen appears) would otherwise be
+  // missed, leaving the screen on the old route for good.
+  useLayoutEffect(() => {
+    const onChange = () => setRoute((shown) => (sameRoute(shown, parseHash(location.hash)) ? shown : parseHash(location.hash)));
     addEventListener('hashchange', onChange);
+    onChange();
     return () => removeEventListener('hashchange', onChange);
   }, []);
   return route;
+}
+
+function sameRoute(a: Route, b: Route): boolean {
+  return a.screen === b.screen && (a.screen !== 'open' || (b.screen === 'open' && a.payload === b.payload));
 }
