@@ -8,7 +8,10 @@ export function useRoute(): Route {
   // between the first render and the subscription (a quick tap as the first screen appears) would otherwise be
   // missed, leaving the screen on the old route for good.
   useLayoutEffect(() => {
-    const onChange = () => setRoute((shown) => (sameRoute(shown, parseHash(location.hash)) ? shown : parseHash(location.hash)));
+    const onChange = () => {
+      const next = parseHash(location.hash);
+      setRoute((shown) => (sameRoute(shown, next) ? shown : next));
+    };
     addEventListener('hashchange', onChange);
     onChange();
     return () => removeEventListener('hashchange', onChange);
